@@ -1,0 +1,41 @@
+'use client';
+
+import Link from 'next/link';
+import { usePathname } from 'next/navigation';
+import type { NavItem } from '@/lib/navigation';
+
+export function NavLinks({ items }: { items: NavItem[] }) {
+  const pathname = usePathname();
+  const groups: Array<[NavItem['group'], string]> = [
+    ['work', 'Work'],
+    ['admin', 'Administration'],
+  ];
+  return (
+    <nav aria-label="Main" className="flex-1 overflow-x-auto md:overflow-visible flex md:block gap-1 px-2 md:px-3 py-2">
+      {groups.map(([group, title]) => {
+        const entries = items.filter((i) => i.group === group);
+        if (!entries.length) return null;
+        return (
+          <div key={group} className="flex md:block gap-1 md:mb-4">
+            <p className="hidden md:block px-3 pb-1 text-xs uppercase tracking-wider text-paper-line/60">{title}</p>
+            {entries.map((item) => {
+              const active = item.href === '/' ? pathname === '/' : pathname.startsWith(item.href);
+              return (
+                <Link
+                  key={item.href}
+                  href={item.href}
+                  aria-current={active ? 'page' : undefined}
+                  className={`block whitespace-nowrap rounded-md px-3 py-2.5 min-h-11 ${
+                    active ? 'bg-forge text-white' : 'text-paper hover:bg-ink-soft'
+                  }`}
+                >
+                  {item.label}
+                </Link>
+              );
+            })}
+          </div>
+        );
+      })}
+    </nav>
+  );
+}

@@ -1,0 +1,64 @@
+'use client';
+
+import { Field, Form, Formik } from 'formik';
+import { useState } from 'react';
+import * as yup from 'yup';
+import { DISPLAY_UNITS, type SettingsDto } from '@/server/schemas/settings';
+import { apiFetch } from '../../../_components/api-client';
+import { FormField, FormMessage } from '../../../_components/form-field';
+
+const schema = yup.object({
+  siteName: yup.string().trim().max(120).required('Site name is required'),
+  displayUnit: yup.string().oneOf([...DISPLAY_UNITS]).required(),
+  defaultPieceSpread: yup.number().typeError('A number, e.g. 0.02').moreThan(0, 'Must be above 0').max(0.5, 'At most 0.5').required(),
+  stabilityWindowMs: yup.number().typeError('A whole number of ms').integer().min(200, 'At least 200 ms').max(10000, 'At most 10 s').required(),
+  varianceThresholdPct: yup.number().typeError('A number').min(0).max(100).required(),
+  varianceThresholdPcs: yup.number().typeError('A whole number').integer().min(0).required(),
+});
+
+export function SettingsForm({ initial }: { initial: SettingsDto }) {
+  const [current, setCurrent] = useState(initial);
+  const [message, setMessage] = useState<string | null>(null);
+  const [saved, setSaved] = useState(false);
+  return (
+    <Formik
+      initialValues={current}
+      enableReinitialize
+      validationSchema={schema}
+      onSubmit={async (values, helpers) => {
+        setMessage(null);
+        setSaved(false);
+        const body = { ...values, defaultPieceSpread: Number(values.defaultPieceSpread), stabilityWindowMs: Number(values.stabilityWindowMs), varianceThresholdPct: Number(values.varianceThresholdPct), varianceThresholdPcs: Number(values.varianceThresholdPcs), version: current.version };
+        const res = await apiFetch<{ settings: SettingsDto }>('/api/v1/settings', { method: 'PATCH', body });
+        if (res.ok) {
+          setCurrent(res.data.settings);
+          setSaved(true);
+        } else {
+          helpers.setErrors(res.fields);
+          setMessage(res.message);
+        }
+      }}
+    >
+      {({ isSubmitting }) => (
+        <Form noValidate className="card space-y-4">
+          <FormField name="siteName" label="Site name" />
+          <div>
+            <label htmlFor="f-displayUnit" className="field-label">Display unit</label>
+            <Field as="select" id="f-displayUnit" name="displayUnit" className="field">
+              {DISPLAY_UNITS.map((u) => <option key={u} value={u}>{u}</option>)}
+            </Field>
+          </div>
+          <FormField name="defaultPieceSpread" label="Default piece-weight spread (coefficient of variation)" inputMode="decimal" hint="Used until a part has learned its own; 0.02 means pieces typically differ by 2 % (common practice for stamped and machined fasteners)." />
+          <FormField name="stabilityWindowMs" label="Stability window (ms)" inputMode="numeric" hint="A reading counts as steady when it stays within one division for this long." />
+          <div className="grid gap-4 sm:grid-cols-2">
+            <FormField name="varianceThresholdPct" label="Variance needing approval (%)" inputMode="decimal" />
+            <FormField name="varianceThresholdPcs" label="Variance needing approval (pieces)" inputMode="numeric" />
+          </div>
+          <FormMessage message={message} />
+          <p role="status" aria-live="polite" className="text-sm text-ok">{saved ? 'Saved.' : ''}</p>
+          <button type="submit" className="btn-primary" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Save settings'}</button>
+        </Form>
+      )}
+    </Formik>
+  );
+}

@@ -1,0 +1,101 @@
+'use client';
+
+import type { ColDef, ICellRendererParams } from 'ag-grid-community';
+import { useState } from 'react';
+import { ROLE_LABELS, ROLES, type Role } from '@/lib/roles';
+import type { UserDto } from '@/server/schemas/users';
+import { apiFetch } from '../../../_components/api-client';
+import { DataGrid } from '../../../_components/data-grid';
+import { InviteForm } from './invite-form';
+
+const STATUS_STYLE: Record<UserDto['status'], string> = {
+  active: 'bg-ok-light text-ok',
+  invited: 'bg-brass-light text-brass-dark',
+  inactive: 'bg-paper-deep text-ink-faint',
+};
+
+export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; meId: number }) {
+  const [users, setUsers] = useState(initialUsers);
+  const [filter, setFilter] = useState('');
+  const [notice, setNotice] = useState<string | null>(null);
+
+  const replace = (u: UserDto) => setUsers((list) => list.map((x) => (x.id === u.id ? u : x)));
+
+  async function patch(user: UserDto, change: { role?: Role; active?: boolean }) {
+    const res = await apiFetch<{ user: UserDto }>(`/api/v1/users/${user.id}`, { method: 'PATCH', body: { ...change, version: user.version } });
+    if (res.ok) {
+      replace(res.data.user);
+      setNotice(`${res.data.user.name}: saved.`);
+    } else setNotice(res.message);
+  }
+
+  async function resend(user: UserDto) {
+    const res = await apiFetch<{ mail: string }>(`/api/v1/users/${user.id}/invitation`, { method: 'POST' });
+    setNotice(res.ok ? `A new invitation went to ${user.email} (${res.data.mail}).` : res.message);
+  }
+
+  const columns: ColDef<UserDto>[] = [
+    { field: 'name', headerName: 'Name', minWidth: 160 },
+    { field: 'email', headerName: 'E-mail', minWidth: 220 },
+    {
+      field: 'role',
+      headerName: 'Role',
+      minWidth: 200,
+      cellRenderer: (p: ICellRendererParams<UserDto>) =>
+        p.data && p.data.id !== meId ? (
+          <select aria-label={`Role of ${p.data.name}`} className="field min-h-9 py-0" value={p.data.role} onChange={(e) => patch(p.data!, { role: e.target.value as Role })}>
+            {ROLES.map((r) => (
+              <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+            ))}
+          </select>
+        ) : (
+          <span>{p.data ? ROLE_LABELS[p.data.role] : ''} (you)</span>
+        ),
+    },
+    {
+      field: 'status',
+      headerName: 'Status',
+      maxWidth: 140,
+      cellRenderer: (p: ICellRendererParams<UserDto>) => (p.data ? <span className={`rounded px-2 py-1 text-sm ${STATUS_STYLE[p.data.status]}`}>{p.data.status}</span> : null),
+    },
+    {
+      headerName: 'Actions',
+      sortable: false,
+      filter: false,
+      minWidth: 260,
+      cellRenderer: (p: ICellRendererParams<UserDto>) => {
+        const u = p.data;
+        if (!u || u.id === meId) return null;
+        return (
+          <span className="flex gap-2 items-center h-full">
+            {u.active ? (
+              <button type="button" className="text-fault hover:underline" onClick={() => patch(u, { active: false })}>Switch off</button>
+            ) : (
+              <button type="button" className="text-forge hover:underline" onClick={() => patch(u, { active: true })}>Switch on</button>
+            )}
+            {u.status === 'invited' ? (
+              <button type="button" className="text-forge hover:underline" onClick={() => resend(u)}>Send link again</button>
+            ) : null}
+          </span>
+        );
+      },
+    },
+  ];
+
+  return (
+    <div className="space-y-4">
+      <InviteForm
+        onInvited={(user, mail) => {
+          setUsers((list) => [...list, user].sort((a, b) => a.name.localeCompare(b.name)));
+          setNotice(mail === 'sent' ? `Invitation sent to ${user.email}.` : `${user.name} was added, but the e-mail failed; send the link again.`);
+        }}
+      />
+      <p role="status" aria-live="polite" className="min-h-6 text-sm text-ink-soft" data-testid="people-notice">{notice}</p>
+      <div className="flex items-center gap-3">
+        <label htmlFor="people-filter" className="text-sm text-ink-soft">Find</label>
+        <input id="people-filter" className="field max-w-xs" value={filter} onChange={(e) => setFilter(e.target.value)} placeholder="Name, e-mail or role" />
+      </div>
+      <DataGrid label="People" rows={users} columns={columns} rowId={(u) => String(u.id)} quickFilter={filter} />
+    </div>
+  );
+}

@@ -1,0 +1,44 @@
+'use client';
+
+import { AllCommunityModule, ModuleRegistry, themeQuartz, type ColDef, type GetRowIdParams } from 'ag-grid-community';
+import { AgGridReact } from 'ag-grid-react';
+
+ModuleRegistry.registerModules([AllCommunityModule]);
+
+// Grid styling in Tallyforge's palette; roomy rows for touch screens at the bench.
+const tallyTheme = themeQuartz.withParams({
+  accentColor: '#1f5a70',
+  backgroundColor: '#fffdf8',
+  foregroundColor: '#182229',
+  headerBackgroundColor: '#ebe5d8',
+  borderColor: '#ddd6c8',
+  rowHeight: 48,
+  headerHeight: 44,
+  fontFamily: 'var(--font-sans)',
+  fontSize: 15,
+});
+
+interface DataGridProps<T> {
+  rows: T[];
+  columns: ColDef<T>[];
+  rowId: (row: T) => string;
+  height?: number | string;
+  quickFilter?: string;
+  label: string;
+}
+
+export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, label }: DataGridProps<T>) {
+  return (
+    <div style={{ height }} aria-label={label} role="region">
+      <AgGridReact<T>
+        theme={tallyTheme}
+        rowData={rows}
+        columnDefs={columns}
+        getRowId={(p: GetRowIdParams<T>) => rowId(p.data)}
+        quickFilterText={quickFilter}
+        defaultColDef={{ sortable: true, filter: true, resizable: true, flex: 1, minWidth: 110 }}
+        animateRows={false}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,33 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+// One row (id 1) of shop-wide defaults.
+export class SiteSettings extends Model<InferAttributes<SiteSettings>, InferCreationAttributes<SiteSettings>> {
+  declare id: CreationOptional<number>;
+  declare siteName: string;
+  declare displayUnit: string;
+  declare defaultPieceSpread: string;
+  declare stabilityWindowMs: number;
+  declare varianceThresholdPct: string;
+  declare varianceThresholdPcs: number;
+  declare version: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    SiteSettings.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, defaultValue: 1 },
+        siteName: { type: DataTypes.STRING(120), allowNull: false },
+        displayUnit: { type: DataTypes.STRING(4), allowNull: false },
+        defaultPieceSpread: { type: DataTypes.DECIMAL(6, 4), allowNull: false },
+        stabilityWindowMs: { type: DataTypes.INTEGER, allowNull: false },
+        varianceThresholdPct: { type: DataTypes.DECIMAL(6, 2), allowNull: false },
+        varianceThresholdPcs: { type: DataTypes.INTEGER, allowNull: false },
+        version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'site_settings', version: true },
+    );
+  }
+}

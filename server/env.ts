@@ -1,0 +1,38 @@
+import 'server-only';
+import { z } from 'zod';
+
+// The one parse of the process environment. Scripts and the app both read it through here.
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('production'),
+  DB_HOST: z.string().default('127.0.0.1'),
+  DB_PORT: z.coerce.number().int().positive().default(3307),
+  DB_NAME: z.string().min(1).default('tallyforge'),
+  DB_USER: z.string().min(1).default('tallyforge'),
+  DB_PASSWORD: z.string().min(1, 'DB_PASSWORD is required (npm start generates one)'),
+  DB_POOL_MAX: z.coerce.number().int().positive().default(10),
+  SESSION_SECRET: z.string().min(32, 'SESSION_SECRET must be at least 32 characters'),
+  // Set when the app is reached over https (directly or behind a proxy): cookies get Secure.
+  SECURE_COOKIES: z.enum(['0', '1']).default('0'),
+  APP_URL: z.string().url().default('http://localhost:3000'),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().positive().default(2525),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().default('Tallyforge <tallyforge@localhost>'),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+let cached: Env | undefined;
+
+export function getEnv(): Env {
+  if (!cached) {
+    const parsed = envSchema.safeParse(process.env);
+    if (!parsed.success) {
+      const lines = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
+      throw new Error(`Invalid environment:\n${lines.join('\n')}`);
+    }
+    cached = parsed.data;
+  }
+  return cached;
+}

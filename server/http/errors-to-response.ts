@@ -1,0 +1,36 @@
+import 'server-only';
+import { UniqueConstraintError, OptimisticLockError, ConnectionError, ValidationError, ForeignKeyConstraintError } from 'sequelize';
+import { ZodError } from 'zod';
+import { AppError } from '../errors';
+import { zodFields } from './zod-fields';
+
+export interface ErrorBody {
+  error: { code: string; message: string; fields?: Record<string, string> };
+}
+
+// Maps any thrown value to the JSON error shape. Unknown errors become a generic 500:
+// no stack traces or SQL ever reach the body.
+export function toAppError(err: unknown): AppError {
+  if (err instanceof AppError) return err;
+  if (err instanceof ZodError) return new AppError('validation_failed', 'Some fields need attention', { fields: zodFields(err) });
+  if (err instanceof UniqueConstraintError) {
+    const fields = Object.fromEntries((err.errors ?? []).map((e) => [e.path ?? 'value', 'is already taken']));
+    return new AppError('duplicate', 'A record with that value already exists', { fields });
+  }
+  if (err instanceof OptimisticLockError) return new AppError('stale_version', 'Someone else changed this record; reload and try again');
+  if (err instanceof ForeignKeyConstraintError) return new AppError('conflict', 'A related record is missing or still in use');
+  if (err instanceof ValidationError) {
+    const fields = Object.fromEntries(err.errors.map((e) => [e.path ?? 'value', e.message]));
+    return new AppError('validation_failed', 'Some fields need attention', { fields });
+  }
+  if (err instanceof ConnectionError) return new AppError('unavailable', 'The database is not reachable right now; try again shortly');
+  return new AppError('internal', 'Something went wrong on our side');
+}
+
+export function errorResponse(err: unknown): Response {
+  const appError = toAppError(err);
+  if (appError.code === 'internal' || appError.code === 'unavailable') console.error('[api]', err);
+  const body: ErrorBody = { error: { code: appError.code, message: appError.message } };
+  if (appError.fields && Object.keys(appError.fields).length) body.error.fields = appError.fields;
+  return Response.json(body, { status: appError.status, headers: appError.headers });
+}

@@ -1,0 +1,73 @@
+import 'server-only';
+import type { NextRequest } from 'next/server';
+import type { z } from 'zod';
+import type { Permission } from '@/lib/roles';
+import { requirePermission, requireUser } from '../auth/authorize';
+import { getCurrentUser, type SessionUser } from '../auth/session';
+import { AppError } from '../errors';
+import { errorResponse } from './errors-to-response';
+import { rejectCrossSite } from './reject-cross-site';
+import { zodFields } from './zod-fields';
+
+type Access = Permission | 'signed-in' | 'public';
+type Parsed<S> = S extends z.ZodType ? z.infer<S> : undefined;
+
+interface RouteSpec<A extends Access, B, Q, P> {
+  access: A;
+  body?: B;
+  query?: Q;
+  params?: P;
+}
+
+export interface RouteContext<A extends Access, B, Q, P> {
+  req: NextRequest;
+  user: A extends 'public' ? SessionUser | null : SessionUser;
+  body: Parsed<B>;
+  query: Parsed<Q>;
+  params: Parsed<P>;
+}
+
+// Thin wrapper: reject cross-site writes, authorize, parse with zod, run one service, answer.
+// A handler returns a Response, a plain object (200 JSON) or nothing (204).
+export function route<A extends Access, B extends z.ZodType | undefined = undefined, Q extends z.ZodType | undefined = undefined, P extends z.ZodType | undefined = undefined>(
+  spec: RouteSpec<A, B, Q, P>,
+  handler: (ctx: RouteContext<A, B, Q, P>) => Promise<unknown>,
+) {
+  return async (req: NextRequest, ctx: { params: Promise<Record<string, string | string[]>> }): Promise<Response> => {
+    try {
+      rejectCrossSite(req);
+      const user =
+        spec.access === 'public' ? await getCurrentUser() : spec.access === 'signed-in' ? await requireUser() : await requirePermission(spec.access as Permission);
+      const params = parseWith(spec.params, await ctx.params, 'Bad address');
+      const query = parseWith(spec.query, Object.fromEntries(req.nextUrl.searchParams), 'Bad query');
+      const body = spec.body ? parseWith(spec.body, await readJson(req), 'Some fields need attention') : undefined;
+      const result = await handler({ req, user, body, query, params } as RouteContext<A, B, Q, P>);
+      if (result instanceof Response) return result;
+      if (result === undefined) return new Response(null, { status: 204 });
+      return Response.json(result);
+    } catch (err) {
+      return errorResponse(err);
+    }
+  };
+}
+
+function parseWith(schema: z.ZodType | undefined, value: unknown, message: string): unknown {
+  if (!schema) return undefined;
+  const parsed = schema.safeParse(value);
+  if (!parsed.success) throw new AppError('validation_failed', message, { fields: zodFields(parsed.error) });
+  return parsed.data;
+}
+
+async function readJson(req: NextRequest): Promise<unknown> {
+  const text = await req.text();
+  if (!text.trim()) return {};
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new AppError('invalid_json', 'The request body is not valid JSON');
+  }
+}
+
+export function created(data: unknown): Response {
+  return Response.json(data, { status: 201 });
+}

@@ -1,0 +1,39 @@
+import 'server-only';
+import { MailMessage } from '@/models';
+import type { MailStatus } from '@/models/mail-message';
+import { getDb } from '../db';
+import { getEnv } from '../env';
+import { getTransport } from './transport';
+
+export interface OutgoingMail {
+  kind: string;
+  to: string[];
+  subject: string;
+  text: string;
+}
+
+// Logs the message, then sends it. Call after the business transaction commits: a mail
+// failure is recorded on the log row and never undoes the change that caused it.
+export async function sendMail(mail: OutgoingMail): Promise<MailStatus> {
+  getDb();
+  if (!mail.to.length) return 'sent';
+  const row = await MailMessage.create({
+    kind: mail.kind,
+    toAddress: mail.to.join(', '),
+    subject: mail.subject,
+    bodyText: mail.text,
+    status: 'queued',
+    error: null,
+    sentAt: null,
+  });
+  try {
+    await getTransport().sendMail({ from: getEnv().MAIL_FROM, to: mail.to, subject: mail.subject, text: mail.text });
+    await row.update({ status: 'sent', sentAt: new Date() });
+    return 'sent';
+  } catch (err) {
+    const message = err instanceof Error ? err.message : String(err);
+    await row.update({ status: 'failed', error: message.slice(0, 500) });
+    console.error('[mail] send failed', mail.kind, message);
+    return 'failed';
+  }
+}

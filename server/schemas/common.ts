@@ -1,0 +1,18 @@
+import { z } from 'zod';
+
+export const emailSchema = z
+  .string({ error: 'E-mail is required' })
+  .trim()
+  .toLowerCase()
+  .pipe(z.email({ error: 'Enter a valid e-mail address' }).max(254, { error: 'At most 254 characters' }));
+
+export const idParamSchema = z.object({
+  id: z.coerce.number({ error: 'Not a record id' }).int({ error: 'Not a record id' }).positive({ error: 'Not a record id' }),
+});
+
+export const versionSchema = z.number({ error: 'version is required (the one you loaded)' }).int().min(0);
+
+export const pagingSchema = z.object({
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(500).default(100),
+});

@@ -1,0 +1,32 @@
+import 'server-only';
+import { Op } from 'sequelize';
+import { PasswordToken, User } from '@/models';
+import { hashPassword } from '../../auth/passwords';
+import type { SessionUser } from '../../auth/session';
+import { getDb } from '../../db';
+import { AppError } from '../../errors';
+import type { AcceptInvitationInput } from '../../schemas/session';
+import { hashToken } from './issue-password-token';
+
+// Sets the password from a one-time link. The token row is locked, so a double submit uses it once.
+export async function acceptInvitation({ token, password }: AcceptInvitationInput): Promise<SessionUser> {
+  const db = getDb();
+  const passwordHash = await hashPassword(password);
+  return db.transaction(async (transaction) => {
+    const row = await PasswordToken.findOne({
+      where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
+    const user = row ? await User.findByPk(row.userId, { transaction, lock: transaction.LOCK.UPDATE }) : null;
+    if (!row || !user || !user.active) {
+      throw new AppError('rule_violated', 'This link has expired or was already used; ask an administrator for a new one', {
+        fields: { token: 'expired or already used' },
+      });
+    }
+    await row.update({ usedAt: new Date() }, { transaction });
+    user.passwordHash = passwordHash;
+    await user.save({ transaction });
+    return { id: user.id, email: user.email, name: user.name, role: user.role };
+  });
+}

@@ -1,0 +1,90 @@
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import path from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { ROLES, type Role } from '../../lib/roles';
+import { anonymous, signedIn, type Agent } from '../helpers/http';
+
+type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+interface Entry {
+  method: Method;
+  route: string; // the file-system pattern under app/
+  allowed: readonly Role[] | 'public';
+  // A request that passes authorization must never write: bodies here are empty or invalid on purpose.
+  path?: string;
+  body?: unknown;
+  // The request ends the session it was sent with, so it gets its own agent.
+  endsSession?: boolean;
+}
+
+const everyone = ROLES;
+const admin: Role[] = ['admin'];
+
+// Every route handler, and who may call it. Add each new route here (see DEVELOPERS.md).
+const MATRIX: Entry[] = [
+  { method: 'GET', route: '/api/v1/health', allowed: 'public' },
+  { method: 'POST', route: '/api/v1/session', allowed: 'public', body: {} },
+  { method: 'GET', route: '/api/v1/session', allowed: 'public' },
+  { method: 'DELETE', route: '/api/v1/session', allowed: 'public', endsSession: true },
+  { method: 'POST', route: '/api/v1/invitations/accept', allowed: 'public', body: {} },
+  { method: 'GET', route: '/api/v1/users', allowed: admin },
+  { method: 'POST', route: '/api/v1/users', allowed: admin, body: {} },
+  { method: 'PATCH', route: '/api/v1/users/[id]', allowed: admin, path: '/api/v1/users/999999', body: {} },
+  { method: 'POST', route: '/api/v1/users/[id]/invitation', allowed: admin, path: '/api/v1/users/999999/invitation' },
+  { method: 'GET', route: '/api/v1/mail', allowed: admin },
+  { method: 'GET', route: '/api/v1/settings', allowed: everyone },
+  { method: 'PATCH', route: '/api/v1/settings', allowed: admin, body: {} },
+];
+
+function routeFiles(dir: string): string[] {
+  return readdirSync(dir).flatMap((name) => {
+    const full = path.join(dir, name);
+    if (statSync(full).isDirectory()) return routeFiles(full);
+    return name === 'route.ts' ? [full] : [];
+  });
+}
+
+const appDir = path.resolve(__dirname, '../../app');
+const declared = routeFiles(path.join(appDir, 'api')).flatMap((file) => {
+  const route = '/' + path.relative(appDir, path.dirname(file)).split(path.sep).filter((s) => !s.startsWith('(')).join('/');
+  const methods = [...readFileSync(file, 'utf8').matchAll(/export const (GET|POST|PATCH|PUT|DELETE)\b/g)].map((m) => m[1]);
+  return methods.map((method) => `${method} ${route}`);
+});
+
+function send(agent: Agent, e: Entry) {
+  const url = e.path ?? e.route;
+  const req = agent[e.method.toLowerCase() as 'get' | 'post' | 'patch' | 'put' | 'delete'](url);
+  return e.body === undefined ? req : req.send(e.body as object);
+}
+
+describe('role matrix', () => {
+  it('lists every route handler that exists, and only those', () => {
+    expect(MATRIX.map((e) => `${e.method} ${e.route}`).sort()).toEqual([...declared].sort());
+  });
+
+  const agents = new Map<Role, Agent>();
+  beforeAll(async () => {
+    for (const role of ROLES) agents.set(role, (await signedIn(role)).agent);
+  });
+
+  for (const entry of MATRIX) {
+    const label = `${entry.method} ${entry.route}`;
+    it(`${label}: signed out gets ${entry.allowed === 'public' ? 'through' : '401'}`, async () => {
+      const res = await send(anonymous(), entry);
+      if (entry.allowed === 'public') expect(res.status).not.toBe(403);
+      else expect(res.status).toBe(401);
+    });
+
+    for (const role of ROLES) {
+      const allowed = entry.allowed === 'public' || entry.allowed.includes(role);
+      it(`${label}: ${role} ${allowed ? 'gets through' : 'gets 403'}`, async () => {
+        const agent = entry.endsSession ? (await signedIn(role)).agent : agents.get(role)!;
+        const res = await send(agent, entry);
+        if (allowed) expect([401, 403]).not.toContain(res.status);
+        else {
+          expect(res.status).toBe(403);
+          expect(res.body.error.code).toBe('forbidden');
+        }
+      });
+    }
+  }
+});

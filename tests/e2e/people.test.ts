@@ -1,0 +1,48 @@
+import type { BrowserContext } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { unique } from '../helpers/db';
+import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
+import { waitForMail } from '../helpers/mail';
+
+describe('people (browser)', () => {
+  let admin: BrowserContext;
+  let newcomer: BrowserContext;
+  beforeAll(async () => {
+    admin = await openBrowser();
+    newcomer = await openBrowser({ width: 800, height: 1280 });
+  });
+  afterAll(async () => {
+    await admin.close();
+    await newcomer.close();
+  });
+
+  it('an admin invites a clerk, who follows the e-mailed link, chooses a password and lands on Today', async () => {
+    const page = await admin.newPage();
+    await signInThroughPage(page, 'admin');
+    await page.getByRole('link', { name: 'People' }).click();
+    await page.waitForURL('**/admin/users');
+    const email = `${unique('rosa')}@example.test`;
+    const form = page.getByRole('form', { name: 'Invite someone' });
+    await form.getByRole('button', { name: 'Send invitation' }).click();
+    await expect.poll(() => form.getByText('Name is required').isVisible()).toBe(true);
+    await form.getByLabel('Name').fill('Rosa Lindqvist');
+    await form.getByLabel('E-mail').fill(email);
+    await form.getByLabel('Role').selectOption('clerk');
+    await form.getByRole('button', { name: 'Send invitation' }).click();
+    await expect.poll(() => page.getByTestId('people-notice').textContent()).toContain(`Invitation sent to ${email}`);
+    await expect.poll(() => page.getByRole('gridcell', { name: email }).count()).toBe(1);
+    await screenshot(page, 'people-invited');
+
+    const [mail] = await waitForMail(email);
+    const link = mail.text.match(/https?:\/\/\S+\/set-password\?token=\S+/)![0];
+    const tab = await newcomer.newPage();
+    await tab.goto(link);
+    await tab.getByLabel('New password').fill('my own long secret');
+    await tab.getByLabel('Same password again').fill('my own long secret');
+    await screenshot(tab, 'set-password-tablet');
+    await tab.getByRole('button', { name: 'Save and sign in' }).click();
+    await tab.waitForURL((url) => url.pathname === '/');
+    expect(await tab.getByText('Stockroom clerk').first().isVisible()).toBe(true);
+    await screenshot(tab, 'today-clerk-tablet');
+  });
+});

@@ -1,0 +1,54 @@
+import type { BrowserContext } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { navFor } from '../../lib/navigation';
+import { ROLE_LABELS, ROLES } from '../../lib/roles';
+import { createUser } from '../helpers/db';
+import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
+
+describe('signing in (browser)', () => {
+  let browser: BrowserContext;
+  beforeAll(async () => {
+    browser = await openBrowser();
+  });
+  afterAll(async () => {
+    await browser.close();
+  });
+
+  it('sends a signed-out visitor to the sign-in page and back to where they were going', async () => {
+    const page = await browser.newPage();
+    await page.goto('/admin/users');
+    expect(new URL(page.url()).pathname).toBe('/sign-in');
+    await screenshot(page, 'sign-in');
+    const user = await createUser('admin');
+    await page.getByLabel('E-mail').fill(user.email);
+    await page.getByLabel('Password').fill('wrong password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect.poll(() => page.getByRole('status').first().textContent()).toMatch(/do not match/);
+    await screenshot(page, 'sign-in-wrong-password');
+    await page.close();
+  });
+
+  for (const role of ROLES) {
+    it(`signs in as ${role} and lands on Today with the ${role}'s navigation`, async () => {
+      const page = await browser.newPage();
+      const { name } = await signInThroughPage(page, role);
+      await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toContain(name.split(' ')[0]);
+      expect(await page.getByText(ROLE_LABELS[role]).first().isVisible()).toBe(true);
+      const links = await page.getByRole('navigation', { name: 'Main' }).getByRole('link').allTextContents();
+      expect(links).toEqual(navFor(role).map((i) => i.label));
+      await screenshot(page, `today-${role}`);
+      await page.getByRole('button', { name: 'Sign out' }).first().click();
+      await page.waitForURL((url) => url.pathname === '/sign-in');
+      await page.close();
+    });
+  }
+
+  it('shows a role without the right an explanation instead of the page', async () => {
+    const page = await browser.newPage();
+    await signInThroughPage(page, 'operator');
+    await page.goto('/admin/users');
+    await page.waitForURL((url) => url.pathname === '/forbidden');
+    expect(await page.getByTestId('forbidden').textContent()).toMatch(/Manage scales' profiles, users and site settings/i);
+    await page.close();
+  });
+});

@@ -1,0 +1,37 @@
+// Debian's Chromium driven by playwright-core; each test gets a fresh profile.
+import { mkdirSync, mkdtempSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import type { Role } from '../../lib/roles';
+import { createUser, TEST_PASSWORD } from './db';
+import { baseUrl } from './http';
+
+export const SCREENSHOT_DIR = path.resolve(__dirname, '../../test-results/screenshots');
+
+export async function openBrowser(viewport = { width: 1280, height: 800 }): Promise<BrowserContext> {
+  const profile = mkdtempSync(path.join(os.tmpdir(), 'tallyforge-chromium-'));
+  return chromium.launchPersistentContext(profile, {
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    viewport,
+    baseURL: baseUrl(),
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+}
+
+export async function screenshot(page: Page, name: string): Promise<void> {
+  mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`), fullPage: true });
+}
+
+// Signs in through the sign-in page, as a person would.
+export async function signInThroughPage(page: Page, role: Role): Promise<{ email: string; name: string }> {
+  const user = await createUser(role, { name: `Dana ${role[0].toUpperCase()}${role.slice(1)}` });
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(user.email);
+  await page.getByLabel('Password').fill(TEST_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL((url) => url.pathname === '/');
+  return { email: user.email, name: user.name };
+}

@@ -1,0 +1,67 @@
+// Starts the local SMTP sink and one production `next start` against the test database,
+// and hands their addresses to the tests. `npm test` has already migrated and built.
+import { spawn, type ChildProcess } from 'node:child_process';
+import { mkdtempSync } from 'node:fs';
+import { createServer } from 'node:net';
+import os from 'node:os';
+import path from 'node:path';
+import type { TestProject } from 'vitest/node';
+import { startSmtpSink, type SmtpSink } from '../../scripts/fakes/smtp-sink';
+import './test-env';
+
+const root = path.resolve(__dirname, '../..');
+
+export async function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const srv = createServer();
+    srv.once('error', reject);
+    srv.listen(0, '127.0.0.1', () => {
+      const port = (srv.address() as { port: number }).port;
+      srv.close(() => resolve(port));
+    });
+  });
+}
+
+export async function startApp(env: Record<string, string>): Promise<{ url: string; child: ChildProcess }> {
+  const port = await freePort();
+  const url = `http://127.0.0.1:${port}`;
+  const child = spawn(path.join(root, 'node_modules/.bin/next'), ['start', '-p', String(port), '-H', '127.0.0.1'], {
+    cwd: root,
+    env: { ...process.env, APP_URL: url, ...env, PORT: String(port) },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let output = '';
+  child.stdout?.on('data', (d) => (output += d));
+  child.stderr?.on('data', (d) => (output += d));
+  for (let i = 0; i < 200; i++) {
+    if (child.exitCode !== null) throw new Error(`next start exited early:\n${output}`);
+    try {
+      const res = await fetch(`${url}/api/v1/health`);
+      if (res.ok) return { url, child };
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 150));
+  }
+  child.kill('SIGKILL');
+  throw new Error(`next start did not answer in time:\n${output}`);
+}
+
+let sink: SmtpSink | undefined;
+let app: ChildProcess | undefined;
+
+export async function setup(project: TestProject): Promise<void> {
+  if (!process.env.DB_PASSWORD) throw new Error('Run the API and browser tests through `npm test` (it starts the test database).');
+  const mailDir = mkdtempSync(path.join(os.tmpdir(), 'tallyforge-mail-'));
+  sink = await startSmtpSink({ port: 0, dir: mailDir });
+  process.env.SMTP_PORT = String(sink.port);
+  const started = await startApp({ SMTP_HOST: '127.0.0.1', SMTP_PORT: String(sink.port)});
+  app = started.child;
+  project.provide('baseUrl', started.url);
+  project.provide('mailDir', mailDir);
+}
+
+export async function teardown(): Promise<void> {
+  app?.kill('SIGTERM');
+  await sink?.close();
+}

@@ -1,0 +1,2 @@
+// Stands in for the `server-only` marker outside Next's react-server build (vitest, scripts).
+export {};
