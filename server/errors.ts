@@ -15,6 +15,8 @@ export const ERROR_STATUS = {
   duplicate: 409,
   rule_violated: 422,
   scale_locked: 422,
+  unstable: 422,
+  over_capacity: 422,
   rate_limited: 429,
   internal: 500,
   unavailable: 503,

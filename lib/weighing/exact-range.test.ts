@@ -26,7 +26,8 @@ describe('findMaxExactQuantity', () => {
     expect(r.maxQuantity).toBe(249);
   });
 
-  // Contract illustration: a = 6.5206e-5, b = 0.0016, c0 = −0.249246 → root 50.76 → 50 added + 25 = 75.
+  // Contract illustration: a = 6.5206e-5, b = 4·(0.0004 + 0.00018844/25) = 0.00163015 (with the
+  // shared-zero term), c0 = −0.249246 → root 50.58 → 50 added + 25 = 75.
   it('solves the quadratic for the contract illustration', () => {
     const r = findMaxExactQuantity({
       averagePieceWeight: 0.5948, apwRelativeUncertainty: 0.0040375116, pieceSpread: 0.02,
@@ -34,6 +35,18 @@ describe('findMaxExactQuantity', () => {
     });
     expect(r.maxUncertainPieces).toBe(50);
     expect(r.maxQuantity).toBe(75);
+  });
+
+  // Hand-worked, weighing only (GUM 5.2.2 shared zero): APW = 1, n = 10, c = 0, u(W) = 0.1 → u_r = 0.01;
+  // a = 4e-4, b = 4·0.01/10 = 0.004, c0 = 0.04 − 0.25 = −0.21 → M* = (−0.004 + √3.52e-4)/8e-4 = 18.45.
+  // Without the shared-zero term b = 0 and M* = √525 = 22.9, which would promise 4 pieces too many.
+  it('lets the shared zero shorten the exact range on the pan, not apart', () => {
+    const base = {
+      averagePieceWeight: 1, apwRelativeUncertainty: 0.01, pieceSpread: 0,
+      netWeightUncertainty: 0.1, sampleQuantity: 10, sampleOnPan: true,
+    };
+    expect(findMaxExactQuantity(base)).toEqual({ maxUncertainPieces: 18, maxQuantity: 28, tooLight: false });
+    expect(findMaxExactQuantity({ ...base, sampleOnPan: false }).maxUncertainPieces).toBe(22);
   });
 
   it('reports too light when the weighing alone reaches half a piece', () => {
@@ -76,6 +89,17 @@ describe('findSampleForTarget', () => {
     expect(findSampleForTarget(fine)).toBe(866);
     expect(isTargetExact(fine, 866)).toBe(true);
     expect(isTargetExact(fine, 865)).toBe(false);
+  });
+
+  // Hand-worked, weighing only: T = 30, APW = 1, c = 0, u(W) = 0.1, on the pan; with r = (T − n)/n,
+  // 4·0.01·(1 + r + r²) < 0.25 ⇔ r < 1.845 ⇔ n ≥ 11 (n = 10: r = 2 gives 7 > 6.25). Without the
+  // shared-zero term (1 + r² < 6.25 ⇔ r < 2.29) n = 10 would pass.
+  it('needs a larger sample on the pan once the shared zero is counted', () => {
+    const input: SampleForTargetInput = {
+      targetQuantity: 30, averagePieceWeight: 1, pieceSpread: 0, netWeightUncertainty: 0.1, sampleOnPan: true,
+    };
+    expect(findSampleForTarget(input)).toBe(11);
+    expect(isTargetExact(input, 10)).toBe(false);
   });
 
   it('matches a plain linear search over n', () => {

@@ -1,5 +1,6 @@
 /** How far a sample reaches: the largest exact quantity, and the sample a target needs (COUNTING.md). */
-import { COVERAGE_FACTOR, EXACT_LIMIT } from './count';
+import { apwRelativeUncertainty } from './apw';
+import { COVERAGE_FACTOR, EXACT_LIMIT, countVariance, countVariancePolynomial, type SharedZero } from './count';
 
 export interface ExactRangeInput {
   averagePieceWeight: number;
@@ -21,16 +22,23 @@ export interface ExactRange {
   tooLight: boolean;
 }
 
+/** Pieces are added to a sample on the pan (it shares their zero); null when the bulk is weighed apart. */
+function sharedZeroWhenAdding(sampleOnPan: boolean, sampleQuantity: number): SharedZero | null {
+  return sampleOnPan ? { sampleQuantity, piecesTakenOff: false } : null;
+}
+
 /**
- * The M* where k·u(N̂) reaches 1/2: a·M² + b·M + c0 = 0 with a = k²u_r², b = k²c²,
- * c0 = k²u(W)²/APW² − 1/4; null when c0 ≥ 0 (too light). The positive root is
+ * The M* where k·u(N̂) reaches 1/2. countVariancePolynomial gives u(N̂)² = q·M² + l·M + w, with
+ * l = c² + u(W)²/(n·APW²) on the pan (shared zero) and l = c² apart; solve a·M² + b·M + c0 = 0
+ * with a = k²q, b = k²l, c0 = k²w − 1/4; null when c0 ≥ 0 (too light). The positive root is
  * written as 2(−c0)/(b + √(b² − 4a·c0)) to avoid cancellation when a is tiny.
  */
 export function findExactLimit(input: ExactRangeInput): number | null {
   const k = input.coverageFactor ?? COVERAGE_FACTOR;
-  const a = k * k * input.apwRelativeUncertainty ** 2;
-  const b = k * k * input.pieceSpread ** 2;
-  const c0 = k * k * (input.netWeightUncertainty / input.averagePieceWeight) ** 2 - EXACT_LIMIT ** 2;
+  const p = countVariancePolynomial({ ...input, sharedZero: sharedZeroWhenAdding(input.sampleOnPan, input.sampleQuantity) });
+  const a = k * k * p.quadratic;
+  const b = k * k * p.linear;
+  const c0 = k * k * p.constant - EXACT_LIMIT ** 2;
   if (c0 >= 0) return null;
   return a === 0 && b === 0 ? Infinity : (2 * -c0) / (b + Math.sqrt(b * b - 4 * a * c0));
 }
@@ -59,17 +67,26 @@ export interface SampleForTargetInput {
 /** True when a sample of n makes the target T exact, with W_s = n·APW weighed on the same scale. */
 export function isTargetExact(input: SampleForTargetInput, n: number): boolean {
   const k = input.coverageFactor ?? COVERAGE_FACTOR;
-  const c2 = input.pieceSpread ** 2;
-  const weighing = (input.netWeightUncertainty / input.averagePieceWeight) ** 2;
-  const m = input.sampleOnPan ? input.targetQuantity - n : input.targetQuantity;
-  const ur2 = c2 / n + weighing / (n * n);
-  return k * k * (m * c2 + m * m * ur2 + weighing) < EXACT_LIMIT ** 2;
+  const apw = input.averagePieceWeight;
+  const ur = apwRelativeUncertainty({
+    sampleNet: n * apw, sampleQuantity: n, pieceSpread: input.pieceSpread, sampleNetUncertainty: input.netWeightUncertainty,
+  });
+  const variance = countVariance({
+    averagePieceWeight: apw,
+    apwRelativeUncertainty: ur,
+    pieceSpread: input.pieceSpread,
+    netWeightUncertainty: input.netWeightUncertainty,
+    uncertainPieces: input.sampleOnPan ? input.targetQuantity - n : input.targetQuantity,
+    sharedZero: sharedZeroWhenAdding(input.sampleOnPan, n),
+  });
+  return k * k * variance < EXACT_LIMIT ** 2;
 }
 
 /**
  * Smallest sample n that makes T exact, or null when none up to maxSample does
- * (the c²·M term alone may exceed the limit). u(N̂) falls as n grows in both
- * cases, so a binary search over n finds the boundary.
+ * (the c²·M term alone may exceed the limit). u(N̂) falls as n grows in both cases (on the
+ * pan the weighing part (u(W)/APW)²·(1 + r + r²), r = (T − n)/n, falls as r does), so a
+ * binary search over n finds the boundary.
  */
 export function findSampleForTarget(input: SampleForTargetInput): number | null {
   const t = Math.floor(input.targetQuantity);

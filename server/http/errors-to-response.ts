@@ -23,6 +23,11 @@ export function toAppError(err: unknown): AppError {
     const fields = Object.fromEntries(err.errors.map((e) => [e.path ?? 'value', e.message]));
     return new AppError('validation_failed', 'Some fields need attention', { fields });
   }
+  // Pure code in lib/ refuses out-of-range input with a RangeError naming the field ("fn: field rule").
+  if (err instanceof RangeError) {
+    const match = err.message.match(/^\w+: ([\w.]+) (.+)$/);
+    return new AppError('validation_failed', 'Some fields need attention', { fields: match ? { [match[1]]: match[2] } : { _: err.message } });
+  }
   if (err instanceof ConnectionError) return new AppError('unavailable', 'The database is not reachable right now; try again shortly');
   return new AppError('internal', 'Something went wrong on our side');
 }

@@ -1,7 +1,11 @@
 import { z } from 'zod';
 
-export const emailSchema = z
-  .string({ error: 'E-mail is required' })
+// "required" when missing, "must be text" when present with another type.
+export function requiredText(label: string) {
+  return z.string({ error: (iss) => (iss.input === undefined ? `${label} is required` : `${label} must be text`) });
+}
+
+export const emailSchema = requiredText('E-mail')
   .trim()
   .toLowerCase()
   .pipe(z.email({ error: 'Enter a valid e-mail address' }).max(254, { error: 'At most 254 characters' }));

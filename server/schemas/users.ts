@@ -1,11 +1,11 @@
 import { z } from 'zod';
 import { ROLES } from '@/lib/roles';
-import { emailSchema, versionSchema } from './common';
+import { emailSchema, requiredText, versionSchema } from './common';
 
 export const roleSchema = z.enum(ROLES, { error: `Role must be one of ${ROLES.join(', ')}` });
 
 export const inviteUserSchema = z.object({
-  name: z.string({ error: 'Name is required' }).trim().min(1, { error: 'Name is required' }).max(120, { error: 'At most 120 characters' }),
+  name: requiredText('Name').trim().min(1, { error: 'Name is required' }).max(120, { error: 'At most 120 characters' }),
   email: emailSchema,
   role: roleSchema,
 });

@@ -18,6 +18,9 @@ interface Entry {
 
 const everyone = ROLES;
 const admin: Role[] = ['admin'];
+const capture: Role[] = ['operator', 'clerk', 'quality', 'admin'];
+const partEditors: Role[] = ['planner', 'clerk', 'admin'];
+const binEditors: Role[] = ['clerk', 'admin'];
 
 // Every route handler, and who may call it. Add each new route here (see DEVELOPERS.md).
 const MATRIX: Entry[] = [
@@ -33,6 +36,22 @@ const MATRIX: Entry[] = [
   { method: 'GET', route: '/api/v1/mail', allowed: admin },
   { method: 'GET', route: '/api/v1/settings', allowed: everyone },
   { method: 'PATCH', route: '/api/v1/settings', allowed: admin, body: {} },
+  { method: 'POST', route: '/api/v1/counting/estimate', allowed: everyone, body: {} },
+  { method: 'GET', route: '/api/v1/scales', allowed: everyone },
+  { method: 'POST', route: '/api/v1/scales', allowed: admin, body: {} },
+  { method: 'GET', route: '/api/v1/scales/[id]', allowed: everyone, path: '/api/v1/scales/999999' },
+  { method: 'PATCH', route: '/api/v1/scales/[id]', allowed: admin, path: '/api/v1/scales/999999', body: {} },
+  { method: 'GET', route: '/api/v1/containers', allowed: everyone },
+  { method: 'POST', route: '/api/v1/containers', allowed: binEditors, body: {} },
+  { method: 'PATCH', route: '/api/v1/containers/[id]', allowed: binEditors, path: '/api/v1/containers/999999', body: {} },
+  { method: 'GET', route: '/api/v1/parts', allowed: everyone },
+  { method: 'POST', route: '/api/v1/parts', allowed: partEditors, body: {} },
+  { method: 'GET', route: '/api/v1/parts/[id]', allowed: everyone, path: '/api/v1/parts/999999' },
+  { method: 'PATCH', route: '/api/v1/parts/[id]', allowed: partEditors, path: '/api/v1/parts/999999', body: {} },
+  { method: 'GET', route: '/api/v1/parts/[id]/samples', allowed: everyone, path: '/api/v1/parts/999999/samples' },
+  { method: 'POST', route: '/api/v1/parts/[id]/samples', allowed: capture, path: '/api/v1/parts/999999/samples', body: {} },
+  { method: 'GET', route: '/api/v1/counts', allowed: everyone },
+  { method: 'POST', route: '/api/v1/counts', allowed: capture, body: {} },
 ];
 
 function routeFiles(dir: string): string[] {

@@ -19,7 +19,7 @@ describe('people (browser)', () => {
   it('an admin invites a clerk, who follows the e-mailed link, chooses a password and lands on Today', async () => {
     const page = await admin.newPage();
     await signInThroughPage(page, 'admin');
-    await page.getByRole('link', { name: 'People' }).click();
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'People' }).click();
     await page.waitForURL('**/admin/users');
     const email = `${unique('rosa')}@example.test`;
     const form = page.getByRole('form', { name: 'Invite someone' });

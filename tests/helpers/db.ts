@@ -1,7 +1,7 @@
 // Direct database access for tests that build their own world (the same models the app uses).
 import { randomUUID } from 'node:crypto';
 import type { Sequelize } from 'sequelize';
-import { initModels, User } from '../../models';
+import { initModels, Part, Scale, User } from '../../models';
 import { createSequelize } from '../../models/sequelize';
 import type { Role } from '../../lib/roles';
 import { hashPassword } from '../../server/auth/passwords';
@@ -40,5 +40,38 @@ export async function createUser(role: Role, overrides: Partial<{ name: string; 
     role,
     passwordHash: await cachedHash,
     active: overrides.active ?? true,
+  });
+}
+
+// A class III bench scale, 6 kg × 0.1 g with 1 g verification interval unless told otherwise (grams).
+export async function createScale(overrides: Partial<{ name: string; capacityG: number; divisionG: number; eG: number; repeatabilityG: number | null; status: 'in_service' | 'due' | 'locked' }> = {}): Promise<Scale> {
+  testDb();
+  const e = overrides.eG ?? 1;
+  return Scale.create({
+    name: overrides.name ?? unique('scale'),
+    location: 'test bench',
+    capacityG: String(overrides.capacityG ?? 6000),
+    minLoadG: String(20 * e),
+    divisionG: String(overrides.divisionG ?? 0.1),
+    verificationIntervalG: String(e),
+    accuracyClass: 'III',
+    repeatabilityG: overrides.repeatabilityG === undefined ? '0.05' : overrides.repeatabilityG === null ? null : String(overrides.repeatabilityG),
+    connection: { kind: 'simulator', settleMs: 250, driftPerMinute: 0, rateHz: 20 },
+    status: overrides.status ?? 'in_service',
+    statusReason: overrides.status === 'locked' ? 'failed its weighing test' : null,
+    calibrationDueAt: null,
+  });
+}
+
+export async function createPart(overrides: Partial<{ partNumber: string; pieceSpread: number | null; countingMethod: 'scale' | 'hand' }> = {}): Promise<Part> {
+  testDb();
+  return Part.create({
+    partNumber: overrides.partNumber ?? unique('P').toUpperCase(),
+    description: 'Test part',
+    countingMethod: overrides.countingMethod ?? 'scale',
+    apwG: null,
+    apwSampleSize: null,
+    pieceSpread: overrides.pieceSpread === undefined || overrides.pieceSpread === null ? null : String(overrides.pieceSpread),
+    photoFile: null,
   });
 }

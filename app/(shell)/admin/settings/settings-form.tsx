@@ -3,13 +3,14 @@
 import { Field, Form, Formik } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
-import { DISPLAY_UNITS, type SettingsDto } from '@/server/schemas/settings';
+import { WEIGHT_UNITS } from '@/lib/weighing/units';
+import type { SettingsDto } from '@/server/schemas/settings';
 import { apiFetch } from '../../../_components/api-client';
 import { FormField, FormMessage } from '../../../_components/form-field';
 
 const schema = yup.object({
   siteName: yup.string().trim().max(120).required('Site name is required'),
-  displayUnit: yup.string().oneOf([...DISPLAY_UNITS]).required(),
+  displayUnit: yup.string().oneOf([...WEIGHT_UNITS]).required(),
   defaultPieceSpread: yup.number().typeError('A number, e.g. 0.02').moreThan(0, 'Must be above 0').max(0.5, 'At most 0.5').required(),
   stabilityWindowMs: yup.number().typeError('A whole number of ms').integer().min(200, 'At least 200 ms').max(10000, 'At most 10 s').required(),
   varianceThresholdPct: yup.number().typeError('A number').min(0).max(100).required(),
@@ -45,7 +46,7 @@ export function SettingsForm({ initial }: { initial: SettingsDto }) {
           <div>
             <label htmlFor="f-displayUnit" className="field-label">Display unit</label>
             <Field as="select" id="f-displayUnit" name="displayUnit" className="field">
-              {DISPLAY_UNITS.map((u) => <option key={u} value={u}>{u}</option>)}
+              {WEIGHT_UNITS.map((u) => <option key={u} value={u}>{u}</option>)}
             </Field>
           </div>
           <FormField name="defaultPieceSpread" label="Default piece-weight spread (coefficient of variation)" inputMode="decimal" hint="Used until a part has learned its own; 0.02 means pieces typically differ by 2 % (common practice for stamped and machined fasteners)." />

@@ -1,0 +1,11 @@
+import { route } from '@/server/http/route';
+import { idParamSchema } from '@/server/schemas/common';
+import { updatePartSchema } from '@/server/schemas/parts';
+import { getPart } from '@/server/services/parts/list-parts';
+import { updatePart } from '@/server/services/parts/update-part';
+
+export const GET = route({ access: 'catalog.read', params: idParamSchema }, async ({ params }) => ({ part: await getPart({ partId: params.id }) }));
+
+export const PATCH = route({ access: 'parts.edit', params: idParamSchema, body: updatePartSchema }, async ({ params, body }) => ({
+  part: await updatePart({ partId: params.id, input: body }),
+}));

@@ -1,0 +1,28 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { CONTAINER_KINDS, grams, type ContainerKind } from './columns';
+
+// Bags, trays, totes and bins with a known empty weight (preset tare).
+export class Container extends Model<InferAttributes<Container>, InferCreationAttributes<Container>> {
+  declare id: CreationOptional<number>;
+  declare name: string;
+  declare kind: ContainerKind;
+  declare tareG: string;
+  declare version: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    Container.init(
+      {
+        id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+        name: { type: DataTypes.STRING(80), allowNull: false, unique: true },
+        kind: { type: DataTypes.ENUM(...CONTAINER_KINDS), allowNull: false },
+        tareG: { type: grams(), allowNull: false },
+        version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'containers', version: true },
+    );
+  }
+}

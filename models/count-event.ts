@@ -1,0 +1,65 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { COUNT_PURPOSES, grams, pieceWeight, ratio, type CountPurpose } from './columns';
+
+// Append-only record of one capture: the submitted weights and the server's own recomputation.
+export class CountEvent extends Model<InferAttributes<CountEvent>, InferCreationAttributes<CountEvent>> {
+  declare id: CreationOptional<number>;
+  declare idempotencyKey: string;
+  declare requestHash: string;
+  declare purpose: CountPurpose;
+  declare partId: number;
+  declare scaleId: number;
+  declare containerId: number | null;
+  declare grossG: string;
+  declare tareG: string;
+  declare netG: string;
+  declare sampleQuantity: number;
+  declare sampleNetG: string;
+  declare sampleOnPan: boolean;
+  declare apwG: string;
+  declare pieceSpread: string;
+  declare countRaw: string;
+  declare count: number;
+  declare standardUncertainty: string;
+  declare expandedUncertainty: string;
+  declare exact: boolean;
+  declare targetQuantity: number | null;
+  declare warnings: Array<{ code: string; message: string }>;
+  declare operatorId: number;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    const dec = () => DataTypes.DECIMAL(14, 4);
+    CountEvent.init(
+      {
+        id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+        idempotencyKey: { type: DataTypes.STRING(100), allowNull: false, unique: true },
+        requestHash: { type: DataTypes.CHAR(64), allowNull: false },
+        purpose: { type: DataTypes.ENUM(...COUNT_PURPOSES), allowNull: false },
+        partId: { type: DataTypes.INTEGER, allowNull: false },
+        scaleId: { type: DataTypes.INTEGER, allowNull: false },
+        containerId: { type: DataTypes.INTEGER, allowNull: true },
+        grossG: { type: grams(), allowNull: false },
+        tareG: { type: grams(), allowNull: false },
+        netG: { type: grams(), allowNull: false },
+        sampleQuantity: { type: DataTypes.INTEGER, allowNull: false },
+        sampleNetG: { type: grams(), allowNull: false },
+        sampleOnPan: { type: DataTypes.BOOLEAN, allowNull: false },
+        apwG: { type: pieceWeight(), allowNull: false },
+        pieceSpread: { type: ratio(), allowNull: false },
+        countRaw: { type: dec(), allowNull: false },
+        count: { type: DataTypes.INTEGER, allowNull: false },
+        standardUncertainty: { type: dec(), allowNull: false },
+        expandedUncertainty: { type: dec(), allowNull: false },
+        exact: { type: DataTypes.BOOLEAN, allowNull: false },
+        targetQuantity: { type: DataTypes.INTEGER, allowNull: true },
+        warnings: { type: DataTypes.JSON, allowNull: false },
+        operatorId: { type: DataTypes.INTEGER, allowNull: false },
+        createdAt: DataTypes.DATE(3),
+        updatedAt: DataTypes.DATE(3),
+      },
+      { sequelize, tableName: 'count_events' },
+    );
+  }
+}

@@ -1,0 +1,38 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { COUNTING_METHODS, pieceWeight, ratio, type CountingMethod } from './columns';
+
+export class Part extends Model<InferAttributes<Part>, InferCreationAttributes<Part>> {
+  declare id: CreationOptional<number>;
+  declare partNumber: string;
+  declare description: string;
+  declare countingMethod: CreationOptional<CountingMethod>;
+  // Learned from samples: the latest APW and the piece-weight spread c (σ/μ).
+  declare apwG: string | null;
+  declare apwSampleSize: number | null;
+  declare pieceSpread: string | null;
+  declare spreadObservations: CreationOptional<number>;
+  declare photoFile: string | null;
+  declare version: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    Part.init(
+      {
+        id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+        partNumber: { type: DataTypes.STRING(40), allowNull: false, unique: true },
+        description: { type: DataTypes.STRING(200), allowNull: false },
+        countingMethod: { type: DataTypes.ENUM(...COUNTING_METHODS), allowNull: false, defaultValue: 'scale' },
+        apwG: { type: pieceWeight(), allowNull: true },
+        apwSampleSize: { type: DataTypes.INTEGER, allowNull: true },
+        pieceSpread: { type: ratio(), allowNull: true },
+        spreadObservations: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        photoFile: { type: DataTypes.STRING(80), allowNull: true },
+        version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'parts', version: true },
+    );
+  }
+}

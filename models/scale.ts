@@ -1,0 +1,45 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { ACCURACY_CLASSES, grams, SCALE_STATUSES, type AccuracyClass, type ScaleStatus } from './columns';
+
+export class Scale extends Model<InferAttributes<Scale>, InferCreationAttributes<Scale>> {
+  declare id: CreationOptional<number>;
+  declare name: string;
+  declare location: string | null;
+  declare capacityG: string;
+  declare minLoadG: string;
+  declare divisionG: string;
+  declare verificationIntervalG: string;
+  declare accuracyClass: AccuracyClass;
+  declare repeatabilityG: string | null;
+  declare connection: unknown;
+  declare status: CreationOptional<ScaleStatus>;
+  declare statusReason: string | null;
+  declare calibrationDueAt: string | null;
+  declare version: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    Scale.init(
+      {
+        id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+        name: { type: DataTypes.STRING(80), allowNull: false, unique: true },
+        location: { type: DataTypes.STRING(120), allowNull: true },
+        capacityG: { type: grams(), allowNull: false },
+        minLoadG: { type: grams(), allowNull: false },
+        divisionG: { type: grams(), allowNull: false },
+        verificationIntervalG: { type: grams(), allowNull: false },
+        accuracyClass: { type: DataTypes.ENUM(...ACCURACY_CLASSES), allowNull: false },
+        repeatabilityG: { type: grams(), allowNull: true },
+        connection: { type: DataTypes.JSON, allowNull: false },
+        status: { type: DataTypes.ENUM(...SCALE_STATUSES), allowNull: false, defaultValue: 'in_service' },
+        statusReason: { type: DataTypes.STRING(300), allowNull: true },
+        calibrationDueAt: { type: DataTypes.DATEONLY, allowNull: true },
+        version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'scales', version: true },
+    );
+  }
+}

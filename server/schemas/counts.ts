@@ -1,0 +1,65 @@
+import { z } from 'zod';
+import { COUNT_PURPOSES, type CountPurpose } from '@/models/columns';
+import type { CountingWarning } from '@/lib/weighing';
+import { pagingSchema } from './common';
+import { nonNegativeNumber, positiveNumber, unitSchema, wholeCount } from './weights';
+
+// Chosen by the client once per capture and reused on every retry of it.
+export const idempotencyKeySchema = z
+  .string({ error: 'The Idempotency-Key header is required' })
+  .regex(/^[A-Za-z0-9_.:-]{8,100}$/, { error: 'Idempotency-Key must be 8–100 letters, digits or _ . : -' });
+
+const purposeSchema = z.enum(COUNT_PURPOSES as unknown as [CountPurpose, ...CountPurpose[]], { error: `Purpose must be one of ${COUNT_PURPOSES.join(', ')}` });
+
+// The bench sends what the scale said; the server computes the count itself.
+export const recordCountSchema = z.object({
+  purpose: purposeSchema,
+  partId: wholeCount('Part'),
+  scaleId: wholeCount('Scale'),
+  containerId: wholeCount('Container').nullish(),
+  unit: unitSchema.default('g'),
+  gross: nonNegativeNumber('Gross weight'),
+  tare: nonNegativeNumber('Tare'),
+  sample: z.object({ quantity: wholeCount('Sample quantity'), netWeight: positiveNumber('Sample net weight') }, { error: 'sample is required: { quantity, netWeight }' }),
+  sampleOnPan: z.boolean().default(true),
+  targetQuantity: wholeCount('Target quantity').nullish(),
+  stable: z.boolean({ error: 'stable must be true or false (was the reading steady?)' }),
+});
+export type RecordCountInput = z.infer<typeof recordCountSchema>;
+
+export const listCountsSchema = pagingSchema.extend({
+  partId: z.coerce.number().int().positive().optional(),
+  scaleId: z.coerce.number().int().positive().optional(),
+  operatorId: z.coerce.number().int().positive().optional(),
+  purpose: purposeSchema.optional(),
+  from: z.iso.datetime({ offset: true, error: 'from must be an ISO date-time' }).or(z.iso.date()).optional(),
+  to: z.iso.datetime({ offset: true, error: 'to must be an ISO date-time' }).or(z.iso.date()).optional(),
+});
+export type ListCountsQuery = z.infer<typeof listCountsSchema>;
+
+export interface CountEventDto {
+  id: number;
+  purpose: CountPurpose;
+  partId: number;
+  scaleId: number;
+  containerId: number | null;
+  unit: 'g';
+  gross: number;
+  tare: number;
+  net: number;
+  sampleQuantity: number;
+  sampleNetWeight: number;
+  sampleOnPan: boolean;
+  averagePieceWeight: number;
+  pieceSpread: number;
+  countRaw: number;
+  count: number;
+  standardUncertainty: number;
+  expandedUncertainty: number;
+  coverageFactor: 2;
+  exact: boolean;
+  targetQuantity: number | null;
+  warnings: CountingWarning[];
+  operatorId: number;
+  createdAt: string;
+}

@@ -1,0 +1,71 @@
+import { z } from 'zod';
+import { COUNTING_METHODS, type CountingMethod } from '@/models/columns';
+import { pagingSchema, requiredText, versionSchema } from './common';
+import { positiveNumber, unitSchema, wholeCount } from './weights';
+
+// Part numbers: letters, digits and . _ - / ; stored upper-case so scans match however typed.
+export const partNumberSchema = requiredText('Part number')
+  .trim()
+  .toUpperCase()
+  .regex(/^[A-Z0-9][A-Z0-9._\-/]{0,39}$/, { error: 'Letters, digits and . _ - / only, at most 40 characters' });
+
+const methodSchema = z.enum(COUNTING_METHODS as unknown as [CountingMethod, ...CountingMethod[]], { error: 'Counting method must be scale or hand' });
+
+export const createPartSchema = z.object({
+  partNumber: partNumberSchema,
+  description: requiredText('Description').trim().min(1, { error: 'Description is required' }).max(200),
+  countingMethod: methodSchema.default('scale'),
+});
+export type CreatePartInput = z.infer<typeof createPartSchema>;
+
+export const updatePartSchema = z.object({
+  description: createPartSchema.shape.description.optional(),
+  countingMethod: methodSchema.optional(),
+  version: versionSchema,
+});
+export type UpdatePartInput = z.infer<typeof updatePartSchema>;
+
+export const listPartsSchema = pagingSchema.extend({
+  q: z.string().trim().max(80).optional(),
+  sort: z.enum(['partNumber', 'description', 'updatedAt']).default('partNumber'),
+  dir: z.enum(['asc', 'desc']).default('asc'),
+});
+export type ListPartsQuery = z.infer<typeof listPartsSchema>;
+
+export const recordSampleSchema = z.object({
+  scaleId: wholeCount('Scale'),
+  unit: unitSchema.default('g'),
+  quantity: wholeCount('Sample quantity'),
+  netWeight: positiveNumber('Sample net weight'),
+  // One stable increment per piece when the sample was built piece by piece, in `unit`.
+  increments: z.array(positiveNumber('Each increment'), { error: 'increments must be a list of weights' }).max(10_000).optional(),
+});
+export type RecordSampleInput = z.infer<typeof recordSampleSchema>;
+
+export interface PartDto {
+  id: number;
+  partNumber: string;
+  description: string;
+  countingMethod: CountingMethod;
+  unit: 'g';
+  averagePieceWeight: number | null;
+  apwSampleSize: number | null;
+  pieceSpread: number | null;
+  spreadLearned: boolean;
+  spreadObservations: number;
+  version: number;
+  updatedAt: string;
+}
+
+export interface SampleDto {
+  id: number;
+  partId: number;
+  scaleId: number;
+  unit: 'g';
+  quantity: number;
+  netWeight: number;
+  averagePieceWeight: number;
+  pieceByPiece: boolean;
+  createdBy: number;
+  createdAt: string;
+}

@@ -1,0 +1,17 @@
+import { z } from 'zod';
+import { WEIGHT_UNITS, type WeightUnit } from '@/lib/weighing/units';
+
+export const unitSchema = z.enum(WEIGHT_UNITS as [WeightUnit, ...WeightUnit[]], { error: 'Unit must be g, kg, lb or oz' });
+
+const numberError = (label: string) => ({
+  error: (iss: { input: unknown }) => (iss.input === undefined ? `${label} is required` : `${label} must be a number`),
+});
+
+export const positiveNumber = (label: string) => z.number(numberError(label)).finite().gt(0, { error: `${label} must be above 0` });
+export const nonNegativeNumber = (label: string) => z.number(numberError(label)).finite().min(0, { error: `${label} cannot be negative` });
+export const wholeCount = (label: string, min = 1) =>
+  z
+    .number(numberError(label))
+    .int({ error: `${label} must be a whole number` })
+    .min(min, { error: `${label} must be at least ${min}` })
+    .max(10_000_000, { error: `${label} is implausibly large` });

@@ -1,0 +1,33 @@
+import 'server-only';
+import type { CountEvent } from '@/models';
+import type { CountingWarning } from '@/lib/weighing';
+import type { CountEventDto } from '../../schemas/counts';
+
+export function toCountEventDto(e: CountEvent): CountEventDto {
+  return {
+    id: e.id,
+    purpose: e.purpose,
+    partId: e.partId,
+    scaleId: e.scaleId,
+    containerId: e.containerId,
+    unit: 'g',
+    gross: Number(e.grossG),
+    tare: Number(e.tareG),
+    net: Number(e.netG),
+    sampleQuantity: e.sampleQuantity,
+    sampleNetWeight: Number(e.sampleNetG),
+    sampleOnPan: e.sampleOnPan,
+    averagePieceWeight: Number(e.apwG),
+    pieceSpread: Number(e.pieceSpread),
+    countRaw: Number(e.countRaw),
+    count: e.count,
+    standardUncertainty: Number(e.standardUncertainty),
+    expandedUncertainty: Number(e.expandedUncertainty),
+    coverageFactor: 2,
+    exact: e.exact,
+    targetQuantity: e.targetQuantity,
+    warnings: e.warnings as CountingWarning[],
+    operatorId: e.operatorId,
+    createdAt: e.createdAt.toISOString(),
+  };
+}

@@ -1,0 +1,107 @@
+import 'server-only';
+import { createHash } from 'node:crypto';
+import { UniqueConstraintError } from 'sequelize';
+import { Container, CountEvent, Part } from '@/models';
+import { estimateCount } from '@/lib/weighing';
+import { toGrams } from '@/lib/weighing/units';
+import type { SessionUser } from '../../auth/session';
+import { getDb } from '../../db';
+import { AppError } from '../../errors';
+import type { CountEventDto, RecordCountInput } from '../../schemas/counts';
+import { loadUsableScale, scaleNoise } from '../scales/usable-scale';
+import { getSettings } from '../settings/get-settings';
+import { toCountEventDto } from './count-event-dto';
+
+export interface RecordCountOptions {
+  idempotencyKey: string;
+  input: RecordCountInput;
+  by: SessionUser;
+}
+
+// Records one capture. The server never trusts a count it did not compute: it recomputes from the
+// submitted weights with the scale's own profile. A retry with the same key returns the first answer.
+export async function recordCount({ idempotencyKey, input, by }: RecordCountOptions): Promise<{ count: CountEventDto; replayed: boolean }> {
+  const db = getDb();
+  const requestHash = createHash('sha256').update(JSON.stringify({ input, operator: by.id })).digest('hex');
+  const earlier = await CountEvent.findOne({ where: { idempotencyKey } });
+  if (earlier) return replay(earlier, requestHash);
+  const { defaultPieceSpread } = await getSettings();
+  try {
+    return await db.transaction(async (transaction) => {
+      const part = await Part.findByPk(input.partId, { transaction });
+      if (!part) throw new AppError('not_found', 'Part was not found', { fields: { partId: 'no such part' } });
+      if (part.countingMethod === 'hand') throw new AppError('rule_violated', `${part.partNumber} is counted by hand, not by weight`);
+      if (input.containerId && !(await Container.count({ where: { id: input.containerId }, transaction }))) {
+        throw new AppError('not_found', 'Container was not found', { fields: { containerId: 'no such container' } });
+      }
+      const scale = await loadUsableScale(input.scaleId, transaction);
+      const g = (v: number) => toGrams(v, input.unit);
+      const gross = g(input.gross);
+      const tare = g(input.tare);
+      const net = gross - tare;
+      const sampleNet = g(input.sample.netWeight);
+      const capacity = Number(scale.capacityG);
+      if (!input.stable) throw new AppError('unstable', 'The reading was still moving; wait until it settles and capture again');
+      if (gross > capacity) throw new AppError('over_capacity', `The load is above the scale's capacity (${capacity} g); the reading cannot be used`);
+      if (net <= 0) throw new AppError('validation_failed', 'Nothing to count', { fields: { gross: 'gross must be larger than tare' } });
+      const noise = scaleNoise(scale);
+      if (input.sampleOnPan && sampleNet > net + noise.division) {
+        throw new AppError('validation_failed', 'Some fields need attention', { fields: { 'sample.netWeight': 'the sample cannot weigh more than the whole pan when it stays on it' } });
+      }
+      const result = estimateCount(
+        {
+          unit: 'g',
+          scale: { ...noise, max: capacity, min: Number(scale.minLoadG) },
+          sample: { quantity: input.sample.quantity, netWeight: sampleNet },
+          netWeight: net,
+          sampleOnPan: input.sampleOnPan,
+          pieceSpread: part.pieceSpread === null ? undefined : Number(part.pieceSpread),
+          targetQuantity: input.targetQuantity ?? undefined,
+        },
+        { defaultPieceSpread },
+      );
+      const event = await CountEvent.create(
+        {
+          idempotencyKey,
+          requestHash,
+          purpose: input.purpose,
+          partId: part.id,
+          scaleId: scale.id,
+          containerId: input.containerId ?? null,
+          grossG: String(gross),
+          tareG: String(tare),
+          netG: String(net),
+          sampleQuantity: input.sample.quantity,
+          sampleNetG: String(sampleNet),
+          sampleOnPan: input.sampleOnPan,
+          apwG: String(result.averagePieceWeight),
+          pieceSpread: String(part.pieceSpread ?? defaultPieceSpread),
+          countRaw: String(result.countRaw),
+          count: result.count,
+          standardUncertainty: String(result.standardUncertainty),
+          expandedUncertainty: String(result.expandedUncertainty),
+          exact: result.exact,
+          targetQuantity: input.targetQuantity ?? null,
+          warnings: result.warnings,
+          operatorId: by.id,
+        },
+        { transaction },
+      );
+      return { count: toCountEventDto(event), replayed: false };
+    });
+  } catch (err) {
+    // Two tries with one key raced past the first lookup: the loser answers with the winner's event.
+    if (err instanceof UniqueConstraintError) {
+      const winner = await CountEvent.findOne({ where: { idempotencyKey } });
+      if (winner) return replay(winner, requestHash);
+    }
+    throw err;
+  }
+}
+
+function replay(event: CountEvent, requestHash: string): { count: CountEventDto; replayed: boolean } {
+  if (event.requestHash !== requestHash) {
+    throw new AppError('conflict', 'This Idempotency-Key was already used for a different capture; send a new key for a new capture');
+  }
+  return { count: toCountEventDto(event), replayed: true };
+}
