@@ -10,6 +10,7 @@ export interface NavItem {
 // Only routes that exist are listed; each one names the permission its page checks.
 export const NAV_ITEMS: readonly NavItem[] = [
   { href: '/', label: 'Today', group: 'work' },
+  { href: '/bench', label: 'Bench', permission: 'counts.capture', group: 'work' },
   { href: '/admin/users', label: 'People', permission: 'admin.manage', group: 'admin' },
   { href: '/admin/settings', label: 'Site settings', permission: 'admin.manage', group: 'admin' },
   { href: '/admin/mail', label: 'Outbox', permission: 'admin.manage', group: 'admin' },
