@@ -19,3 +19,19 @@ export type CountingMethod = (typeof COUNTING_METHODS)[number];
 
 export const COUNT_PURPOSES = ['kit_line', 'bin', 'audit', 'part'] as const;
 export type CountPurpose = (typeof COUNT_PURPOSES)[number];
+
+export const ORDER_STATUSES = ['draft', 'released', 'in_progress', 'complete', 'cancelled'] as const;
+export type OrderStatus = (typeof ORDER_STATUSES)[number];
+
+export const LINE_VERDICTS = ['open', 'in', 'uncertain', 'out'] as const;
+export type LineVerdict = (typeof LINE_VERDICTS)[number];
+
+export const RESERVATION_STATUSES = ['active', 'consumed', 'released'] as const;
+export type ReservationStatus = (typeof RESERVATION_STATUSES)[number];
+
+// Closed list of why stock moved; adding one needs a migration of the ENUM.
+export const MOVEMENT_REASONS = ['initial', 'receipt', 'adjustment', 'consumption'] as const;
+export type MovementReason = (typeof MOVEMENT_REASONS)[number];
+
+export const ABC_CLASSES = ['A', 'B', 'C'] as const;
+export type AbcClass = (typeof ABC_CLASSES)[number];

@@ -22,7 +22,7 @@ export class Container extends Model<InferAttributes<Container>, InferCreationAt
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'containers', version: true },
+      { sequelize, modelName: 'Container', tableName: 'containers', version: true },
     );
   }
 }

@@ -26,6 +26,8 @@ export class CountEvent extends Model<InferAttributes<CountEvent>, InferCreation
   declare targetQuantity: number | null;
   declare warnings: Array<{ code: string; message: string }>;
   declare operatorId: number;
+  declare orderLineId: CreationOptional<number | null>;
+  declare binId: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -56,10 +58,12 @@ export class CountEvent extends Model<InferAttributes<CountEvent>, InferCreation
         targetQuantity: { type: DataTypes.INTEGER, allowNull: true },
         warnings: { type: DataTypes.JSON, allowNull: false },
         operatorId: { type: DataTypes.INTEGER, allowNull: false },
+        orderLineId: { type: DataTypes.INTEGER, allowNull: true },
+        binId: { type: DataTypes.INTEGER, allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },
-      { sequelize, tableName: 'count_events' },
+      { sequelize, modelName: 'CountEvent', tableName: 'count_events' },
     );
   }
 }

@@ -1,22 +1,54 @@
 import type { Sequelize } from 'sequelize';
+
+// Every model names itself (modelName): production builds minify class names, and Sequelize
+// would otherwise register several models under the same one-letter name.
+import { Bin } from './bin';
+import { BuildOrder } from './build-order';
+import { BuildOrderLine } from './build-order-line';
 import { Container } from './container';
 import { CountEvent } from './count-event';
 import { MailMessage } from './mail-message';
+import { Kit } from './kit';
+import { KitComponent } from './kit-component';
 import { Part } from './part';
+import { PartStock } from './part-stock';
 import { PieceWeightSample } from './piece-weight-sample';
 import { Scale } from './scale';
 import { PasswordToken } from './password-token';
 import { SignInThrottle } from './sign-in-throttle';
 import { SiteSettings } from './site-settings';
+import { StockMovement } from './stock-movement';
+import { StockReservation } from './stock-reservation';
 import { User } from './user';
 
-export { Container, CountEvent, MailMessage, Part, PasswordToken, PieceWeightSample, Scale, SignInThrottle, SiteSettings, User };
+export {
+  Bin,
+  BuildOrder,
+  BuildOrderLine,
+  Container,
+  CountEvent,
+  Kit,
+  KitComponent,
+  MailMessage,
+  Part,
+  PartStock,
+  PasswordToken,
+  PieceWeightSample,
+  Scale,
+  SignInThrottle,
+  SiteSettings,
+  StockMovement,
+  StockReservation,
+  User,
+};
 
 const initialised = new WeakSet<Sequelize>();
 
 export function initModels(sequelize: Sequelize): void {
   if (initialised.has(sequelize)) return;
-  for (const model of [User, SiteSettings, PasswordToken, SignInThrottle, MailMessage, Scale, Container, Part, PieceWeightSample, CountEvent]) {
+  const models = [User, SiteSettings, PasswordToken, SignInThrottle, MailMessage, Scale, Container, Part, PieceWeightSample, CountEvent];
+  const stockModels = [Bin, PartStock, StockMovement, Kit, KitComponent, BuildOrder, BuildOrderLine, StockReservation];
+  for (const model of [...models, ...stockModels]) {
     model.initModel(sequelize);
   }
   PasswordToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
@@ -25,5 +57,12 @@ export function initModels(sequelize: Sequelize): void {
   CountEvent.belongsTo(Part, { foreignKey: 'partId', as: 'part' });
   CountEvent.belongsTo(Scale, { foreignKey: 'scaleId', as: 'scale' });
   CountEvent.belongsTo(User, { foreignKey: 'operatorId', as: 'operator' });
+  Bin.belongsTo(Part, { foreignKey: 'partId', as: 'part' });
+  Kit.hasMany(KitComponent, { foreignKey: 'kitId', as: 'components' });
+  KitComponent.belongsTo(Part, { foreignKey: 'partId', as: 'part' });
+  BuildOrder.belongsTo(Kit, { foreignKey: 'kitId', as: 'kit' });
+  BuildOrder.hasMany(BuildOrderLine, { foreignKey: 'orderId', as: 'lines' });
+  BuildOrderLine.belongsTo(BuildOrder, { foreignKey: 'orderId', as: 'order' });
+  BuildOrderLine.belongsTo(Part, { foreignKey: 'partId', as: 'part' });
   initialised.add(sequelize);
 }

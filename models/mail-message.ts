@@ -30,7 +30,7 @@ export class MailMessage extends Model<InferAttributes<MailMessage>, InferCreati
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'mail_messages' },
+      { sequelize, modelName: 'MailMessage', tableName: 'mail_messages' },
     );
   }
 }

@@ -32,7 +32,7 @@ export class Part extends Model<InferAttributes<Part>, InferCreationAttributes<P
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'parts', version: true },
+      { sequelize, modelName: 'Part', tableName: 'parts', version: true },
     );
   }
 }

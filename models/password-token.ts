@@ -21,7 +21,7 @@ export class PasswordToken extends Model<InferAttributes<PasswordToken>, InferCr
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'password_tokens' },
+      { sequelize, modelName: 'PasswordToken', tableName: 'password_tokens' },
     );
   }
 }

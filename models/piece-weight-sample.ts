@@ -28,7 +28,7 @@ export class PieceWeightSample extends Model<InferAttributes<PieceWeightSample>,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'piece_weight_samples' },
+      { sequelize, modelName: 'PieceWeightSample', tableName: 'piece_weight_samples' },
     );
   }
 }

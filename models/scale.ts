@@ -39,7 +39,7 @@ export class Scale extends Model<InferAttributes<Scale>, InferCreationAttributes
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'scales', version: true },
+      { sequelize, modelName: 'Scale', tableName: 'scales', version: true },
     );
   }
 }

@@ -16,7 +16,7 @@ export class SignInThrottle extends Model<InferAttributes<SignInThrottle>, Infer
         windowStart: { type: DataTypes.DATE, allowNull: false },
         blockedUntil: { type: DataTypes.DATE, allowNull: true },
       },
-      { sequelize, tableName: 'sign_in_throttles', timestamps: false },
+      { sequelize, modelName: 'SignInThrottle', tableName: 'sign_in_throttles', timestamps: false },
     );
   }
 }

@@ -27,7 +27,7 @@ export class SiteSettings extends Model<InferAttributes<SiteSettings>, InferCrea
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'site_settings', version: true },
+      { sequelize, modelName: 'SiteSettings', tableName: 'site_settings', version: true },
     );
   }
 }

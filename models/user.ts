@@ -25,7 +25,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'users', version: true },
+      { sequelize, modelName: 'User', tableName: 'users', version: true },
     );
   }
 }

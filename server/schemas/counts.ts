@@ -23,6 +23,8 @@ export const recordCountSchema = z.object({
   sample: z.object({ quantity: wholeCount('Sample quantity'), netWeight: positiveNumber('Sample net weight') }, { error: 'sample is required: { quantity, netWeight }' }),
   sampleOnPan: z.boolean().default(true),
   targetQuantity: wholeCount('Target quantity').nullish(),
+  // A kitting capture names the build-order line it fills (purpose kit_line).
+  orderLineId: wholeCount('Order line').nullish(),
   stable: z.boolean({ error: 'stable must be true or false (was the reading steady?)' }),
 });
 export type RecordCountInput = z.infer<typeof recordCountSchema>;
@@ -61,5 +63,7 @@ export interface CountEventDto {
   targetQuantity: number | null;
   warnings: CountingWarning[];
   operatorId: number;
+  orderLineId: number | null;
+  binId: number | null;
   createdAt: string;
 }

@@ -21,6 +21,7 @@ const admin: Role[] = ['admin'];
 const capture: Role[] = ['operator', 'clerk', 'quality', 'admin'];
 const partEditors: Role[] = ['planner', 'clerk', 'admin'];
 const binEditors: Role[] = ['clerk', 'admin'];
+const planners: Role[] = ['planner', 'admin'];
 
 // Every route handler, and who may call it. Add each new route here (see DEVELOPERS.md).
 const MATRIX: Entry[] = [
@@ -52,6 +53,21 @@ const MATRIX: Entry[] = [
   { method: 'POST', route: '/api/v1/parts/[id]/samples', allowed: capture, path: '/api/v1/parts/999999/samples', body: {} },
   { method: 'GET', route: '/api/v1/counts', allowed: everyone },
   { method: 'POST', route: '/api/v1/counts', allowed: capture, body: {} },
+  { method: 'GET', route: '/api/v1/kits', allowed: everyone },
+  { method: 'POST', route: '/api/v1/kits', allowed: planners, body: {} },
+  { method: 'GET', route: '/api/v1/kits/[id]', allowed: everyone, path: '/api/v1/kits/999999' },
+  { method: 'PATCH', route: '/api/v1/kits/[id]', allowed: planners, path: '/api/v1/kits/999999', body: {} },
+  { method: 'POST', route: '/api/v1/kits/[id]/revisions', allowed: planners, path: '/api/v1/kits/999999/revisions', body: {} },
+  { method: 'GET', route: '/api/v1/orders', allowed: everyone },
+  { method: 'POST', route: '/api/v1/orders', allowed: planners, body: {} },
+  { method: 'GET', route: '/api/v1/orders/[id]', allowed: everyone, path: '/api/v1/orders/999999' },
+  { method: 'GET', route: '/api/v1/orders/[id]/availability', allowed: everyone, path: '/api/v1/orders/999999/availability' },
+  { method: 'POST', route: '/api/v1/orders/[id]/release', allowed: planners, path: '/api/v1/orders/999999/release', body: {} },
+  { method: 'POST', route: '/api/v1/orders/[id]/cancel', allowed: planners, path: '/api/v1/orders/999999/cancel', body: {} },
+  { method: 'POST', route: '/api/v1/orders/[id]/complete', allowed: planners, path: '/api/v1/orders/999999/complete', body: {} },
+  { method: 'GET', route: '/api/v1/kitting-queue', allowed: everyone },
+  { method: 'GET', route: '/api/v1/bins', allowed: everyone },
+  { method: 'POST', route: '/api/v1/bins', allowed: binEditors, body: {} },
 ];
 
 function routeFiles(dir: string): string[] {

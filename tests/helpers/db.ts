@@ -1,7 +1,7 @@
 // Direct database access for tests that build their own world (the same models the app uses).
 import { randomUUID } from 'node:crypto';
 import type { Sequelize } from 'sequelize';
-import { initModels, Part, Scale, User } from '../../models';
+import { Bin, initModels, Part, Scale, User } from '../../models';
 import { createSequelize } from '../../models/sequelize';
 import type { Role } from '../../lib/roles';
 import { hashPassword } from '../../server/auth/passwords';
@@ -73,5 +73,18 @@ export async function createPart(overrides: Partial<{ partNumber: string; pieceS
     apwSampleSize: null,
     pieceSpread: overrides.pieceSpread === undefined || overrides.pieceSpread === null ? null : String(overrides.pieceSpread),
     photoFile: null,
+  });
+}
+
+// A bin holding `quantity` of the part, with part_stock kept in step as the app does.
+export async function stockPart(partId: number, quantity: number): Promise<Bin> {
+  const db = testDb();
+  return db.transaction(async (transaction) => {
+    const letter = () => String.fromCharCode(65 + Math.floor(Math.random() * 26));
+    const two = () => String(1 + Math.floor(Math.random() * 99)).padStart(2, '0');
+    const code = `${letter()}${letter()}-${two()}-${1 + Math.floor(Math.random() * 9)}-${two()}`;
+    const bin = await Bin.create({ code, partId, containerId: null, bookQuantity: quantity, lastCountedAt: null }, { transaction });
+    await db.query('INSERT INTO part_stock (part_id, on_hand, reserved) VALUES (?, ?, 0) ON DUPLICATE KEY UPDATE on_hand = on_hand + VALUES(on_hand)', { replacements: [partId, quantity], transaction });
+    return bin;
   });
 }

@@ -1,7 +1,7 @@
 // Starts the local SMTP sink and one production `next start` against the test database,
 // and hands their addresses to the tests. `npm test` has already migrated and built.
 import { spawn, type ChildProcess } from 'node:child_process';
-import { mkdtempSync } from 'node:fs';
+import { createWriteStream, mkdirSync, mkdtempSync } from 'node:fs';
 import { createServer } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
@@ -30,9 +30,16 @@ export async function startApp(env: Record<string, string>): Promise<{ url: stri
     env: { ...process.env, APP_URL: url, ...env, PORT: String(port) },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
+  // The app's own log goes to test-results/ for reading after a failure.
+  mkdirSync(path.join(root, 'test-results'), { recursive: true });
+  const log = createWriteStream(path.join(root, 'test-results', `app-${port}.log`));
   let output = '';
-  child.stdout?.on('data', (d) => (output += d));
-  child.stderr?.on('data', (d) => (output += d));
+  const keep = (d: Buffer) => {
+    log.write(d);
+    if (output.length < 20_000) output += d;
+  };
+  child.stdout?.on('data', keep);
+  child.stderr?.on('data', keep);
   for (let i = 0; i < 200; i++) {
     if (child.exitCode !== null) throw new Error(`next start exited early:\n${output}`);
     try {

@@ -28,6 +28,8 @@ export function toCountEventDto(e: CountEvent): CountEventDto {
     targetQuantity: e.targetQuantity,
     warnings: e.warnings as CountingWarning[],
     operatorId: e.operatorId,
+    orderLineId: e.orderLineId ?? null,
+    binId: e.binId ?? null,
     createdAt: e.createdAt.toISOString(),
   };
 }

@@ -2,15 +2,23 @@ import 'server-only';
 import { createHash } from 'node:crypto';
 import { UniqueConstraintError } from 'sequelize';
 import { Container, CountEvent, Part } from '@/models';
+import { lineProgress } from '../orders/line-progress';
 import { estimateCount } from '@/lib/weighing';
 import { toGrams } from '@/lib/weighing/units';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
 import type { CountEventDto, RecordCountInput } from '../../schemas/counts';
+import { applyCountToLine, type LineProgress } from '../orders/apply-count-to-line';
 import { loadUsableScale, scaleNoise } from '../scales/usable-scale';
 import { getSettings } from '../settings/get-settings';
 import { toCountEventDto } from './count-event-dto';
+
+export interface CountAnswer {
+  count: CountEventDto;
+  line: LineProgress | null;
+  replayed: boolean;
+}
 
 export interface RecordCountOptions {
   idempotencyKey: string;
@@ -20,7 +28,7 @@ export interface RecordCountOptions {
 
 // Records one capture. The server never trusts a count it did not compute: it recomputes from the
 // submitted weights with the scale's own profile. A retry with the same key returns the first answer.
-export async function recordCount({ idempotencyKey, input, by }: RecordCountOptions): Promise<{ count: CountEventDto; replayed: boolean }> {
+export async function recordCount({ idempotencyKey, input, by }: RecordCountOptions): Promise<CountAnswer> {
   const db = getDb();
   const requestHash = createHash('sha256').update(JSON.stringify({ input, operator: by.id })).digest('hex');
   const earlier = await CountEvent.findOne({ where: { idempotencyKey } });
@@ -31,6 +39,9 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
       const part = await Part.findByPk(input.partId, { transaction });
       if (!part) throw new AppError('not_found', 'Part was not found', { fields: { partId: 'no such part' } });
       if (part.countingMethod === 'hand') throw new AppError('rule_violated', `${part.partNumber} is counted by hand, not by weight`);
+      if ((input.purpose === 'kit_line') !== Boolean(input.orderLineId)) {
+        throw new AppError('validation_failed', 'A kit-line capture names its order line, and only it does', { fields: { orderLineId: input.purpose === 'kit_line' ? 'required for kit_line' : 'only for kit_line' } });
+      }
       if (input.containerId && !(await Container.count({ where: { id: input.containerId }, transaction }))) {
         throw new AppError('not_found', 'Container was not found', { fields: { containerId: 'no such container' } });
       }
@@ -84,10 +95,15 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
           targetQuantity: input.targetQuantity ?? null,
           warnings: result.warnings,
           operatorId: by.id,
+          orderLineId: input.orderLineId ?? null,
+          binId: null,
         },
         { transaction },
       );
-      return { count: toCountEventDto(event), replayed: false };
+      const line = input.orderLineId
+        ? await applyCountToLine({ orderLineId: input.orderLineId, partId: part.id, count: result.count, standardUncertainty: result.standardUncertainty }, transaction)
+        : null;
+      return { count: toCountEventDto(event), line, replayed: false };
     });
   } catch (err) {
     // Two tries with one key raced past the first lookup: the loser answers with the winner's event.
@@ -99,9 +115,9 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
   }
 }
 
-function replay(event: CountEvent, requestHash: string): { count: CountEventDto; replayed: boolean } {
+async function replay(event: CountEvent, requestHash: string): Promise<CountAnswer> {
   if (event.requestHash !== requestHash) {
     throw new AppError('conflict', 'This Idempotency-Key was already used for a different capture; send a new key for a new capture');
   }
-  return { count: toCountEventDto(event), replayed: true };
+  return { count: toCountEventDto(event), line: event.orderLineId ? await lineProgress(event.orderLineId) : null, replayed: true };
 }

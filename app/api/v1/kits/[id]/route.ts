@@ -1,0 +1,11 @@
+import { route } from '@/server/http/route';
+import { idParamSchema } from '@/server/schemas/common';
+import { updateKitSchema } from '@/server/schemas/kits';
+import { getKit } from '@/server/services/kits/list-kits';
+import { updateKit } from '@/server/services/kits/update-kit';
+
+export const GET = route({ access: 'catalog.read', params: idParamSchema }, async ({ params }) => ({ kit: await getKit({ kitId: params.id }) }));
+
+export const PATCH = route({ access: 'kits.edit', params: idParamSchema, body: updateKitSchema }, async ({ params, body }) => ({
+  kit: await updateKit({ kitId: params.id, input: body }),
+}));

@@ -1,0 +1,8 @@
+import { created, route } from '@/server/http/route';
+import { createOrderSchema, listOrdersSchema } from '@/server/schemas/orders';
+import { createOrder } from '@/server/services/orders/create-order';
+import { listOrders } from '@/server/services/orders/get-order';
+
+export const GET = route({ access: 'catalog.read', query: listOrdersSchema }, async ({ query }) => ({ orders: await listOrders(query) }));
+
+export const POST = route({ access: 'orders.manage', body: createOrderSchema }, async ({ body, user }) => created({ order: await createOrder({ input: body, by: user }) }));

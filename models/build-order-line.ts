@@ -1,0 +1,39 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { LINE_VERDICTS, type LineVerdict } from './columns';
+
+export class BuildOrderLine extends Model<InferAttributes<BuildOrderLine>, InferCreationAttributes<BuildOrderLine>> {
+  declare id: CreationOptional<number>;
+  declare orderId: number;
+  declare partId: number;
+  declare quantityPerKit: number;
+  declare required: number;
+  declare toleranceBelow: number;
+  declare toleranceAbove: number;
+  declare counted: CreationOptional<number>;
+  declare varianceSum: CreationOptional<string>;
+  declare captures: CreationOptional<number>;
+  declare verdict: CreationOptional<LineVerdict>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    BuildOrderLine.init(
+      {
+        id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+        orderId: { type: DataTypes.INTEGER, allowNull: false },
+        partId: { type: DataTypes.INTEGER, allowNull: false },
+        quantityPerKit: { type: DataTypes.INTEGER, allowNull: false },
+        required: { type: DataTypes.INTEGER, allowNull: false },
+        toleranceBelow: { type: DataTypes.INTEGER, allowNull: false },
+        toleranceAbove: { type: DataTypes.INTEGER, allowNull: false },
+        counted: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        varianceSum: { type: DataTypes.DECIMAL(16, 6), allowNull: false, defaultValue: 0 },
+        captures: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        verdict: { type: DataTypes.ENUM(...LINE_VERDICTS), allowNull: false, defaultValue: 'open' },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, modelName: 'BuildOrderLine', tableName: 'build_order_lines' },
+    );
+  }
+}

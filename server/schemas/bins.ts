@@ -1,0 +1,37 @@
+import { z } from 'zod';
+import { BIN_CODE_HINT, formatBinCode, parseBinCode } from '@/lib/bin-code';
+import { ABC_CLASSES, type AbcClass } from '@/models/columns';
+import { requiredText } from './common';
+import { wholeCount } from './weights';
+
+export const binCodeSchema = requiredText('Bin code').transform((text, ctx) => {
+  const location = parseBinCode(text);
+  if (!location) {
+    ctx.addIssue({ code: 'custom', message: `Bin codes look like ${BIN_CODE_HINT}` });
+    return z.NEVER;
+  }
+  return formatBinCode(location);
+});
+
+export const createBinSchema = z.object({
+  code: binCodeSchema,
+  partId: wholeCount('Part'),
+  containerId: wholeCount('Container').nullish(),
+  bookQuantity: wholeCount('Book quantity', 0),
+  abcClass: z.enum(ABC_CLASSES as unknown as [AbcClass, ...AbcClass[]], { error: 'ABC class must be A, B or C' }).default('C'),
+});
+export type CreateBinInput = z.infer<typeof createBinSchema>;
+
+export const listBinsSchema = z.object({ code: z.string().trim().max(20).optional(), partId: z.coerce.number().int().positive().optional() });
+
+export interface BinDto {
+  id: number;
+  code: string;
+  partId: number;
+  partNumber: string;
+  containerId: number | null;
+  bookQuantity: number;
+  abcClass: AbcClass;
+  lastCountedAt: string | null;
+  version: number;
+}

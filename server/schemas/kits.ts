@@ -1,0 +1,72 @@
+import { z } from 'zod';
+import { requiredText, versionSchema } from './common';
+import { wholeCount } from './weights';
+
+export const kitCodeSchema = requiredText('Kit code')
+  .trim()
+  .toUpperCase()
+  .regex(/^[A-Z0-9][A-Z0-9._\-/]{0,39}$/, { error: 'Letters, digits and . _ - / only, at most 40 characters' });
+export const revisionSchema = requiredText('Revision')
+  .trim()
+  .toUpperCase()
+  .regex(/^[A-Z0-9]{1,8}$/, { error: 'Revision is 1–8 letters or digits, e.g. A or 03' });
+
+const toleranceSchema = (label: string) =>
+  z.number({ error: `${label} must be a whole number of pieces` }).int({ error: `${label} must be a whole number of pieces` }).min(0).max(100_000).default(0);
+
+export const componentSchema = z.object({
+  partId: wholeCount('Part'),
+  quantity: wholeCount('Quantity per kit'),
+  toleranceBelow: toleranceSchema('Tolerance below'),
+  toleranceAbove: toleranceSchema('Tolerance above'),
+});
+
+const componentsSchema = z
+  .array(componentSchema, { error: 'components must be a list' })
+  .min(1, { error: 'A kit needs at least one part' })
+  .max(500)
+  .refine((list) => new Set(list.map((c) => c.partId)).size === list.length, { error: 'Each part may appear once per kit' });
+
+export const createKitSchema = z.object({
+  code: kitCodeSchema,
+  revision: revisionSchema,
+  description: requiredText('Description').trim().min(1, { error: 'Description is required' }).max(200),
+  components: componentsSchema,
+});
+export type CreateKitInput = z.infer<typeof createKitSchema>;
+
+export const updateKitSchema = z.object({
+  description: createKitSchema.shape.description.optional(),
+  active: z.boolean().optional(),
+  components: componentsSchema.optional(),
+  version: versionSchema,
+});
+export type UpdateKitInput = z.infer<typeof updateKitSchema>;
+
+export const copyKitSchema = z.object({ revision: revisionSchema });
+
+export const importCsvSchema = z.object({
+  csv: requiredText('CSV text').max(5_000_000, { error: 'At most 5 MB of CSV per import' }),
+  commit: z.boolean().default(false),
+});
+export type ImportCsvInput = z.infer<typeof importCsvSchema>;
+
+export interface KitComponentDto {
+  partId: number;
+  partNumber: string;
+  description: string;
+  quantity: number;
+  toleranceBelow: number;
+  toleranceAbove: number;
+}
+
+export interface KitDto {
+  id: number;
+  code: string;
+  revision: string;
+  description: string;
+  active: boolean;
+  components: KitComponentDto[];
+  version: number;
+  updatedAt: string;
+}

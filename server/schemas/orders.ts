@@ -1,0 +1,67 @@
+import { z } from 'zod';
+import type { LineVerdict, OrderStatus } from '@/models/columns';
+import { versionSchema } from './common';
+import { wholeCount } from './weights';
+
+export const createOrderSchema = z.object({
+  kitId: wholeCount('Kit'),
+  quantity: wholeCount('Number of kits').max(100_000, { error: 'At most 100 000 kits per order' }),
+  dueDate: z.iso.date({ error: 'Due date must be a date (YYYY-MM-DD)' }).nullish(),
+});
+export type CreateOrderInput = z.infer<typeof createOrderSchema>;
+
+export const orderActionSchema = z.object({ version: versionSchema });
+
+export const completeOrderSchema = z.object({
+  version: versionSchema,
+  // A planner may complete with lines not in tolerance; the reason is kept on the order.
+  overrideReason: z.string().trim().min(10, { error: 'Say in a sentence why the order is complete anyway' }).max(500).optional(),
+});
+export type CompleteOrderInput = z.infer<typeof completeOrderSchema>;
+
+export const listOrdersSchema = z.object({
+  status: z.enum(['draft', 'released', 'in_progress', 'complete', 'cancelled', 'open']).optional(),
+});
+
+export interface OrderLineDto {
+  id: number;
+  partId: number;
+  partNumber: string;
+  description: string;
+  quantityPerKit: number;
+  required: number;
+  toleranceBelow: number;
+  toleranceAbove: number;
+  counted: number;
+  expandedUncertainty: number;
+  captures: number;
+  verdict: LineVerdict;
+}
+
+export interface OrderDto {
+  id: number;
+  number: string;
+  kitId: number;
+  kitCode: string;
+  kitRevision: string;
+  kitDescription: string;
+  quantity: number;
+  dueDate: string | null;
+  status: OrderStatus;
+  releasedAt: string | null;
+  completedAt: string | null;
+  overrideReason: string | null;
+  lines: OrderLineDto[];
+  progress: { linesDone: number; lines: number };
+  version: number;
+}
+
+export interface AvailabilityLine {
+  partId: number;
+  partNumber: string;
+  required: number;
+  onHand: number;
+  reserved: number;
+  available: number;
+  shortage: number;
+}

@@ -1,0 +1,40 @@
+import 'server-only';
+import type { Transaction } from 'sequelize';
+import { BuildOrder, BuildOrderLine } from '@/models';
+import { AppError } from '../../errors';
+import { lineUncertainty, lineVerdict } from './line-verdict';
+
+export interface LineProgress {
+  id: number;
+  orderId: number;
+  required: number;
+  counted: number;
+  expandedUncertainty: number;
+  verdict: string;
+}
+
+// Adds one capture to a build-order line inside the capture's transaction, and moves a
+// released order to in progress. The line row is locked so parallel captures add up.
+export async function applyCountToLine(
+  opts: { orderLineId: number; partId: number; count: number; standardUncertainty: number },
+  transaction: Transaction,
+): Promise<LineProgress> {
+  const line = await BuildOrderLine.findByPk(opts.orderLineId, { transaction, lock: transaction.LOCK.UPDATE });
+  if (!line) throw new AppError('not_found', 'Order line was not found', { fields: { orderLineId: 'no such line' } });
+  if (line.partId !== opts.partId) throw new AppError('validation_failed', 'That line is for another part', { fields: { partId: 'does not match the order line' } });
+  const order = await BuildOrder.findByPk(line.orderId, { transaction, lock: transaction.LOCK.UPDATE });
+  if (!order || (order.status !== 'released' && order.status !== 'in_progress')) {
+    throw new AppError('rule_violated', `Order ${order?.number ?? ''} is not open for kitting (${order?.status ?? 'missing'})`);
+  }
+  const varianceSum = Number(line.varianceSum) + opts.standardUncertainty ** 2;
+  line.counted += opts.count;
+  line.captures += 1;
+  line.varianceSum = String(varianceSum);
+  line.verdict = lineVerdict({ ...line.get(), varianceSum, counted: line.counted, captures: line.captures });
+  await line.save({ transaction });
+  if (order.status === 'released') {
+    order.status = 'in_progress';
+    await order.save({ transaction });
+  }
+  return { id: line.id, orderId: line.orderId, required: line.required, counted: line.counted, expandedUncertainty: lineUncertainty(varianceSum), verdict: line.verdict };
+}
