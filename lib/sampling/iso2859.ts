@@ -32,7 +32,7 @@ const TABLE_1: ReadonlyArray<readonly [number, string, string, string]> = [
 export function codeLetter(lotSize: number, level: InspectionLevel = 'II'): string {
   if (!Number.isInteger(lotSize) || lotSize < 2) throw new RangeError('codeLetter: lotSize must be a whole number of at least 2');
   const row = TABLE_1.find(([upper]) => lotSize <= upper)!;
-  return row[{ I: 1, II: 2, III: 3 }[level]];
+  return level === 'I' ? row[1] : level === 'II' ? row[2] : row[3];
 }
 
 export function sampleSizeFor(letter: string): number {
