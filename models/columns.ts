@@ -35,3 +35,9 @@ export type MovementReason = (typeof MOVEMENT_REASONS)[number];
 
 export const ABC_CLASSES = ['A', 'B', 'C'] as const;
 export type AbcClass = (typeof ABC_CLASSES)[number];
+
+export { WEIGHT_CLASSES, type WeightClass } from '../lib/metrology/weight-classes';
+export const VERIFICATION_STAGES = ['initial', 'in_service'] as const;
+export const INSPECTION_LEVELS = ['I', 'II', 'III'] as const;
+export const AUDIT_STATUSES = ['open', 'closed'] as const;
+export const AUDIT_VERDICTS = ['accepted', 'rejected'] as const;

@@ -2,12 +2,16 @@ import type { Sequelize } from 'sequelize';
 
 // Every model names itself (modelName): production builds minify class names, and Sequelize
 // would otherwise register several models under the same one-letter name.
+import { Audit } from './audit';
+import { AuditItem } from './audit-item';
 import { Bin } from './bin';
 import { BuildOrder } from './build-order';
 import { BuildOrderLine } from './build-order-line';
+import { CalibrationRecord } from './calibration-record';
 import { Container } from './container';
 import { CountEvent } from './count-event';
 import { MailMessage } from './mail-message';
+import { JobRun } from './job-run';
 import { Kit } from './kit';
 import { KitComponent } from './kit-component';
 import { Part } from './part';
@@ -19,14 +23,19 @@ import { SignInThrottle } from './sign-in-throttle';
 import { SiteSettings } from './site-settings';
 import { StockMovement } from './stock-movement';
 import { StockReservation } from './stock-reservation';
+import { TestWeight } from './test-weight';
 import { User } from './user';
 
 export {
+  Audit,
+  AuditItem,
   Bin,
   BuildOrder,
   BuildOrderLine,
+  CalibrationRecord,
   Container,
   CountEvent,
+  JobRun,
   Kit,
   KitComponent,
   MailMessage,
@@ -39,6 +48,7 @@ export {
   SiteSettings,
   StockMovement,
   StockReservation,
+  TestWeight,
   User,
 };
 
@@ -48,7 +58,8 @@ export function initModels(sequelize: Sequelize): void {
   if (initialised.has(sequelize)) return;
   const models = [User, SiteSettings, PasswordToken, SignInThrottle, MailMessage, Scale, Container, Part, PieceWeightSample, CountEvent];
   const stockModels = [Bin, PartStock, StockMovement, Kit, KitComponent, BuildOrder, BuildOrderLine, StockReservation];
-  for (const model of [...models, ...stockModels]) {
+  const qualityModels = [TestWeight, CalibrationRecord, JobRun, Audit, AuditItem];
+  for (const model of [...models, ...stockModels, ...qualityModels]) {
     model.initModel(sequelize);
   }
   PasswordToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
@@ -64,5 +75,8 @@ export function initModels(sequelize: Sequelize): void {
   BuildOrder.hasMany(BuildOrderLine, { foreignKey: 'orderId', as: 'lines' });
   BuildOrderLine.belongsTo(BuildOrder, { foreignKey: 'orderId', as: 'order' });
   BuildOrderLine.belongsTo(Part, { foreignKey: 'partId', as: 'part' });
+  CalibrationRecord.belongsTo(Scale, { foreignKey: 'scaleId', as: 'scale' });
+  Audit.hasMany(AuditItem, { foreignKey: 'auditId', as: 'items' });
+  AuditItem.belongsTo(CountEvent, { foreignKey: 'countEventId', as: 'event' });
   initialised.add(sequelize);
 }

@@ -22,6 +22,7 @@ const capture: Role[] = ['operator', 'clerk', 'quality', 'admin'];
 const partEditors: Role[] = ['planner', 'clerk', 'admin'];
 const binEditors: Role[] = ['clerk', 'admin'];
 const planners: Role[] = ['planner', 'admin'];
+const quality: Role[] = ['quality', 'admin'];
 
 // Every route handler, and who may call it. Add each new route here (see DEVELOPERS.md).
 const MATRIX: Entry[] = [
@@ -68,6 +69,20 @@ const MATRIX: Entry[] = [
   { method: 'GET', route: '/api/v1/kitting-queue', allowed: everyone },
   { method: 'GET', route: '/api/v1/bins', allowed: everyone },
   { method: 'POST', route: '/api/v1/bins', allowed: binEditors, body: {} },
+  { method: 'POST', route: '/api/v1/calibration/evaluate', allowed: quality, body: {} },
+  { method: 'GET', route: '/api/v1/test-weights', allowed: everyone },
+  { method: 'POST', route: '/api/v1/test-weights', allowed: quality, body: {} },
+  { method: 'GET', route: '/api/v1/scales/[id]/calibrations', allowed: everyone, path: '/api/v1/scales/999999/calibrations' },
+  { method: 'POST', route: '/api/v1/scales/[id]/calibrations', allowed: quality, path: '/api/v1/scales/999999/calibrations', body: {} },
+  { method: 'POST', route: '/api/v1/scales/[id]/lock', allowed: quality, path: '/api/v1/scales/999999/lock', body: {} },
+  // Running the reminder job is idempotent: a second run changes nothing.
+  { method: 'POST', route: '/api/v1/jobs/calibration-reminders', allowed: quality },
+  { method: 'GET', route: '/api/v1/audits/sampling-plan', allowed: quality },
+  { method: 'GET', route: '/api/v1/audits', allowed: quality },
+  { method: 'POST', route: '/api/v1/audits', allowed: quality, body: {} },
+  { method: 'GET', route: '/api/v1/audits/[id]', allowed: quality, path: '/api/v1/audits/999999' },
+  { method: 'PUT', route: '/api/v1/audits/[id]/items/[itemId]', allowed: quality, path: '/api/v1/audits/999999/items/1', body: {} },
+  { method: 'GET', route: '/api/v1/reports/accuracy', allowed: quality },
 ];
 
 function routeFiles(dir: string): string[] {

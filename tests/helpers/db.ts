@@ -1,7 +1,7 @@
 // Direct database access for tests that build their own world (the same models the app uses).
 import { randomUUID } from 'node:crypto';
 import type { Sequelize } from 'sequelize';
-import { Bin, initModels, Part, Scale, User } from '../../models';
+import { Bin, initModels, Part, Scale, TestWeight, User } from '../../models';
 import { createSequelize } from '../../models/sequelize';
 import type { Role } from '../../lib/roles';
 import { hashPassword } from '../../server/auth/passwords';
@@ -87,4 +87,10 @@ export async function stockPart(partId: number, quantity: number): Promise<Bin> 
     await db.query('INSERT INTO part_stock (part_id, on_hand, reserved) VALUES (?, ?, 0) ON DUPLICATE KEY UPDATE on_hand = on_hand + VALUES(on_hand)', { replacements: [partId, quantity], transaction });
     return bin;
   });
+}
+
+// A certified test weight (nominal in grams) of an OIML R 111 class.
+export async function createTestWeight(nominalG: number, weightClass: 'E2' | 'F1' | 'F2' | 'M1' | 'M2' | 'M3' = 'F1', dueAt: string | null = null): Promise<TestWeight> {
+  testDb();
+  return TestWeight.create({ identifier: unique(`TW-${weightClass}-${nominalG}G`).toUpperCase(), nominalG: String(nominalG), weightClass, certificateNumber: 'CAL-TEST', certificateFile: null, dueAt });
 }

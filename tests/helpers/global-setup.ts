@@ -62,7 +62,8 @@ export async function setup(project: TestProject): Promise<void> {
   const mailDir = mkdtempSync(path.join(os.tmpdir(), 'tallyforge-mail-'));
   sink = await startSmtpSink({ port: 0, dir: mailDir });
   process.env.SMTP_PORT = String(sink.port);
-  const started = await startApp({ SMTP_HOST: '127.0.0.1', SMTP_PORT: String(sink.port)});
+  // Scheduled jobs run when a test asks (POST /api/v1/jobs/...), not by the clock.
+  const started = await startApp({ SMTP_HOST: '127.0.0.1', SMTP_PORT: String(sink.port), TF_JOBS: '0' });
   app = started.child;
   project.provide('baseUrl', started.url);
   project.provide('mailDir', mailDir);

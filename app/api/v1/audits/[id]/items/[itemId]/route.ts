@@ -1,0 +1,11 @@
+import { z } from 'zod';
+import { route } from '@/server/http/route';
+import { recordHandCountSchema } from '@/server/schemas/audits';
+import { recordHandCount } from '@/server/services/audits/record-hand-count';
+
+const params = z.object({ id: z.coerce.number().int().positive(), itemId: z.coerce.number().int().positive() });
+
+// PUT: keying the same hand count twice leaves the same state.
+export const PUT = route({ access: 'audits.run', params, body: recordHandCountSchema }, async ({ params: p, body, user }) => ({
+  audit: await recordHandCount({ auditId: p.id, itemId: p.itemId, handCount: body.handCount, by: user }),
+}));

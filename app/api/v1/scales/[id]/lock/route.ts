@@ -1,0 +1,8 @@
+import { route } from '@/server/http/route';
+import { lockScaleSchema } from '@/server/schemas/calibration';
+import { idParamSchema } from '@/server/schemas/common';
+import { lockScale } from '@/server/services/calibration/lock-scale';
+
+export const POST = route({ access: 'calibration.manage', params: idParamSchema, body: lockScaleSchema }, async ({ params, body, user }) => ({
+  scale: await lockScale({ scaleId: params.id, reason: body.reason, by: user }),
+}));

@@ -1,0 +1,31 @@
+import { toWholePieces } from '../weighing/count';
+
+export interface AuditedCount {
+  count: number;
+  expandedUncertainty: number;
+  exact: boolean;
+  handCount: number;
+}
+
+export interface ItemVerdict {
+  error: number;
+  /** The hand count lies inside the count's own stated interval count ± U (whole pieces). */
+  withinUncertainty: boolean;
+  /** For counts flagged exact: whether they were exactly right; null otherwise. */
+  exactRight: boolean | null;
+}
+
+// An item is nonconforming when the scale's count claimed more certainty than it had.
+export function judgeAuditItem(c: AuditedCount): ItemVerdict {
+  const error = c.count - c.handCount;
+  return {
+    error,
+    withinUncertainty: Math.abs(error) <= toWholePieces(c.expandedUncertainty),
+    exactRight: c.exact ? error === 0 : null,
+  };
+}
+
+/** ISO 2859-1 single sampling: accept the lot when nonconforming items ≤ Ac, reject at Re or more. */
+export function judgeLot(defects: number, accept: number): 'accepted' | 'rejected' {
+  return defects <= accept ? 'accepted' : 'rejected';
+}
