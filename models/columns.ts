@@ -41,3 +41,6 @@ export const VERIFICATION_STAGES = ['initial', 'in_service'] as const;
 export const INSPECTION_LEVELS = ['I', 'II', 'III'] as const;
 export const AUDIT_STATUSES = ['open', 'closed'] as const;
 export const AUDIT_VERDICTS = ['accepted', 'rejected'] as const;
+
+export const BIN_COUNT_STATUSES = ['applied', 'pending', 'approved', 'rejected'] as const;
+export type BinCountStatus = (typeof BIN_COUNT_STATUSES)[number];

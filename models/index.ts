@@ -5,6 +5,7 @@ import type { Sequelize } from 'sequelize';
 import { Audit } from './audit';
 import { AuditItem } from './audit-item';
 import { Bin } from './bin';
+import { BinCount } from './bin-count';
 import { BuildOrder } from './build-order';
 import { BuildOrderLine } from './build-order-line';
 import { CalibrationRecord } from './calibration-record';
@@ -30,6 +31,7 @@ export {
   Audit,
   AuditItem,
   Bin,
+  BinCount,
   BuildOrder,
   BuildOrderLine,
   CalibrationRecord,
@@ -57,7 +59,7 @@ const initialised = new WeakSet<Sequelize>();
 export function initModels(sequelize: Sequelize): void {
   if (initialised.has(sequelize)) return;
   const models = [User, SiteSettings, PasswordToken, SignInThrottle, MailMessage, Scale, Container, Part, PieceWeightSample, CountEvent];
-  const stockModels = [Bin, PartStock, StockMovement, Kit, KitComponent, BuildOrder, BuildOrderLine, StockReservation];
+  const stockModels = [Bin, BinCount, PartStock, StockMovement, Kit, KitComponent, BuildOrder, BuildOrderLine, StockReservation];
   const qualityModels = [TestWeight, CalibrationRecord, JobRun, Audit, AuditItem];
   for (const model of [...models, ...stockModels, ...qualityModels]) {
     model.initModel(sequelize);
@@ -69,6 +71,8 @@ export function initModels(sequelize: Sequelize): void {
   CountEvent.belongsTo(Scale, { foreignKey: 'scaleId', as: 'scale' });
   CountEvent.belongsTo(User, { foreignKey: 'operatorId', as: 'operator' });
   Bin.belongsTo(Part, { foreignKey: 'partId', as: 'part' });
+  BinCount.belongsTo(Bin, { foreignKey: 'binId', as: 'bin' });
+  BinCount.belongsTo(CountEvent, { foreignKey: 'countEventId', as: 'event' });
   Kit.hasMany(KitComponent, { foreignKey: 'kitId', as: 'components' });
   KitComponent.belongsTo(Part, { foreignKey: 'partId', as: 'part' });
   BuildOrder.belongsTo(Kit, { foreignKey: 'kitId', as: 'kit' });

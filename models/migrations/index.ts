@@ -2,6 +2,7 @@ import * as m0001 from './0001-foundation';
 import * as m0002 from './0002-counting-core';
 import * as m0003 from './0003-kits-orders-stock';
 import * as m0004 from './0004-quality';
+import * as m0005 from './0005-bin-counts';
 
 // Ordered list of migrations. Add a file `NNNN-what-it-does.ts` exporting up/down and list it here.
 export const migrations = [
@@ -9,4 +10,5 @@ export const migrations = [
   { name: '0002-counting-core', ...m0002 },
   { name: '0003-kits-orders-stock', ...m0003 },
   { name: '0004-quality', ...m0004 },
+  { name: '0005-bin-counts', ...m0005 },
 ];

@@ -25,6 +25,9 @@ export const recordCountSchema = z.object({
   targetQuantity: wholeCount('Target quantity').nullish(),
   // A kitting capture names the build-order line it fills (purpose kit_line).
   orderLineId: wholeCount('Order line').nullish(),
+  // A cycle count names the bin and the bin version it started from (purpose bin).
+  binId: wholeCount('Bin').nullish(),
+  binVersion: z.number().int().min(0).nullish(),
   stable: z.boolean({ error: 'stable must be true or false (was the reading steady?)' }),
 });
 export type RecordCountInput = z.infer<typeof recordCountSchema>;

@@ -83,6 +83,9 @@ const MATRIX: Entry[] = [
   { method: 'GET', route: '/api/v1/audits/[id]', allowed: quality, path: '/api/v1/audits/999999' },
   { method: 'PUT', route: '/api/v1/audits/[id]/items/[itemId]', allowed: quality, path: '/api/v1/audits/999999/items/1', body: {} },
   { method: 'GET', route: '/api/v1/reports/accuracy', allowed: quality },
+  { method: 'GET', route: '/api/v1/bins/due', allowed: everyone },
+  { method: 'GET', route: '/api/v1/bin-counts', allowed: everyone },
+  { method: 'POST', route: '/api/v1/bin-counts/[id]/decision', allowed: ['planner', 'quality', 'admin'], path: '/api/v1/bin-counts/999999/decision', body: {} },
 ];
 
 function routeFiles(dir: string): string[] {

@@ -2,21 +2,26 @@ import 'server-only';
 import { createHash } from 'node:crypto';
 import { UniqueConstraintError } from 'sequelize';
 import { Container, CountEvent, Part } from '@/models';
+import { binCountFor } from '../bins/bin-count-for';
 import { lineProgress } from '../orders/line-progress';
 import { estimateCount } from '@/lib/weighing';
 import { toGrams } from '@/lib/weighing/units';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
+import { retryOnDeadlock } from '../../retry-deadlock';
 import type { CountEventDto, RecordCountInput } from '../../schemas/counts';
+import { applyBinCount, type BinCountResult } from '../bins/apply-bin-count';
 import { applyCountToLine, type LineProgress } from '../orders/apply-count-to-line';
 import { loadUsableScale, scaleNoise } from '../scales/usable-scale';
 import { getSettings } from '../settings/get-settings';
 import { toCountEventDto } from './count-event-dto';
+import { lockCountTarget } from './lock-count-target';
 
 export interface CountAnswer {
   count: CountEventDto;
   line: LineProgress | null;
+  binCount: BinCountResult | null;
   replayed: boolean;
 }
 
@@ -33,19 +38,23 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
   const requestHash = createHash('sha256').update(JSON.stringify({ input, operator: by.id })).digest('hex');
   const earlier = await CountEvent.findOne({ where: { idempotencyKey } });
   if (earlier) return replay(earlier, requestHash);
-  const { defaultPieceSpread } = await getSettings();
+  const { defaultPieceSpread, varianceThresholdPcs, varianceThresholdPct } = await getSettings();
   try {
-    return await db.transaction(async (transaction) => {
+    return await retryOnDeadlock(() => db.transaction(async (transaction) => {
       const part = await Part.findByPk(input.partId, { transaction });
       if (!part) throw new AppError('not_found', 'Part was not found', { fields: { partId: 'no such part' } });
       if (part.countingMethod === 'hand') throw new AppError('rule_violated', `${part.partNumber} is counted by hand, not by weight`);
       if ((input.purpose === 'kit_line') !== Boolean(input.orderLineId)) {
         throw new AppError('validation_failed', 'A kit-line capture names its order line, and only it does', { fields: { orderLineId: input.purpose === 'kit_line' ? 'required for kit_line' : 'only for kit_line' } });
       }
+      if (input.binId && (input.purpose !== 'bin' || input.binVersion == null)) {
+        throw new AppError('validation_failed', 'A bin count is purpose bin and names the bin version it started from', { fields: { binVersion: 'required with binId for purpose bin' } });
+      }
       if (input.containerId && !(await Container.count({ where: { id: input.containerId }, transaction }))) {
         throw new AppError('not_found', 'Container was not found', { fields: { containerId: 'no such container' } });
       }
       const scale = await loadUsableScale(input.scaleId, transaction);
+      await lockCountTarget(input, transaction);
       const g = (v: number) => toGrams(v, input.unit);
       const gross = g(input.gross);
       const tare = g(input.tare);
@@ -96,15 +105,21 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
           warnings: result.warnings,
           operatorId: by.id,
           orderLineId: input.orderLineId ?? null,
-          binId: null,
+          binId: input.binId ?? null,
         },
         { transaction },
       );
       const line = input.orderLineId
         ? await applyCountToLine({ orderLineId: input.orderLineId, partId: part.id, count: result.count, standardUncertainty: result.standardUncertainty }, transaction)
         : null;
-      return { count: toCountEventDto(event), line, replayed: false };
-    });
+      const binCount = input.binId
+        ? await applyBinCount(
+            { binId: input.binId, binVersion: input.binVersion!, partId: part.id, countEventId: event.id, counted: result.count, limits: { pieces: varianceThresholdPcs, percent: varianceThresholdPct }, by: by.id },
+            transaction,
+          )
+        : null;
+      return { count: toCountEventDto(event), line, binCount, replayed: false };
+    }));
   } catch (err) {
     // Two tries with one key raced past the first lookup: the loser answers with the winner's event.
     if (err instanceof UniqueConstraintError) {
@@ -119,5 +134,7 @@ async function replay(event: CountEvent, requestHash: string): Promise<CountAnsw
   if (event.requestHash !== requestHash) {
     throw new AppError('conflict', 'This Idempotency-Key was already used for a different capture; send a new key for a new capture');
   }
-  return { count: toCountEventDto(event), line: event.orderLineId ? await lineProgress(event.orderLineId) : null, replayed: true };
+  const line = event.orderLineId ? await lineProgress(event.orderLineId) : null;
+  const binCount = event.binId ? await binCountFor(event.id) : null;
+  return { count: toCountEventDto(event), line, binCount, replayed: true };
 }

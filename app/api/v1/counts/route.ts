@@ -10,6 +10,6 @@ export const GET = route({ access: 'catalog.read', query: listCountsSchema }, as
 export const POST = route({ access: 'counts.capture', body: recordCountSchema }, async ({ req, body, user }) => {
   const key = idempotencyKeySchema.safeParse(req.headers.get('idempotency-key') ?? undefined);
   if (!key.success) throw new AppError('validation_failed', key.error.issues[0].message, { fields: { 'Idempotency-Key': key.error.issues[0].message } });
-  const { count, line, replayed } = await recordCount({ idempotencyKey: key.data, input: body, by: user });
-  return Response.json({ count, line }, { status: 201, headers: { 'Idempotent-Replayed': String(replayed) } });
+  const { count, line, binCount, replayed } = await recordCount({ idempotencyKey: key.data, input: body, by: user });
+  return Response.json({ count, line, binCount }, { status: 201, headers: { 'Idempotent-Replayed': String(replayed) } });
 });

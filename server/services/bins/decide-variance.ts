@@ -1,0 +1,25 @@
+import 'server-only';
+import { Bin, BinCount } from '@/models';
+import type { SessionUser } from '../../auth/session';
+import { getDb } from '../../db';
+import { AppError, notFound } from '../../errors';
+import { retryOnDeadlock } from '../../retry-deadlock';
+import { adjustBin } from '../stock/adjust-bin';
+
+// Approving books the variance as counted (the difference, so stock that moved since stays right);
+// rejecting leaves the book as it was and asks for a recount.
+export async function decideVariance({ binCountId, approve, note, by }: { binCountId: number; approve: boolean; note?: string | null; by: SessionUser }) {
+  const db = getDb();
+  return retryOnDeadlock(() =>
+    db.transaction(async (transaction) => {
+      const row = await BinCount.findByPk(binCountId, { transaction, lock: transaction.LOCK.UPDATE });
+      if (!row) throw notFound('Bin count');
+      if (row.status !== 'pending') throw new AppError('rule_violated', `This variance was already ${row.status}`);
+      const bin = (await Bin.findByPk(row.binId, { transaction, lock: transaction.LOCK.UPDATE }))!;
+      row.set({ status: approve ? 'approved' : 'rejected', decidedBy: by.id, decidedAt: new Date(), note: note ?? null });
+      await row.save({ transaction });
+      if (approve) await adjustBin(bin, row.variance, { type: 'bin_count', id: row.id, note: `variance approved by ${by.name}${note ? `: ${note}` : ''}`.slice(0, 300), by: by.id }, transaction);
+      return { id: row.id, binId: row.binId, binCode: bin.code, status: row.status, variance: row.variance, bookQuantity: bin.bookQuantity };
+    }),
+  );
+}

@@ -1,0 +1,98 @@
+import { randomUUID } from 'node:crypto';
+import { describe, expect, it } from 'vitest';
+import { Bin, PartStock, StockMovement } from '../../models';
+import { createPart, createScale, testDb } from '../helpers/db';
+import { signedIn, type Agent } from '../helpers/http';
+
+async function newBin(agent: Agent, partId: number, bookQuantity: number, abcClass = 'A') {
+  const code = `BZ-${String(1 + Math.floor(Math.random() * 99)).padStart(2, '0')}-${1 + Math.floor(Math.random() * 9)}-${String(1 + Math.floor(Math.random() * 99)).padStart(2, '0')}`;
+  const res = await agent.post('/api/v1/bins').send({ code: code.toLowerCase(), partId, bookQuantity, abcClass });
+  expect(res.status).toBe(201);
+  return res.body.bin;
+}
+
+// A bin count: the bulk weighed apart from a 20-piece sample of 0.5 g parts (10 g).
+function binCapture(partId: number, scaleId: number, bin: { id: number; version: number }, pieces: number) {
+  return { purpose: 'bin', binId: bin.id, binVersion: bin.version, partId, scaleId, gross: pieces * 0.5, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true };
+}
+
+describe('bins and cycle counts', () => {
+  it('creates bins with our code scheme and finds one by code (label contract)', async () => {
+    const { agent } = await signedIn('clerk');
+    const part = await createPart();
+    const bin = await newBin(agent, part.id, 200);
+    expect(bin.code).toMatch(/^BZ-\d{2}-\d-\d{2}$/);
+    const found = await agent.get(`/api/v1/bins?code=${bin.code.toLowerCase()}`);
+    expect(found.body.bins).toEqual([expect.objectContaining({ id: bin.id, code: bin.code, partId: part.id, bookQuantity: 200 })]);
+    const bad = await agent.post('/api/v1/bins').send({ code: 'shelf 4', partId: part.id, bookQuantity: 1 });
+    expect(bad.body.error.fields.code).toMatch(/ZONE-RACK-SHELF-SLOT/);
+    testDb();
+    expect((await PartStock.findByPk(part.id))!.onHand).toBe(200);
+  });
+
+  it('books a small variance at once and holds a large one for approval by quality or a planner', async () => {
+    const clerk = await signedIn('clerk');
+    const quality = await signedIn('quality');
+    const part = await createPart({ pieceSpread: 0.001 });
+    const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
+    const bin = await newBin(clerk.agent, part.id, 1000);
+    // 997 counted: 3 pieces, 0.3 % — within the default limits (5 pcs and 2 %).
+    const small = await clerk.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, bin, 997));
+    expect(small.status).toBe(201);
+    expect(small.body.binCount).toMatchObject({ bookQuantity: 1000, counted: 997, variance: -3, status: 'applied' });
+    testDb();
+    const afterSmall = await Bin.findByPk(bin.id);
+    expect(afterSmall!.bookQuantity).toBe(997);
+
+    // 900 counted: 97 pieces, 9.7 % — beyond both limits: pending, book unchanged.
+    const large = await clerk.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, { id: bin.id, version: afterSmall!.version }, 900));
+    expect(large.body.binCount).toMatchObject({ variance: -97, status: 'pending' });
+    expect((await Bin.findByPk(bin.id))!.bookQuantity).toBe(997);
+    const pending = await quality.agent.get(`/api/v1/bin-counts?status=pending&binId=${bin.id}`);
+    expect(pending.body.binCounts).toHaveLength(1);
+
+    expect((await clerk.agent.post(`/api/v1/bin-counts/${large.body.binCount.id}/decision`).send({ decision: 'approve' })).status).toBe(403);
+    const approved = await quality.agent.post(`/api/v1/bin-counts/${large.body.binCount.id}/decision`).send({ decision: 'approve', note: 'found a torn bag' });
+    expect(approved.body.binCount).toMatchObject({ status: 'approved', bookQuantity: 900 });
+    expect((await PartStock.findByPk(part.id))!.onHand).toBe(900);
+    expect(await StockMovement.sum('delta', { where: { binId: bin.id, reason: 'adjustment' } })).toBe(-100);
+    const twice = await quality.agent.post(`/api/v1/bin-counts/${large.body.binCount.id}/decision`).send({ decision: 'reject' });
+    expect(twice.status).toBe(422);
+  });
+
+  it('lets one of two clerks counting the same bin win; the other gets 409 and recounts, and nothing is lost', async () => {
+    const a = await signedIn('clerk');
+    const b = await signedIn('clerk');
+    const part = await createPart({ pieceSpread: 0.001 });
+    const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
+    const bin = await newBin(a.agent, part.id, 500);
+    const [first, second] = await Promise.all([
+      a.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, bin, 498)),
+      b.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, bin, 499)),
+    ]);
+    const statuses = [first.status, second.status].sort();
+    expect(statuses).toEqual([201, 409]);
+    const loser = first.status === 409 ? first : second;
+    expect(loser.body.error.code).toBe('stale_version');
+    testDb();
+    const fresh = await Bin.findByPk(bin.id);
+    const retry = await b.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, { id: bin.id, version: fresh!.version }, 499));
+    expect(retry.status).toBe(201);
+    const final = await Bin.findByPk(bin.id);
+    expect(final!.bookQuantity).toBe(499);
+    expect(await StockMovement.sum('delta', { where: { binId: bin.id } })).toBe(499);
+  });
+
+  it('plans cycle counts: never-counted bins are due, freshly counted ones are not', async () => {
+    const clerk = await signedIn('clerk');
+    const part = await createPart({ pieceSpread: 0.001 });
+    const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
+    const counted = await newBin(clerk.agent, part.id, 100, 'A');
+    const waiting = await newBin(clerk.agent, part.id, 100, 'C');
+    const capture = await clerk.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, counted, 100));
+    expect(capture.status, JSON.stringify(capture.body)).toBe(201);
+    const due = (await clerk.agent.get('/api/v1/bins/due')).body.bins.map((x: { id: number }) => x.id);
+    expect(due).toContain(waiting.id);
+    expect(due).not.toContain(counted.id);
+  });
+});
