@@ -19,8 +19,16 @@ describe('spreadFromIncrements', () => {
     expect(spreadFromIncrements([1.0, 1.02, 0.98, 1.01, 0.99], 0.01).pieceSpread).toBeCloseTo(0.012247, 6);
   });
 
-  it('floors the spread at zero when the noise explains all of the scatter', () => {
-    expect(spreadFromIncrements([1.0, 1.02, 0.98, 1.01, 0.99], 0.05).pieceSpread).toBe(0);
+  it('floors the spread at zero when the noise explains all of the scatter, and does not trust it', () => {
+    const r = spreadFromIncrements([1.0, 1.02, 0.98, 1.01, 0.99], 0.05);
+    expect(r.pieceSpread).toBe(0);
+    expect(r.enough).toBe(false);
+  });
+
+  // s² = 2.5e-4: with u(W) = 0.0079 g (noise 6.2e-5, a quarter of s²) it is still learned; at 0.0080 g it is not.
+  it('learns a spread only where the scatter is more than four times the noise variance', () => {
+    expect(spreadFromIncrements([1.0, 1.02, 0.98, 1.01, 0.99], 0.0079).enough).toBe(true);
+    expect(spreadFromIncrements([1.0, 1.02, 0.98, 1.01, 0.99], 0.008).enough).toBe(false);
   });
 
   it('says when there are too few increments to trust', () => {

@@ -10,6 +10,13 @@ export const DEFAULT_PIECE_SPREAD: number = 0.02;
 export const MIN_INCREMENTS: number = 5;
 export const MIN_SAMPLES: number = 3;
 
+/**
+ * A spread is only learned where the pieces' own scatter stands out from the weighing noise:
+ * observed variance above four times the noise variance (our rule). On a scale too coarse for the
+ * part the estimate would collapse to 0 and make counts look exact, so it is not trusted.
+ */
+export const RESOLUTION_FACTOR: number = 4;
+
 export interface SpreadEstimate {
   pieceSpread: number;
   observations: number;
@@ -41,9 +48,10 @@ export function spreadFromIncrements(
   if (m < 2) return { pieceSpread: 0, observations: m, enough: false };
   const mean = increments.reduce((sum, x) => sum + x, 0) / m;
   const ss = increments.reduce((sum, x) => sum + (x - mean) ** 2, 0);
-  const pieceVariance = Math.max(0, ss / (m - 1) - netWeightUncertainty ** 2);
-  const pieceSpread = mean > 0 ? Math.sqrt(pieceVariance) / mean : 0;
-  return { pieceSpread, observations: m, enough: m >= minObservations && mean > 0 };
+  const observed = ss / (m - 1);
+  const noise = netWeightUncertainty ** 2;
+  const pieceSpread = mean > 0 ? Math.sqrt(Math.max(0, observed - noise)) / mean : 0;
+  return { pieceSpread, observations: m, enough: m >= minObservations && mean > 0 && observed > RESOLUTION_FACTOR * noise };
 }
 
 /**
@@ -62,9 +70,9 @@ export function spreadFromSamples(
   const mean = samples.reduce((sum, s) => sum + s.quantity * s.averagePieceWeight, 0) / totalN;
   const weightedSs = samples.reduce((sum, s) => sum + s.quantity * (s.averagePieceWeight - mean) ** 2, 0);
   const noise = samples.reduce((sum, s) => sum + netWeightUncertainty ** 2 / s.quantity, 0) / k;
-  const pieceVariance = Math.max(0, weightedSs / (k - 1) - noise);
-  const pieceSpread = mean > 0 ? Math.sqrt(pieceVariance) / mean : 0;
-  return { pieceSpread, observations: k, enough: k >= minObservations && mean > 0 };
+  const observed = weightedSs / (k - 1);
+  const pieceSpread = mean > 0 ? Math.sqrt(Math.max(0, observed - noise)) / mean : 0;
+  return { pieceSpread, observations: k, enough: k >= minObservations && mean > 0 && observed > RESOLUTION_FACTOR * noise };
 }
 
 /** The learned spread when there is enough of it, otherwise the default (flagged as assumed). */
