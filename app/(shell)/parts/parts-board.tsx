@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import type { PartDto, PartImportRow } from '@/server/schemas/parts';
 import { CsvImport } from '../../_components/csv-import';
-import { DataGrid } from '../../_components/data-grid';
+import { DataGrid, fitHeight } from '../../_components/data-grid';
 import { PartForm } from './part-form';
 
 interface Props {
@@ -24,9 +24,9 @@ export function PartsBoard({ parts, total, q, canEdit, defaultSpread }: Props) {
   const [notice, setNotice] = useState<string | null>(null);
 
   const columns: ColDef<PartDto>[] = [
-    { field: 'partNumber', headerName: 'Part number', minWidth: 150, cellClass: 'num' },
+    { field: 'partNumber', headerName: 'Part number', minWidth: 210, cellClass: 'num' },
     { field: 'description', headerName: 'Description', minWidth: 220, flex: 2 },
-    { field: 'countingMethod', headerName: 'Counted by', maxWidth: 130, valueFormatter: (p) => (p.value === 'hand' ? 'Hand' : 'Scale') },
+    { field: 'countingMethod', headerName: 'Counted by', minWidth: 130, maxWidth: 150, valueFormatter: (p) => (p.value === 'hand' ? 'Hand' : 'Scale') },
     {
       field: 'averagePieceWeight',
       headerName: 'APW (g)',
@@ -87,7 +87,7 @@ export function PartsBoard({ parts, total, q, canEdit, defaultSpread }: Props) {
       <p role="status" aria-live="polite" className="min-h-6 text-sm text-ink-soft" data-testid="parts-notice">
         {notice ?? `${total} part${total === 1 ? '' : 's'}${q ? ` matching “${q}”` : ''}${total > parts.length ? `, first ${parts.length} shown` : ''}.`}
       </p>
-      <DataGrid label="Parts" rows={parts} columns={columns} rowId={(p) => String(p.id)} />
+      <DataGrid label="Parts" rows={parts} columns={columns} rowId={(p) => String(p.id)} height={fitHeight(parts.length)} />
       <p className="text-sm text-ink-faint">Spread is how much single pieces differ in weight. Until a part has learned its own from samples, the site default is assumed.</p>
       {canEdit ? (
         <CsvImport<PartImportRow>
