@@ -11,6 +11,9 @@ export interface NavItem {
 export const NAV_ITEMS: readonly NavItem[] = [
   { href: '/', label: 'Today', group: 'work' },
   { href: '/bench', label: 'Bench', permission: 'counts.capture', group: 'work' },
+  { href: '/orders', label: 'Build orders', permission: 'catalog.read', group: 'work' },
+  { href: '/kits', label: 'Kits', permission: 'catalog.read', group: 'work' },
+  { href: '/parts', label: 'Parts', permission: 'catalog.read', group: 'work' },
   { href: '/admin/users', label: 'People', permission: 'admin.manage', group: 'admin' },
   { href: '/admin/settings', label: 'Site settings', permission: 'admin.manage', group: 'admin' },
   { href: '/admin/mail', label: 'Outbox', permission: 'admin.manage', group: 'admin' },

@@ -18,6 +18,11 @@ const tallyTheme = themeQuartz.withParams({
   fontSize: 15,
 });
 
+// A grid as tall as its rows (header 44 px, rows 48 px, at least three), up to `max`, then it scrolls.
+export function fitHeight(rows: number, max = 520): number {
+  return Math.min(max, 44 + 48 * Math.max(3, rows) + 2);
+}
+
 interface DataGridProps<T> {
   rows: T[];
   columns: ColDef<T>[];
@@ -38,6 +43,9 @@ export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, l
         quickFilterText={quickFilter}
         defaultColDef={{ sortable: true, filter: true, resizable: true, flex: 1, minWidth: 110 }}
         animateRows={false}
+        // Every column stays in the page, so narrow screens scroll instead of dropping cells
+        // that find-in-page and screen readers would miss.
+        suppressColumnVirtualisation
       />
     </div>
   );

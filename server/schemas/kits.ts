@@ -45,12 +45,6 @@ export type UpdateKitInput = z.infer<typeof updateKitSchema>;
 
 export const copyKitSchema = z.object({ revision: revisionSchema });
 
-export const importCsvSchema = z.object({
-  csv: requiredText('CSV text').max(5_000_000, { error: 'At most 5 MB of CSV per import' }),
-  commit: z.boolean().default(false),
-});
-export type ImportCsvInput = z.infer<typeof importCsvSchema>;
-
 export interface KitComponentDto {
   partId: number;
   partNumber: string;
@@ -69,4 +63,39 @@ export interface KitDto {
   components: KitComponentDto[];
   version: number;
   updatedAt: string;
+}
+
+// CSV cells are text: whole numbers of pieces written as digits.
+const wholeText = (label: string, min: number) =>
+  z
+    .string()
+    .trim()
+    .regex(/^\d+$/, { error: `${label} must be a whole number` })
+    .transform(Number)
+    .pipe(z.number().min(min, { error: `${label} must be at least ${min}` }).max(100_000, { error: `${label} is implausibly large` }));
+
+export const BOM_CSV_COLUMNS = ['kit_code', 'revision', 'description', 'part_number', 'quantity', 'tolerance_below', 'tolerance_above'] as const;
+
+export const bomCsvRowSchema = z.object({
+  kit_code: kitCodeSchema,
+  revision: revisionSchema,
+  description: z.string().trim().max(200, { error: 'At most 200 characters' }),
+  part_number: requiredText('Part number').trim().toUpperCase().min(1, { error: 'Part number is required' }),
+  quantity: wholeText('Quantity', 1),
+  tolerance_below: z.string().trim().transform((t) => t || '0').pipe(wholeText('Tolerance below', 0)),
+  tolerance_above: z.string().trim().transform((t) => t || '0').pipe(wholeText('Tolerance above', 0)),
+});
+
+export interface BomImportRow {
+  line: number;
+  kitCode: string;
+  revision: string;
+  description: string;
+  partNumber: string;
+  quantity: string;
+  toleranceBelow: string;
+  toleranceAbove: string;
+  // An existing revision has its bill of material replaced by the file's lines.
+  action: 'create' | 'replace';
+  errors: Record<string, string>;
 }

@@ -69,3 +69,18 @@ export interface SampleDto {
   createdBy: number;
   createdAt: string;
 }
+
+export const exportPartsSchema = listPartsSchema.pick({ q: true, sort: true, dir: true });
+export type ExportPartsQuery = z.infer<typeof exportPartsSchema>;
+
+export const PART_CSV_COLUMNS = ['part_number', 'description', 'counting_method'] as const;
+
+export interface PartImportRow {
+  line: number;
+  partNumber: string;
+  description: string;
+  countingMethod: string;
+  // A part number that already exists updates that part; a new one creates it.
+  action: 'create' | 'update';
+  errors: Record<string, string>;
+}

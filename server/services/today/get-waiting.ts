@@ -1,8 +1,9 @@
 import 'server-only';
 import { Op } from 'sequelize';
 import { MailMessage, User } from '@/models';
-import type { Role } from '@/lib/roles';
+import { can, type Role } from '@/lib/roles';
 import { getDb } from '../../db';
+import { plannerWaiting } from './planner-waiting';
 
 export interface WaitingItem {
   key: string;
@@ -12,7 +13,7 @@ export interface WaitingItem {
   href: string;
 }
 
-type Source = (role: Role) => Promise<WaitingItem | null>;
+type Source = (role: Role) => Promise<WaitingItem | WaitingItem[] | null>;
 
 // Each source answers for the roles it concerns; the Today page lists the non-empty ones.
 const SOURCES: Source[] = [
@@ -27,10 +28,11 @@ const SOURCES: Source[] = [
     const count = await MailMessage.count({ where: { status: 'failed', createdAt: { [Op.gte]: since } } });
     return { key: 'mail', title: 'E-mails that failed this week', count, detail: 'Check the mail relay settings', href: '/admin/mail' };
   },
+  async (role) => (can(role, 'orders.manage') ? plannerWaiting(new Date().toISOString().slice(0, 10)) : null),
 ];
 
 export async function getWaiting(role: Role): Promise<WaitingItem[]> {
   getDb();
   const items = await Promise.all(SOURCES.map((s) => s(role)));
-  return items.filter((i): i is WaitingItem => i !== null && i.count > 0);
+  return items.flat().filter((i): i is WaitingItem => i !== null && i.count > 0);
 }

@@ -1,0 +1,63 @@
+'use client';
+
+import { Field, Form, Formik } from 'formik';
+import { useState } from 'react';
+import * as yup from 'yup';
+import type { PartDto } from '@/server/schemas/parts';
+import { apiFetch } from '../../_components/api-client';
+import { FormField, FormMessage } from '../../_components/form-field';
+
+const schema = yup.object({
+  partNumber: yup
+    .string()
+    .trim()
+    .matches(/^[A-Za-z0-9][A-Za-z0-9._\-/]{0,39}$/, 'Letters, digits and . _ - / only, at most 40 characters')
+    .required('Part number is required'),
+  description: yup.string().trim().max(200, 'At most 200 characters').required('Description is required'),
+  countingMethod: yup.string().oneOf(['scale', 'hand']).required(),
+});
+
+// Creates a part, or edits the one given (its part number stays: labels and scans carry it).
+export function PartForm({ part, onSaved, onCancel }: { part: PartDto | null; onSaved: (p: PartDto) => void; onCancel: () => void }) {
+  const [message, setMessage] = useState<string | null>(null);
+  return (
+    <Formik
+      initialValues={{ partNumber: part?.partNumber ?? '', description: part?.description ?? '', countingMethod: part?.countingMethod ?? 'scale' }}
+      enableReinitialize
+      validationSchema={schema}
+      onSubmit={async (values, helpers) => {
+        setMessage(null);
+        const res = part
+          ? await apiFetch<{ part: PartDto }>(`/api/v1/parts/${part.id}`, { method: 'PATCH', body: { description: values.description, countingMethod: values.countingMethod, version: part.version } })
+          : await apiFetch<{ part: PartDto }>('/api/v1/parts', { method: 'POST', body: values });
+        if (res.ok) {
+          onSaved(res.data.part);
+          if (!part) helpers.resetForm();
+          return;
+        }
+        helpers.setErrors(res.fields);
+        setMessage(res.message);
+      }}
+    >
+      {({ isSubmitting }) => (
+        <Form noValidate className="card grid gap-4 md:grid-cols-[12rem_1fr_10rem] md:items-start" aria-label={part ? `Edit ${part.partNumber}` : 'New part'}>
+          <h2 className="md:col-span-3 font-bold">{part ? `Edit ${part.partNumber}` : 'New part'}</h2>
+          <FormField name="partNumber" label="Part number" autoComplete="off" disabled={Boolean(part)} />
+          <FormField name="description" label="Description" autoComplete="off" />
+          <div>
+            <label htmlFor="f-countingMethod" className="field-label">Counted by</label>
+            <Field as="select" id="f-countingMethod" name="countingMethod" className="field">
+              <option value="scale">Scale</option>
+              <option value="hand">Hand</option>
+            </Field>
+          </div>
+          <div className="md:col-span-3 flex flex-wrap gap-3 items-center">
+            <button type="submit" className="btn-primary" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : part ? 'Save part' : 'Add part'}</button>
+            <button type="button" className="btn-quiet" onClick={onCancel}>Close</button>
+            <FormMessage message={message} />
+          </div>
+        </Form>
+      )}
+    </Formik>
+  );
+}
