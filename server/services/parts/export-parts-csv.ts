@@ -1,7 +1,7 @@
 import 'server-only';
 import { stringify } from 'csv-stringify/sync';
 import { Part } from '@/models';
-import { neutraliseCell } from '@/lib/csv/neutralise-cell';
+import { safeCell } from '@/lib/csv-safe';
 import { getDb } from '../../db';
 import type { ExportPartsQuery } from '../../schemas/parts';
 import { toPartDto } from './part-dto';
@@ -14,5 +14,5 @@ export async function exportPartsCsv(query: ExportPartsQuery): Promise<string> {
   getDb();
   const parts = await Part.findAll({ where: partSearch(query.q), order: [[query.sort, query.dir.toUpperCase()]], limit: 50_000 });
   const rows = parts.map(toPartDto).map((p) => [p.partNumber, p.description, p.countingMethod, p.averagePieceWeight, p.apwSampleSize, p.pieceSpread, p.spreadLearned ? 'yes' : 'no']);
-  return stringify([HEADER, ...rows.map((r) => r.map(neutraliseCell))]);
+  return stringify([HEADER, ...rows.map((r) => r.map(safeCell))]);
 }
