@@ -30,7 +30,9 @@ export async function proxy(req: NextRequest): Promise<NextResponse> {
     return res;
   }
 
-  const res = isApi ? NextResponse.next() : withContentSecurityPolicy(req);
+  const requestId = req.headers.get('x-request-id') ?? crypto.randomUUID();
+  const res = isApi ? NextResponse.next({ request: { headers: withHeader(req.headers, 'x-request-id', requestId) } }) : withContentSecurityPolicy(req, requestId);
+  res.headers.set('x-request-id', requestId);
   if (live && now - (data.seenAt ?? 0) > REFRESH_AFTER_MS) {
     const fresh = await sealData({ ...data, seenAt: now }, { password: options.password, ttl: options.ttl });
     res.cookies.set(SESSION_COOKIE, fresh, { ...options.cookieOptions, maxAge: (options.ttl ?? 0) - 60 });
@@ -40,7 +42,13 @@ export async function proxy(req: NextRequest): Promise<NextResponse> {
 
 // A fresh nonce per page: Next puts it on its own scripts, and nothing else may run.
 // Inline style attributes stay allowed (React style props, the data grid's sizing).
-function withContentSecurityPolicy(req: NextRequest): NextResponse {
+function withHeader(source: Headers, name: string, value: string): Headers {
+  const headers = new Headers(source);
+  headers.set(name, value);
+  return headers;
+}
+
+function withContentSecurityPolicy(req: NextRequest, requestId: string): NextResponse {
   const nonce = Buffer.from(crypto.randomUUID()).toString('base64');
   const policy = [
     "default-src 'self'",
@@ -54,7 +62,7 @@ function withContentSecurityPolicy(req: NextRequest): NextResponse {
     "form-action 'self'",
     "frame-ancestors 'none'",
   ].join('; ');
-  const headers = new Headers(req.headers);
+  const headers = withHeader(req.headers, 'x-request-id', requestId);
   headers.set('x-nonce', nonce);
   headers.set('Content-Security-Policy', policy);
   const res = NextResponse.next({ request: { headers } });

@@ -2,6 +2,7 @@ import 'server-only';
 import { UniqueConstraintError, OptimisticLockError, ConnectionError, ValidationError, ForeignKeyConstraintError } from 'sequelize';
 import { ZodError } from 'zod';
 import { AppError } from '../errors';
+import { log } from '../log';
 import { zodFields } from './zod-fields';
 
 export interface ErrorBody {
@@ -32,9 +33,9 @@ export function toAppError(err: unknown): AppError {
   return new AppError('internal', 'Something went wrong on our side');
 }
 
-export function errorResponse(err: unknown): Response {
+export function errorResponse(err: unknown, requestId?: string | null): Response {
   const appError = toAppError(err);
-  if (appError.code === 'internal' || appError.code === 'unavailable') console.error('[api]', err);
+  if (appError.code === 'internal' || appError.code === 'unavailable') log.error({ err, requestId }, 'request failed');
   const body: ErrorBody = { error: { code: appError.code, message: appError.message } };
   if (appError.fields && Object.keys(appError.fields).length) body.error.fields = appError.fields;
   return Response.json(body, { status: appError.status, headers: appError.headers });

@@ -46,7 +46,7 @@ export function route<A extends Access, B extends z.ZodType | undefined = undefi
       if (result === undefined) return new Response(null, { status: 204 });
       return Response.json(result);
     } catch (err) {
-      return errorResponse(err);
+      return errorResponse(err, req.headers.get('x-request-id'));
     }
   };
 }

@@ -3,6 +3,7 @@ import { MailMessage } from '@/models';
 import type { MailStatus } from '@/models/mail-message';
 import { getDb } from '../db';
 import { getEnv } from '../env';
+import { log } from '../log';
 import { getTransport } from './transport';
 
 export interface OutgoingMail {
@@ -33,7 +34,7 @@ export async function sendMail(mail: OutgoingMail): Promise<MailStatus> {
   } catch (err) {
     const message = err instanceof Error ? err.message : String(err);
     await row.update({ status: 'failed', error: message.slice(0, 500) });
-    console.error('[mail] send failed', mail.kind, message);
+    log.warn({ kind: mail.kind, err: message }, 'mail send failed');
     return 'failed';
   }
 }

@@ -25,4 +25,9 @@ describe('security headers', () => {
     expect(res.headers['referrer-policy']).toBe('same-origin');
     expect(res.headers['x-powered-by']).toBeUndefined();
   });
+
+  it('tags every answer with a request id for the logs, keeping one the caller sent', async () => {
+    expect((await anonymous().get('/api/v1/health')).headers['x-request-id']).toMatch(/^[0-9a-f-]{36}$/);
+    expect((await anonymous().get('/api/v1/health').set('X-Request-Id', 'bench-7-retry')).headers['x-request-id']).toBe('bench-7-retry');
+  });
 });
