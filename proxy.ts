@@ -30,7 +30,9 @@ export async function proxy(req: NextRequest): Promise<NextResponse> {
     return res;
   }
 
-  const requestId = req.headers.get('x-request-id') ?? crypto.randomUUID();
+  // A caller's own id is kept when it is a plain token, so a retry can be traced end to end.
+  const offered = req.headers.get('x-request-id');
+  const requestId = offered && /^[\w.:-]{1,100}$/.test(offered) ? offered : crypto.randomUUID();
   const res = isApi ? NextResponse.next({ request: { headers: withHeader(req.headers, 'x-request-id', requestId) } }) : withContentSecurityPolicy(req, requestId);
   res.headers.set('x-request-id', requestId);
   if (live && now - (data.seenAt ?? 0) > REFRESH_AFTER_MS) {
