@@ -61,7 +61,9 @@ function sampleBase(work: BenchWork): number {
 /** A counted sample on the pan, weighed as one stable mean. */
 export function takeSample(work: BenchWork, quantity: number, stableGross: number): BenchWork {
   const sample = { quantity, netWeight: stableGross - sampleBase(work) };
-  return { ...work, sample, step: work.purpose === 'bin' ? 'count' : 'grow' };
+  // A bin starts with no container tare; choosing the bin's container adds it.
+  if (work.purpose === 'bin') return { ...work, sample, step: 'count', tare: work.panZero };
+  return { ...work, sample, step: 'grow' };
 }
 
 /** One more piece put on while building the sample piece by piece. */
