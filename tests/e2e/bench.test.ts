@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Container, CountEvent } from '../../models';
 import { createPart, createScale, testDb, unique } from '../helpers/db';
 import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
-import { liveCount, openBench, panButton, putOn, waitSettled } from '../helpers/bench';
+import { headingShown, liveCount, openBench, panButton, putOn, waitSettled, whenSettled } from '../helpers/bench';
 
 // A quiet scale (s_r = 0.2 d) so the ±1 d stability window settles within a second or two.
 const benchScale = (o: Parameters<typeof createScale>[0] = {}) => createScale({ repeatabilityG: 0.02, ...o });
@@ -35,29 +35,26 @@ describe('the bench (browser, simulated scale)', () => {
 
     await panButton(page, /Place container/);
     await waitSettled(page);
-    await page.keyboard.press('t');
-    await expect.poll(() => page.getByRole('heading', { name: /Count \d+ pieces onto the pan/ }).isVisible()).toBe(true);
+    await whenSettled(page, () => page.keyboard.press('t'), headingShown(page, /Count \d+ pieces onto the pan/));
     await page.getByLabel('Pieces in the sample').fill('10');
     await putOn(page, 10);
     await screenshot(page, 'bench-2-sample');
-    await page.keyboard.press('s');
-    await expect.poll(() => page.getByRole('heading', { name: 'Grow the sample (now 10 pcs)' }).isVisible()).toBe(true);
+    await whenSettled(page, () => page.keyboard.press('s'), headingShown(page, 'Grow the sample (now 10 pcs)'));
 
     const maxAdd = Number(await page.getByTestId('grow-plan').getAttribute('data-max-add'));
     expect(maxAdd).toBeGreaterThanOrEqual(20);
     await putOn(page, 20);
     await screenshot(page, 'bench-3-grow');
-    await page.keyboard.press('g');
-    await expect.poll(() => page.getByRole('heading', { name: 'Grow the sample (now 30 pcs)' }).isVisible()).toBe(true);
+    await whenSettled(page, () => page.keyboard.press('g'), headingShown(page, 'Grow the sample (now 30 pcs)'));
     await page.keyboard.press('n');
     await putOn(page, 70);
     expect(await liveCount(page)).toBe(100);
     await expect.poll(() => page.getByTestId('verdict').getAttribute('data-verdict')).toBe('in');
     await screenshot(page, 'bench-4-count');
 
-    await page.keyboard.press('c');
     const result = page.getByTestId('capture-result');
-    await expect.poll(() => result.getAttribute('data-count')).toBe('100');
+    await whenSettled(page, () => page.keyboard.press('c'), async () => (await result.count()) === 1);
+    expect(await result.getAttribute('data-count')).toBe('100');
     await screenshot(page, 'bench-5-captured');
     testDb();
     const events = await CountEvent.findAll({ where: { partId: part.id } });
@@ -77,20 +74,19 @@ describe('the bench (browser, simulated scale)', () => {
     await page.getByText('Bin count — bin weighed apart').click();
     await page.getByLabel('Scan or type a part number').fill(part.partNumber);
     await page.getByRole('list', { name: 'Matching parts' }).getByRole('button', { name: new RegExp(part.partNumber) }).click();
-    await page.getByRole('button', { name: /Zero the empty pan/ }).click();
+    await waitSettled(page);
+    await whenSettled(page, () => page.getByRole('button', { name: /Zero the empty pan/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
     await page.getByLabel('Pieces in the sample').fill('20');
     await putOn(page, 20);
     await screenshot(page, 'bench-bin-1-sample');
-    await page.getByRole('button', { name: /Sample of 20 is on/ }).click();
-    await expect.poll(() => page.getByRole('heading', { name: 'Put the bin on the pan' }).isVisible()).toBe(true);
+    await whenSettled(page, () => page.getByRole('button', { name: /Sample of 20 is on/ }).click(), headingShown(page, 'Put the bin on the pan'));
     await page.getByLabel('The bin’s container (its tare comes off)').selectOption(String(bin.id));
     await panButton(page, 'Empty the pan');
     await panButton(page, 'Place container (400 g)');
     await putOn(page, 300);
     await screenshot(page, 'bench-bin-2-count');
-    await page.getByRole('button', { name: /Capture this count/ }).click();
     const result = page.getByTestId('capture-result');
-    await expect.poll(() => result.getAttribute('data-count')).not.toBeNull();
+    await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await result.count()) === 1);
     await screenshot(page, 'bench-bin-3-captured');
     const [event] = await CountEvent.findAll({ where: { partId: part.id } });
     expect(event).toMatchObject({ purpose: 'bin', sampleOnPan: false, sampleQuantity: 20, containerId: bin.id });
@@ -108,10 +104,11 @@ describe('the bench (browser, simulated scale)', () => {
     await openBench(page, scale.id, 3);
     await page.getByLabel('Scan or type a part number').fill(part.partNumber);
     await page.getByLabel('Scan or type a part number').press('Enter');
-    await page.getByRole('button', { name: /Tare now/ }).click();
+    await waitSettled(page); // the practice pan starts afresh with the chosen part
+    await whenSettled(page, () => page.getByRole('button', { name: /Tare now/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
     await page.getByLabel('Pieces in the sample').fill('10');
     await putOn(page, 10);
-    await page.getByRole('button', { name: /Sample of 10 is on/ }).click();
+    await whenSettled(page, () => page.getByRole('button', { name: /Sample of 10 is on/ }).click(), headingShown(page, /Grow the sample/));
     const warning = page.locator('[data-warning="apw_below_resolution"]');
     await expect.poll(() => warning.isVisible()).toBe(true);
     expect(await warning.textContent()).toContain('One piece weighs less than the smallest step this scale shows');
@@ -130,9 +127,10 @@ describe('the bench (browser, simulated scale)', () => {
     expect(await page.locator('[data-warning="scale_locked"]').isVisible()).toBe(true);
     await page.getByLabel('Scan or type a part number').fill(part.partNumber);
     await page.getByLabel('Scan or type a part number').press('Enter');
-    await page.getByRole('button', { name: /Tare now/ }).click();
+    await waitSettled(page); // the practice pan starts afresh with the chosen part
+    await whenSettled(page, () => page.getByRole('button', { name: /Tare now/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
     await putOn(page, 10);
-    await page.getByRole('button', { name: /Sample of 10 is on/ }).click();
+    await whenSettled(page, () => page.getByRole('button', { name: /Sample of 10 is on/ }).click(), headingShown(page, /Grow the sample/));
     await page.getByRole('button', { name: /Count to target/ }).click();
     expect(await page.getByRole('button', { name: /Capture this count/ }).isDisabled()).toBe(true);
     expect(await page.getByTestId('capture-blocked').textContent()).toContain('locked');
@@ -148,9 +146,9 @@ describe('the bench (browser, simulated scale)', () => {
     await page.getByLabel('Scan or type a part number').press('Enter');
     await panButton(page, /Place container/);
     await waitSettled(page);
-    await page.getByRole('button', { name: /Tare now/ }).click();
+    await whenSettled(page, () => page.getByRole('button', { name: /Tare now/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
     await putOn(page, 10);
-    await page.getByRole('button', { name: /Sample of 10 is on/ }).click();
+    await whenSettled(page, () => page.getByRole('button', { name: /Sample of 10 is on/ }).click(), headingShown(page, /Grow the sample/));
     await putOn(page, 15);
     expect(await liveCount(page)).toBe(25);
     await page.reload();
@@ -169,15 +167,15 @@ describe('the bench (browser, simulated scale)', () => {
     await openBench(page, scale.id, 31);
     await page.getByLabel('Scan or type a part number').fill(part.partNumber);
     await page.getByLabel('Scan or type a part number').press('Enter');
-    await page.getByRole('button', { name: /Tare now/ }).click();
+    await waitSettled(page); // the practice pan starts afresh with the chosen part
+    await whenSettled(page, () => page.getByRole('button', { name: /Tare now/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
     await putOn(page, 10);
-    await page.getByRole('button', { name: /Sample of 10 is on/ }).click();
+    await whenSettled(page, () => page.getByRole('button', { name: /Sample of 10 is on/ }).click(), headingShown(page, /Grow the sample/));
     await page.getByRole('button', { name: /Count to target/ }).click();
     await putOn(page, 10);
     await landscape.setOffline(true);
-    await page.getByRole('button', { name: /Capture this count/ }).click();
     const queued = page.getByTestId('capture-queue').locator('li');
-    await expect.poll(() => queued.count()).toBe(1);
+    await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await queued.count()) === 1);
     const key = (await queued.first().getAttribute('data-key'))!;
     await screenshot(page, 'bench-offline-queued');
     testDb();

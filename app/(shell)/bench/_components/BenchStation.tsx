@@ -291,7 +291,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
   if (locked) codes.push('scale_locked');
   if (notice?.code && !codes.includes(notice.code)) codes.push(notice.code);
 
-  const verdict = work?.targetQuantity != null && frame?.estimate && work.step !== 'tare'
+  const verdict = work?.targetQuantity != null && frame?.estimate && (work.step === 'count' || work.step === 'captured')
     ? judgeKitLine({ count: frame.estimate.count, expandedUncertainty: frame.estimate.expandedUncertainty }, { target: work.targetQuantity, below: work.tolerance?.below ?? 0, above: work.tolerance?.above ?? 0 })
     : null;
   const showing = !work || work.step === 'tare' ? 'gross' : work.step === 'sample' ? 'net' : 'count';

@@ -47,7 +47,8 @@ export function WorkChooser({ onChoose, disabled }: Props) {
     const t = purpose === 'part' ? wholeOrNull(target) : null;
     const tolerance: ToleranceBand | undefined = t != null ? { below: wholeOrNull(below) ?? 0, above: wholeOrNull(above) ?? 0 } : undefined;
     setMessage(null);
-    onChoose({ ...item, targetQuantity: t ?? undefined, tolerance });
+    // The kind chosen now wins over a list item fetched before the switch.
+    onChoose({ ...item, purpose, targetQuantity: t ?? undefined, tolerance });
   };
 
   const scan = async () => {

@@ -21,7 +21,10 @@ export function useReadingFeed(source: ReadingSource | null, scale: PipelineScal
 
   useEffect(() => {
     if (!source || !scale) return;
-    const pipeline = createReadingPipeline(scale, { ...options, trace: traceRef.current });
+    const trace = traceRef.current;
+    const pipeline = createReadingPipeline(scale, { ...options, trace });
+    // Each source has its own clock (a new simulator starts at 0): carry on the session's time line.
+    let offset: number | null = null;
     let scheduled = 0;
     const publish = () => {
       scheduled = 0;
@@ -29,7 +32,8 @@ export function useReadingFeed(source: ReadingSource | null, scale: PipelineScal
       setReadings(countRef.current);
     };
     const unsubscribe = source.subscribe((reading) => {
-      frameRef.current = pipeline.push(reading, workRef.current);
+      offset ??= (trace.newestTime() ?? 0) + 1 - reading.t;
+      frameRef.current = pipeline.push(offset === 0 ? reading : { ...reading, t: reading.t + offset }, workRef.current);
       countRef.current += 1;
       if (!scheduled) scheduled = requestAnimationFrame(publish);
     });
