@@ -48,7 +48,9 @@ export function LiveTrace({ trace, frameRef, division, windowMs }: Props) {
         const x1 = u.valToPos((f.t - windowMs - t0) / 1000, 'x', true);
         const x2 = u.valToPos((f.t - t0) / 1000, 'x', true);
         ctx.fillStyle = 'rgba(47,125,87,0.22)';
-        ctx.fillRect(x1, Math.min(y1, y2), x2 - x1, Math.max(2, Math.abs(y2 - y1)));
+        // At least 6 px tall, or a ±1 d band on a heavy load would vanish into the line.
+        const h = Math.max(6 * devicePixelRatio, Math.abs(y2 - y1));
+        ctx.fillRect(x1, (y1 + y2) / 2 - h / 2, x2 - x1, h);
       }
       for (const m of trace.marks) {
         if (t0 === undefined) break;
