@@ -1,26 +1,30 @@
 #!/usr/bin/env bash
-# npm run bench [scripts/bench-x.ts ...]: runs every scripts/bench-*.ts (or the ones named) against a
-# throwaway database on its own MariaDB instance (.data/bench, port TF_BENCH_DB_PORT or 3329).
-# Each bench appends its figures to bench-results/<name>.json.
+# npm run bench: the figures behind the speed goals, written to bench-results/ (git-ignored).
+#   1. the bench page's per-reading pipeline and first-load JavaScript (no database; builds if needed);
+#   2. every scripts/bench/db-*.ts against a throwaway database on its own MariaDB (.data/bench,
+#      port TF_BENCH_DB_PORT or 3329); each appends to bench-results/<name>.json.
 source "$(dirname "$0")/lib.sh"
 cd "$ROOT"
-
 ensure_node_modules
+TSX="$ROOT/node_modules/.bin/tsx --conditions=react-server"
+
+if [ "${1:-}" = "--build" ] || [ ! -f .next/build-manifest.json ]; then
+  log "building (next build)"
+  "$ROOT/node_modules/.bin/next" build >/dev/null
+fi
+mkdir -p bench-results
+log "bench: scale pipeline and page weight"
+"$ROOT/node_modules/.bin/tsx" scripts/bench/run-bench.ts
+
 ensure_mariadb
 export DB_NAME="tallyforge_bench_$$"
 db_start bench "${TF_BENCH_DB_PORT:-3329}"
 drop_bench_db() { mariadb --no-defaults -S "$ROOT/.data/bench/run/mariadb.sock" -u root -e "DROP DATABASE IF EXISTS \`$DB_NAME\`" || true; db_stop bench; }
 trap drop_bench_db EXIT
-
 export NODE_ENV=production
 export SESSION_SECRET="bench-secret-$(head -c 24 /dev/urandom | base64 | tr -d '/+=')"
-TSX="$ROOT/node_modules/.bin/tsx --conditions=react-server"
-$TSX scripts/migrate.ts
-mkdir -p bench-results
-
-benches=("$@")
-[ ${#benches[@]} -gt 0 ] || benches=(scripts/bench-*.ts)
-for bench in "${benches[@]}"; do
+$TSX scripts/migrate.ts >/dev/null
+for bench in scripts/bench/db-*.ts; do
   log "bench: $bench"
   $TSX "$bench"
 done

@@ -63,14 +63,14 @@ export async function createScale(overrides: Partial<{ name: string; capacityG: 
   });
 }
 
-export async function createPart(overrides: Partial<{ partNumber: string; pieceSpread: number | null; countingMethod: 'scale' | 'hand' }> = {}): Promise<Part> {
+export async function createPart(overrides: Partial<{ partNumber: string; pieceSpread: number | null; countingMethod: 'scale' | 'hand'; apwG: number }> = {}): Promise<Part> {
   testDb();
   return Part.create({
     partNumber: overrides.partNumber ?? unique('P').toUpperCase(),
     description: 'Test part',
     countingMethod: overrides.countingMethod ?? 'scale',
-    apwG: null,
-    apwSampleSize: null,
+    apwG: overrides.apwG === undefined ? null : String(overrides.apwG),
+    apwSampleSize: overrides.apwG === undefined ? null : 10,
     pieceSpread: overrides.pieceSpread === undefined || overrides.pieceSpread === null ? null : String(overrides.pieceSpread),
     photoFile: null,
   });

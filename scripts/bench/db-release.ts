@@ -3,12 +3,12 @@
 import { execSync } from 'node:child_process';
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { performance } from 'node:perf_hooks';
-import { Part, User } from '../models';
-import { getDb } from '../server/db';
-import type { SessionUser } from '../server/auth/session';
-import { createKit } from '../server/services/kits/create-kit';
-import { createOrder } from '../server/services/orders/create-order';
-import { releaseOrder } from '../server/services/orders/release-order';
+import { Part, User } from '../../models';
+import { getDb } from '../../server/db';
+import type { SessionUser } from '../../server/auth/session';
+import { createKit } from '../../server/services/kits/create-kit';
+import { createOrder } from '../../server/services/orders/create-order';
+import { releaseOrder } from '../../server/services/orders/release-order';
 
 const KITS = 500;
 const LINES = 50;

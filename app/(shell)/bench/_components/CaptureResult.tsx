@@ -1,0 +1,20 @@
+import { toWholePieces } from '@/lib/weighing/count';
+import type { CountEventDto } from '@/server/schemas/counts';
+
+// What the server recorded, computed by the server from the weights sent.
+export function CaptureResult({ count }: { count: CountEventDto }) {
+  const u = toWholePieces(count.expandedUncertainty);
+  return (
+    <section aria-labelledby="result-title" className="card border-2 border-ok" data-testid="capture-result" data-count={count.count} data-exact={String(count.exact)} data-id={count.id}>
+      <h2 id="result-title" className="font-bold text-ok">Recorded by the server</h2>
+      <p className="num mt-1 text-5xl font-bold">
+        {count.count}
+        {!count.exact ? <span className="text-brass"> ± {u}</span> : null} pcs
+      </p>
+      <p className="num mt-1 text-sm text-ink-soft">
+        net {count.net} g · sample {count.sampleQuantity} pcs, {count.sampleNetWeight} g · APW {count.averagePieceWeight} g · {count.exact ? 'exact' : `± ${u} pcs (95 %)`}
+      </p>
+      {count.warnings.length ? <p className="mt-1 text-sm text-caution">Noted with the count: {count.warnings.map((w) => w.message).join(' ')}</p> : null}
+    </section>
+  );
+}

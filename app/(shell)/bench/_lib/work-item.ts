@@ -1,0 +1,34 @@
+/**
+ * What the bench counts. Parts are the first source; a kitting queue (build-order lines, bins)
+ * plugs in as another WorkSource producing the same items.
+ */
+export type WorkPurpose = 'part' | 'bin' | 'kit_line';
+
+export interface ToleranceBand {
+  /** Pieces allowed below the target. */
+  below: number;
+  /** Pieces allowed above the target. */
+  above: number;
+}
+
+export interface WorkItem {
+  purpose: WorkPurpose;
+  partId: number;
+  partNumber: string;
+  label: string;
+  targetQuantity?: number;
+  tolerance?: ToleranceBand;
+}
+
+export interface WorkSource {
+  readonly id: string;
+  readonly title: string;
+  search(query: string): Promise<WorkItem[]>;
+  /** A scanned code that names exactly one item, or null. */
+  resolveScan(code: string): Promise<WorkItem | null>;
+}
+
+/** Parts counted on the pan with their sample (part) or weighed in a container apart (bin). */
+export function sampleStaysOnPan(purpose: WorkPurpose): boolean {
+  return purpose !== 'bin';
+}

@@ -1,0 +1,20 @@
+import { requirePageUser } from '@/server/auth/authorize';
+import { listContainers } from '@/server/services/containers/list-containers';
+import { listScales } from '@/server/services/scales/list-scales';
+import { getSettings } from '@/server/services/settings/get-settings';
+import { BenchStation } from './_components/BenchStation';
+
+export const metadata = { title: 'Bench' };
+
+export default async function BenchPage() {
+  await requirePageUser('counts.capture', '/bench');
+  const [scales, containers, settings] = await Promise.all([listScales(), listContainers(), getSettings()]);
+  return (
+    <BenchStation
+      scales={scales}
+      containers={containers}
+      stabilityWindowMs={settings.stabilityWindowMs}
+      defaultPieceSpread={settings.defaultPieceSpread}
+    />
+  );
+}

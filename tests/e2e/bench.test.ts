@@ -1,0 +1,191 @@
+import type { BrowserContext } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { Container, CountEvent } from '../../models';
+import { createPart, createScale, testDb, unique } from '../helpers/db';
+import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
+import { headingShown, liveCount, openBench, panButton, putOn, waitSettled, whenSettled } from '../helpers/bench';
+
+// A quiet scale (s_r = 0.2 d) so the ±1 d stability window settles within a second or two.
+const benchScale = (o: Parameters<typeof createScale>[0] = {}) => createScale({ repeatabilityG: 0.02, ...o });
+
+describe('the bench (browser, simulated scale)', () => {
+  let landscape: BrowserContext;
+  let portrait: BrowserContext;
+  beforeAll(async () => {
+    landscape = await openBrowser({ width: 1280, height: 800 });
+    portrait = await openBrowser({ width: 800, height: 1280 });
+  });
+  afterAll(async () => {
+    await landscape.close();
+    await portrait.close();
+  });
+
+  it('counts a part to its target with the keyboard: tare, sample of 10, grow, count, capture; the server records the count', async () => {
+    const scale = await benchScale();
+    const part = await createPart({ pieceSpread: 0.01 });
+    const page = await landscape.newPage();
+    await signInThroughPage(page, 'operator');
+    await openBench(page, scale.id);
+    await page.getByLabel('Target pieces (optional)').fill('100');
+    await page.getByLabel('Allowed over').fill('2');
+    await page.getByLabel('Scan or type a part number').fill(part.partNumber.toLowerCase());
+    await page.getByLabel('Scan or type a part number').press('Enter');
+    await expect.poll(() => page.getByRole('heading', { name: 'Put the empty container on the pan' }).isVisible()).toBe(true);
+    await screenshot(page, 'bench-1-tare');
+
+    await panButton(page, /Place container/);
+    await waitSettled(page);
+    await whenSettled(page, () => page.keyboard.press('t'), headingShown(page, /Count \d+ pieces onto the pan/));
+    await page.getByLabel('Pieces in the sample').fill('10');
+    await putOn(page, 10);
+    await screenshot(page, 'bench-2-sample');
+    await whenSettled(page, () => page.keyboard.press('s'), headingShown(page, 'Grow the sample (now 10 pcs)'));
+
+    const maxAdd = Number(await page.getByTestId('grow-plan').getAttribute('data-max-add'));
+    expect(maxAdd).toBeGreaterThanOrEqual(20);
+    await putOn(page, 20);
+    await screenshot(page, 'bench-3-grow');
+    await whenSettled(page, () => page.keyboard.press('g'), headingShown(page, 'Grow the sample (now 30 pcs)'));
+    await page.keyboard.press('n');
+    await putOn(page, 70);
+    expect(await liveCount(page)).toBe(100);
+    await expect.poll(() => page.getByTestId('verdict').getAttribute('data-verdict')).toBe('in');
+    await screenshot(page, 'bench-4-count');
+
+    const result = page.getByTestId('capture-result');
+    await whenSettled(page, () => page.keyboard.press('c'), async () => (await result.count()) === 1);
+    expect(await result.getAttribute('data-count')).toBe('100');
+    await screenshot(page, 'bench-5-captured');
+    testDb();
+    const events = await CountEvent.findAll({ where: { partId: part.id } });
+    expect(events).toHaveLength(1);
+    expect(events[0]).toMatchObject({ count: 100, exact: true, purpose: 'part', sampleQuantity: 30, sampleOnPan: true, targetQuantity: 100 });
+    expect(Number(await result.getAttribute('data-id'))).toBe(events[0].id);
+  });
+
+  it('counts a bin by touch on a portrait tablet: sample weighed apart, bin weighed in its container with the preset tare', async () => {
+    const scale = await benchScale();
+    const part = await createPart({ pieceSpread: 0.01 });
+    testDb();
+    const bin = await Container.create({ name: unique('Blue tote'), kind: 'tote', tareG: '400' });
+    const page = await portrait.newPage();
+    await signInThroughPage(page, 'clerk');
+    await openBench(page, scale.id, 11);
+    await page.getByText('Bin count — bin weighed apart').click();
+    await page.getByLabel('Scan or type a part number').fill(part.partNumber);
+    await page.getByRole('list', { name: 'Matching parts' }).getByRole('button', { name: new RegExp(part.partNumber) }).click();
+    await waitSettled(page);
+    await whenSettled(page, () => page.getByRole('button', { name: /Zero the empty pan/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
+    await page.getByLabel('Pieces in the sample').fill('20');
+    await putOn(page, 20);
+    await screenshot(page, 'bench-bin-1-sample');
+    await whenSettled(page, () => page.getByRole('button', { name: /Sample of 20 is on/ }).click(), headingShown(page, 'Put the bin on the pan'));
+    await page.getByLabel('The bin’s container (its tare comes off)').selectOption(String(bin.id));
+    await panButton(page, 'Empty the pan');
+    await panButton(page, 'Place container (400 g)');
+    await putOn(page, 300);
+    await screenshot(page, 'bench-bin-2-count');
+    const result = page.getByTestId('capture-result');
+    await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await result.count()) === 1);
+    await screenshot(page, 'bench-bin-3-captured');
+    const [event] = await CountEvent.findAll({ where: { partId: part.id } });
+    expect(event).toMatchObject({ purpose: 'bin', sampleOnPan: false, sampleQuantity: 20, containerId: bin.id });
+    expect(Number(event.tareG)).toBeCloseTo(400, 6);
+    // A sample of 20 does not make 300 exact: the server says so with its ± range, which must hold the truth.
+    expect(Math.abs(event.count - 300)).toBeLessThanOrEqual(Math.max(0, Math.round(Number(event.expandedUncertainty))));
+    expect(Number(await result.getAttribute('data-count'))).toBe(event.count);
+  });
+
+  it('warns in plain words when one piece is lighter than the scale division', async () => {
+    const scale = await benchScale({ divisionG: 0.1 });
+    const part = await createPart({ apwG: 0.04 });
+    const page = await landscape.newPage();
+    await signInThroughPage(page, 'operator');
+    await openBench(page, scale.id, 3);
+    await page.getByLabel('Scan or type a part number').fill(part.partNumber);
+    await page.getByLabel('Scan or type a part number').press('Enter');
+    await waitSettled(page); // the practice pan starts afresh with the chosen part
+    await whenSettled(page, () => page.getByRole('button', { name: /Tare now/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
+    await page.getByLabel('Pieces in the sample').fill('10');
+    await putOn(page, 10);
+    await whenSettled(page, () => page.getByRole('button', { name: /Sample of 10 is on/ }).click(), headingShown(page, /Grow the sample/));
+    const warning = page.locator('[data-warning="apw_below_resolution"]');
+    await expect.poll(() => warning.isVisible()).toBe(true);
+    expect(await warning.textContent()).toContain('One piece weighs less than the smallest step this scale shows');
+    expect(await warning.textContent()).toContain('finer division');
+    expect(await page.locator('[data-warning="cv_assumed"]').isVisible()).toBe(true);
+    await screenshot(page, 'bench-too-light');
+  });
+
+  it('shows a locked scale with its reason and does not offer the capture', async () => {
+    const scale = await benchScale({ status: 'locked' });
+    const part = await createPart({ pieceSpread: 0.01 });
+    const page = await landscape.newPage();
+    await signInThroughPage(page, 'quality');
+    await openBench(page, scale.id, 5);
+    expect(await page.getByTestId('scale-status').textContent()).toContain('failed its weighing test');
+    expect(await page.locator('[data-warning="scale_locked"]').isVisible()).toBe(true);
+    await page.getByLabel('Scan or type a part number').fill(part.partNumber);
+    await page.getByLabel('Scan or type a part number').press('Enter');
+    await waitSettled(page); // the practice pan starts afresh with the chosen part
+    await whenSettled(page, () => page.getByRole('button', { name: /Tare now/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
+    await putOn(page, 10);
+    await whenSettled(page, () => page.getByRole('button', { name: /Sample of 10 is on/ }).click(), headingShown(page, /Grow the sample/));
+    await page.getByRole('button', { name: /Count to target/ }).click();
+    expect(await page.getByRole('button', { name: /Capture this count/ }).isDisabled()).toBe(true);
+    expect(await page.getByTestId('capture-blocked').textContent()).toContain('locked');
+  });
+
+  it('restores a count in progress after a reload, pieces on the practice pan included', async () => {
+    const scale = await benchScale();
+    const part = await createPart({ pieceSpread: 0.01 });
+    const page = await landscape.newPage();
+    await signInThroughPage(page, 'operator');
+    await openBench(page, scale.id, 21);
+    await page.getByLabel('Scan or type a part number').fill(part.partNumber);
+    await page.getByLabel('Scan or type a part number').press('Enter');
+    await panButton(page, /Place container/);
+    await waitSettled(page);
+    await whenSettled(page, () => page.getByRole('button', { name: /Tare now/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
+    await putOn(page, 10);
+    await whenSettled(page, () => page.getByRole('button', { name: /Sample of 10 is on/ }).click(), headingShown(page, /Grow the sample/));
+    await putOn(page, 15);
+    expect(await liveCount(page)).toBe(25);
+    await page.reload();
+    await expect.poll(() => page.getByRole('heading', { name: 'Grow the sample (now 10 pcs)' }).isVisible(), { timeout: 10_000 }).toBe(true);
+    await expect.poll(() => page.getByTestId('stability').textContent(), { timeout: 10_000 }).toBe('Settled');
+    expect(await liveCount(page)).toBe(25);
+    expect(await page.getByTestId('pan-contents').textContent()).toContain('25 pieces');
+    await screenshot(page, 'bench-restored');
+  });
+
+  it('queues a capture made offline and sends it exactly once when back online', async () => {
+    const scale = await benchScale();
+    const part = await createPart({ pieceSpread: 0.01 });
+    const page = await landscape.newPage();
+    await signInThroughPage(page, 'operator');
+    await openBench(page, scale.id, 31);
+    await page.getByLabel('Scan or type a part number').fill(part.partNumber);
+    await page.getByLabel('Scan or type a part number').press('Enter');
+    await waitSettled(page); // the practice pan starts afresh with the chosen part
+    await whenSettled(page, () => page.getByRole('button', { name: /Tare now/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
+    await putOn(page, 10);
+    await whenSettled(page, () => page.getByRole('button', { name: /Sample of 10 is on/ }).click(), headingShown(page, /Grow the sample/));
+    await page.getByRole('button', { name: /Count to target/ }).click();
+    await putOn(page, 10);
+    await landscape.setOffline(true);
+    const queued = page.getByTestId('capture-queue').locator('li');
+    await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await queued.count()) === 1);
+    const key = (await queued.first().getAttribute('data-key'))!;
+    await screenshot(page, 'bench-offline-queued');
+    testDb();
+    expect(await CountEvent.count({ where: { partId: part.id } })).toBe(0);
+    await landscape.setOffline(false);
+    await page.getByRole('button', { name: 'Send now' }).click({ timeout: 1000 }).catch(() => undefined); // the 'online' event may have sent it already
+    await expect.poll(() => page.getByTestId('capture-queue').count(), { timeout: 15_000 }).toBe(0);
+    const events = await CountEvent.findAll({ where: { partId: part.id } });
+    expect(events).toHaveLength(1);
+    expect(events[0].idempotencyKey).toBe(key);
+    expect(events[0].count).toBe(20);
+  });
+});
