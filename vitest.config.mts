@@ -38,6 +38,8 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: 'e2e',
+          // A browser waits on the server under a loaded CI machine; give polled checks room.
+          expect: { poll: { timeout: 10_000 } },
           sequence: { groupOrder: 2 },
           include: ['tests/e2e/**/*.test.ts'],
           globalSetup: ['tests/helpers/global-setup.ts'],
