@@ -86,7 +86,8 @@ async function calibrateAll(scales: Map<string, Scale>, quality: SessionUser): P
         performedAt: '2026-11-27',
         unit: 'g',
         points,
-        repeatability: { load: mid, indications: [0, 1, 0, -1, 0].map((k) => mid + (k * Number(scale.divisionG))) },
+        // Ten weighings, one a division high: s_r ≈ 0.3 d, a steady scale whose readings settle.
+        repeatability: { load: mid, indications: [0, 0, 0, 1, 0, 0, 0, 0, 0, 0].map((k) => mid + k * Number(scale.divisionG)) },
         eccentricity: null,
         zeroOk: true,
         tareOk: true,
