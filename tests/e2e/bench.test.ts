@@ -1,7 +1,8 @@
 import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Container, CountEvent } from '../../models';
-import { createPart, createScale, testDb, unique } from '../helpers/db';
+import { BinCount, BuildOrderLine, Container, CountEvent } from '../../models';
+import { createPart, createScale, stockPart, testDb, unique } from '../helpers/db';
+import { signedIn } from '../helpers/http';
 import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
 import { headingShown, liveCount, openBench, panButton, putOn, waitSettled, whenSettled } from '../helpers/bench';
 
@@ -63,17 +64,53 @@ describe('the bench (browser, simulated scale)', () => {
     expect(Number(await result.getAttribute('data-id'))).toBe(events[0].id);
   });
 
+  it('counts a kitting-queue line: the target comes from the order, and the capture fills the line', async () => {
+    const scale = await benchScale();
+    const part = await createPart({ pieceSpread: 0.01 });
+    await stockPart(part.id, 500);
+    const planner = await signedIn('planner');
+    const kit = (await planner.agent.post('/api/v1/kits').send({ code: unique('KIT'), revision: 'A', description: 'Bench kit', components: [{ partId: part.id, quantity: 10 }] })).body.kit;
+    const draft = (await planner.agent.post('/api/v1/orders').send({ kitId: kit.id, quantity: 10 })).body.order;
+    const order = (await planner.agent.post(`/api/v1/orders/${draft.id}/release`).send({ version: draft.version })).body.order;
+    const page = await landscape.newPage();
+    await signInThroughPage(page, 'operator');
+    await openBench(page, scale.id, 5);
+    await page.getByText('Kitting queue — lines of released orders').click();
+    await page.getByLabel('Scan or type a part or order number').fill(part.partNumber);
+    await page.getByLabel('Scan or type a part or order number').press('Enter');
+    await expect.poll(() => page.getByRole('heading', { name: 'Put the empty container on the pan' }).isVisible()).toBe(true);
+    await panButton(page, /Place container/);
+    await waitSettled(page);
+    await whenSettled(page, () => page.keyboard.press('t'), headingShown(page, /Count \d+ pieces onto the pan/));
+    await page.getByLabel('Pieces in the sample').fill('10');
+    await putOn(page, 10);
+    await whenSettled(page, () => page.keyboard.press('s'), headingShown(page, 'Grow the sample (now 10 pcs)'));
+    await putOn(page, 20);
+    await whenSettled(page, () => page.keyboard.press('g'), headingShown(page, 'Grow the sample (now 30 pcs)'));
+    await page.keyboard.press('n');
+    await putOn(page, 70);
+    await screenshot(page, 'bench-queue-count');
+    const result = page.getByTestId('capture-result');
+    await whenSettled(page, () => page.keyboard.press('c'), async () => (await result.count()) === 1);
+    testDb();
+    const line = await BuildOrderLine.findByPk(order.lines[0].id);
+    expect(line).toMatchObject({ counted: 100, captures: 1, verdict: 'in' });
+    expect((await planner.agent.get(`/api/v1/orders/${order.id}`)).body.order.status).toBe('in_progress');
+  });
+
   it('counts a bin by touch on a portrait tablet: sample weighed apart, bin weighed in its container with the preset tare', async () => {
     const scale = await benchScale();
     const part = await createPart({ pieceSpread: 0.01 });
     testDb();
     const bin = await Container.create({ name: unique('Blue tote'), kind: 'tote', tareG: '400' });
+    const stockBin = await stockPart(part.id, 310);
     const page = await portrait.newPage();
     await signInThroughPage(page, 'clerk');
     await openBench(page, scale.id, 11);
     await page.getByText('Bin count — bin weighed apart').click();
-    await page.getByLabel('Scan or type a part number').fill(part.partNumber);
-    await page.getByRole('list', { name: 'Matching parts' }).getByRole('button', { name: new RegExp(part.partNumber) }).click();
+    // The bin's label carries its code as Code 128: a scanner types it and presses Enter.
+    await page.getByLabel('Scan a bin label or type a part number').fill(stockBin.code.toLowerCase());
+    await page.getByLabel('Scan a bin label or type a part number').press('Enter');
     await waitSettled(page);
     await whenSettled(page, () => page.getByRole('button', { name: /Zero the empty pan/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
     await page.getByLabel('Pieces in the sample').fill('20');
@@ -89,7 +126,9 @@ describe('the bench (browser, simulated scale)', () => {
     await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await result.count()) === 1);
     await screenshot(page, 'bench-bin-3-captured');
     const [event] = await CountEvent.findAll({ where: { partId: part.id } });
-    expect(event).toMatchObject({ purpose: 'bin', sampleOnPan: false, sampleQuantity: 20, containerId: bin.id });
+    expect(event).toMatchObject({ purpose: 'bin', sampleOnPan: false, sampleQuantity: 20, containerId: bin.id, binId: stockBin.id });
+    const binCount = await BinCount.findOne({ where: { countEventId: event.id } });
+    expect(binCount).toMatchObject({ bookQuantity: 310, counted: event.count, variance: event.count - 310 });
     expect(Number(event.tareG)).toBeCloseTo(400, 6);
     // A sample of 20 does not make 300 exact: the server says so with its ± range, which must hold the truth.
     expect(Math.abs(event.count - 300)).toBeLessThanOrEqual(Math.max(0, Math.round(Number(event.expandedUncertainty))));

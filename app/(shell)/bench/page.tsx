@@ -6,8 +6,9 @@ import { BenchStation } from './_components/BenchStation';
 
 export const metadata = { title: 'Bench' };
 
-export default async function BenchPage() {
+export default async function BenchPage({ searchParams }: { searchParams: Promise<{ bin?: string }> }) {
   await requirePageUser('counts.capture', '/bench');
+  const { bin } = await searchParams;
   const [scales, containers, settings] = await Promise.all([listScales(), listContainers(), getSettings()]);
   return (
     <BenchStation
@@ -15,6 +16,7 @@ export default async function BenchPage() {
       containers={containers}
       stabilityWindowMs={settings.stabilityWindowMs}
       defaultPieceSpread={settings.defaultPieceSpread}
+      initialBin={bin ?? null}
     />
   );
 }

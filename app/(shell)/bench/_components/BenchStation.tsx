@@ -43,6 +43,7 @@ interface Props {
   containers: ContainerDto[];
   stabilityWindowMs: number;
   defaultPieceSpread: number;
+  initialBin: string | null;
 }
 
 const WORK_KEY = 'tallyforge.bench.work';
@@ -52,7 +53,7 @@ const PRACTICE_TRAY_G = 150;
 
 type Notice = { tone: 'fault' | 'ok' | 'info'; text: string; code?: WarningCode } | null;
 
-export function BenchStation({ scales, containers, stabilityWindowMs, defaultPieceSpread }: Props) {
+export function BenchStation({ scales, containers, stabilityWindowMs, defaultPieceSpread, initialBin }: Props) {
   const [work, setWork] = useState<BenchWork | null>(null);
   const [part, setPart] = useState<PartDto | null>(null);
   const [scaleId, setScaleId] = useState<number | null>(scales[0]?.id ?? null);
@@ -146,7 +147,8 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
       setNotice(null);
       const onPan = sampleStaysOnPan(item.purpose);
       setSampleQty(noise ? suggestSampleQuantity({ noise, averagePieceWeight: p.averagePieceWeight, pieceSpread: p.spreadLearned ? p.pieceSpread : null, targetQuantity: item.targetQuantity ?? null, sampleOnPan: onPan }) : 10);
-      setWork(startWork({ purpose: item.purpose, partId: p.id, partNumber: p.partNumber, label: item.label, scaleId: scale.id, targetQuantity: item.targetQuantity, tolerance: item.tolerance }));
+      const { orderLineId, binId, binVersion } = item;
+      setWork(startWork({ purpose: item.purpose, partId: p.id, partNumber: p.partNumber, label: item.label, scaleId: scale.id, targetQuantity: item.targetQuantity, tolerance: item.tolerance, orderLineId, binId, binVersion }));
     });
   };
 
@@ -304,7 +306,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
         {work ? (
           <p className="text-lg">
             <span className="font-bold">{work.label}</span>
-            <span className="ml-2 rounded bg-paper-deep px-2 py-0.5 text-sm">{work.purpose === 'bin' ? 'bin count' : 'part count'}</span>
+            <span className="ml-2 rounded bg-paper-deep px-2 py-0.5 text-sm">{{ bin: 'bin count', part: 'part count', kit_line: 'kit line' }[work.purpose]}</span>
             {work.targetQuantity != null ? <span className="ml-2 text-ink-soft">target {work.targetQuantity} (−{work.tolerance?.below ?? 0}/+{work.tolerance?.above ?? 0})</span> : null}
           </p>
         ) : null}
@@ -342,7 +344,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
         </div>
         <aside className="min-w-0 space-y-4">
           <QueuePanel items={queue} onSend={() => void flushQueue()} onDrop={(key) => { queueStore?.remove(key); setQueue(queueStore?.list() ?? []); }} />
-          {!work ? <WorkChooser onChoose={chooseWork} disabled={!scale} /> : null}
+          {!work ? <WorkChooser onChoose={chooseWork} disabled={!scale} initialBin={initialBin} /> : null}
           <ScalePicker scales={scales} scaleId={scaleId} locked={work !== null} onPick={setScaleId} />
           {scale ? (
             <label className="flex min-h-11 items-center gap-3">

@@ -2,25 +2,36 @@
 
 import { useEffect, useMemo, useRef, useState } from 'react';
 import type { ToleranceBand, WorkItem, WorkPurpose } from '../_lib/work-item';
+import { binWorkSource } from './bin-work-source';
 import { partWorkSource } from './part-work-source';
+import { queueWorkSource } from './queue-work-source';
+
+const KINDS: Array<{ purpose: WorkPurpose; title: string; scanLabel: string; none: string }> = [
+  { purpose: 'kit_line', title: 'Kitting queue — lines of released orders', scanLabel: 'Scan or type a part or order number', none: 'The kitting queue is empty.' },
+  { purpose: 'part', title: 'Part count — sample stays on the pan', scanLabel: 'Scan or type a part number', none: 'No parts match.' },
+  { purpose: 'bin', title: 'Bin count — bin weighed apart', scanLabel: 'Scan a bin label or type a part number', none: 'No bins match (bins due for counting are listed).' },
+];
 
 interface Props {
   onChoose(item: WorkItem): void;
   disabled?: boolean;
+  /** A bin code to start with (from a link such as /bench?bin=K-01-1-01). */
+  initialBin?: string | null;
 }
 
 const wholeOrNull = (text: string): number | null => (/^\d+$/.test(text.trim()) ? Number(text.trim()) : null);
 
 // Scan a part number (a keyboard-wedge scanner types it and presses Enter) or pick from the list.
-export function WorkChooser({ onChoose, disabled }: Props) {
-  const [purpose, setPurpose] = useState<WorkPurpose>('part');
-  const [query, setQuery] = useState('');
+export function WorkChooser({ onChoose, disabled, initialBin }: Props) {
+  const [purpose, setPurpose] = useState<WorkPurpose>(initialBin ? 'bin' : 'part');
+  const [query, setQuery] = useState(initialBin ?? '');
   const [items, setItems] = useState<WorkItem[]>([]);
   const [message, setMessage] = useState<string | null>(null);
   const [target, setTarget] = useState('');
   const [below, setBelow] = useState('0');
   const [above, setAbove] = useState('0');
-  const source = useMemo(() => partWorkSource(purpose), [purpose]);
+  const source = useMemo(() => (purpose === 'kit_line' ? queueWorkSource() : purpose === 'bin' ? binWorkSource() : partWorkSource(purpose)), [purpose]);
+  const kind = KINDS.find((k) => k.purpose === purpose)!;
   const scanRef = useRef<HTMLInputElement>(null);
 
   useEffect(() => {
@@ -44,29 +55,31 @@ export function WorkChooser({ onChoose, disabled }: Props) {
   }, []);
 
   const choose = (item: WorkItem) => {
-    const t = purpose === 'part' ? wholeOrNull(target) : null;
-    const tolerance: ToleranceBand | undefined = t != null ? { below: wholeOrNull(below) ?? 0, above: wholeOrNull(above) ?? 0 } : undefined;
     setMessage(null);
-    // The kind chosen now wins over a list item fetched before the switch.
-    onChoose({ ...item, purpose, targetQuantity: t ?? undefined, tolerance });
+    // A list fetched before the kind was switched is ignored: the item must be of the kind chosen now.
+    if (item.purpose !== purpose) return;
+    if (purpose !== 'part') return onChoose(item);
+    const t = wholeOrNull(target);
+    const tolerance: ToleranceBand | undefined = t != null ? { below: wholeOrNull(below) ?? 0, above: wholeOrNull(above) ?? 0 } : undefined;
+    onChoose({ ...item, targetQuantity: t ?? undefined, tolerance });
   };
 
   const scan = async () => {
     if (!query.trim()) return;
     const hit = await source.resolveScan(query);
     if (hit) choose(hit);
-    else setMessage(`No part numbered ${query.trim().toUpperCase()} is counted by weight.`);
+    else setMessage(`Nothing to count matches ${query.trim().toUpperCase()} here.`);
   };
 
   return (
     <section aria-labelledby="work-title" className="card space-y-4">
       <h2 id="work-title" className="text-lg font-bold">What are you counting?</h2>
-      <fieldset className="grid grid-cols-2 gap-2" disabled={disabled}>
+      <fieldset className="grid grid-cols-3 gap-2" disabled={disabled}>
         <legend className="sr-only">Kind of count</legend>
-        {(['part', 'bin'] as const).map((p) => (
-          <label key={p} className={`flex min-h-14 cursor-pointer items-center justify-center gap-2 rounded-md border-2 px-3 text-center font-medium ${purpose === p ? 'border-forge bg-forge-light text-forge-dark' : 'border-paper-line bg-paper-card'}`}>
-            <input type="radio" name="purpose" value={p} checked={purpose === p} onChange={() => setPurpose(p)} className="sr-only" />
-            {p === 'part' ? 'Part count — sample stays on the pan' : 'Bin count — bin weighed apart'}
+        {KINDS.map((k) => (
+          <label key={k.purpose} className={`flex min-h-14 cursor-pointer items-center justify-center gap-2 rounded-md border-2 px-3 text-center font-medium ${purpose === k.purpose ? 'border-forge bg-forge-light text-forge-dark' : 'border-paper-line bg-paper-card'}`}>
+            <input type="radio" name="purpose" value={k.purpose} checked={purpose === k.purpose} onChange={() => { setItems([]); setPurpose(k.purpose); }} className="sr-only" />
+            {k.title}
           </label>
         ))}
       </fieldset>
@@ -88,7 +101,7 @@ export function WorkChooser({ onChoose, disabled }: Props) {
       ) : null}
       <div>
         <label htmlFor="work-scan" className="field-label">
-          Scan or type a part number <kbd className="num ml-1 rounded bg-paper-deep px-1.5 text-xs">/</kbd>
+          {kind.scanLabel} <kbd className="num ml-1 rounded bg-paper-deep px-1.5 text-xs">/</kbd>
         </label>
         <input
           id="work-scan"
@@ -107,15 +120,15 @@ export function WorkChooser({ onChoose, disabled }: Props) {
         />
         <p className="field-error" aria-live="polite">{message}</p>
       </div>
-      <ul aria-label="Matching parts" className="max-h-72 divide-y divide-paper-line overflow-y-auto rounded-md border border-paper-line">
+      <ul aria-label={`Matching ${source.title.toLowerCase()}`} className="max-h-72 divide-y divide-paper-line overflow-y-auto rounded-md border border-paper-line">
         {items.map((item) => (
-          <li key={item.partId}>
+          <li key={item.key}>
             <button type="button" disabled={disabled} className="min-h-12 w-full px-3 py-2 text-left hover:bg-forge-light disabled:opacity-50" onClick={() => choose(item)}>
               {item.label}
             </button>
           </li>
         ))}
-        {items.length === 0 ? <li className="px-3 py-3 text-sm text-ink-faint">No parts match.</li> : null}
+        {items.length === 0 ? <li className="px-3 py-3 text-sm text-ink-faint">{kind.none}</li> : null}
       </ul>
     </section>
   );

@@ -5,7 +5,7 @@ import { apiFetch } from '@/app/_components/api-client';
 import type { WorkItem, WorkPurpose, WorkSource } from '../_lib/work-item';
 
 function toItem(part: PartDto, purpose: WorkPurpose): WorkItem {
-  return { purpose, partId: part.id, partNumber: part.partNumber, label: `${part.partNumber} — ${part.description}` };
+  return { purpose, key: `part-${part.id}`, partId: part.id, partNumber: part.partNumber, label: `${part.partNumber} — ${part.description}` };
 }
 
 // Parts from GET /api/v1/parts: a scanned code must match a part number exactly (stored upper-case).

@@ -2,7 +2,7 @@
  * The count in progress as plain data, and the steps that move it on. Everything needed to
  * resume after a reload lives here, so it is saved as it is after each change.
  */
-import type { ToleranceBand, WorkPurpose } from './work-item';
+import type { ToleranceBand, WorkPurpose, WorkTarget } from './work-item';
 
 export type BenchStep = 'tare' | 'sample' | 'grow' | 'count' | 'captured';
 
@@ -12,7 +12,7 @@ export interface BenchSample {
   netWeight: number;
 }
 
-export interface BenchWork {
+export interface BenchWork extends WorkTarget {
   purpose: WorkPurpose;
   partId: number;
   partNumber: string;
@@ -33,9 +33,14 @@ export interface BenchWork {
   captureKey: string | null;
 }
 
-export function startWork(input: Pick<BenchWork, 'purpose' | 'partId' | 'partNumber' | 'label' | 'scaleId'> & Partial<Pick<BenchWork, 'targetQuantity' | 'tolerance'>>): BenchWork {
+export function startWork(
+  input: Pick<BenchWork, 'purpose' | 'partId' | 'partNumber' | 'label' | 'scaleId'> & Partial<Pick<BenchWork, 'targetQuantity' | 'tolerance'> & WorkTarget>,
+): BenchWork {
   return {
     ...input,
+    orderLineId: input.orderLineId ?? null,
+    binId: input.binId ?? null,
+    binVersion: input.binVersion ?? null,
     step: 'tare',
     tare: null,
     containerId: null,
@@ -135,6 +140,7 @@ export function parseSavedWork(text: string | null): BenchWork | null {
     num(w.partId) && num(w.scaleId) &&
     typeof w.partNumber === 'string' && typeof w.label === 'string' &&
     numOrNull(w.tare) && numOrNull(w.panZero) && numOrNull(w.containerId) && numOrNull(w.targetQuantity) &&
+    numOrNull(w.orderLineId) && numOrNull(w.binId) && numOrNull(w.binVersion) &&
     (w.sample === null || (num(w.sample?.quantity) && num(w.sample?.netWeight))) &&
     Array.isArray(w.pieceReadings) && w.pieceReadings.every(num) &&
     (w.captureKey === null || typeof w.captureKey === 'string') &&

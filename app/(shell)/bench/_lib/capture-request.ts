@@ -13,6 +13,9 @@ export interface CaptureBody {
   sample: { quantity: number; netWeight: number };
   sampleOnPan: boolean;
   targetQuantity?: number;
+  orderLineId?: number;
+  binId?: number;
+  binVersion?: number;
   stable: true;
 }
 
@@ -34,5 +37,7 @@ export function buildCaptureBody(work: BenchWork, stableMean: number): CaptureBo
   };
   if (work.containerId != null) body.containerId = work.containerId;
   if (work.targetQuantity != null) body.targetQuantity = work.targetQuantity;
+  if (work.orderLineId != null) body.orderLineId = work.orderLineId;
+  if (work.binId != null && work.binVersion != null) Object.assign(body, { binId: work.binId, binVersion: work.binVersion });
   return body;
 }

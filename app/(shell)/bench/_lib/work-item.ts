@@ -11,11 +11,20 @@ export interface ToleranceBand {
   above: number;
 }
 
-export interface WorkItem {
+/** What a capture fills besides the count itself: a build-order line, or a bin at a known version. */
+export interface WorkTarget {
+  orderLineId: number | null;
+  binId: number | null;
+  binVersion: number | null;
+}
+
+export interface WorkItem extends Partial<WorkTarget> {
   purpose: WorkPurpose;
   partId: number;
   partNumber: string;
   label: string;
+  /** Unique within one list (a part may sit on several order lines or bins). */
+  key: string;
   targetQuantity?: number;
   tolerance?: ToleranceBand;
 }
