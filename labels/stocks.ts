@@ -33,7 +33,7 @@ export interface LabelStock {
 export const MODULE_SIZES = { large: millimetres(0.5), medium: millimetres(0.375), small: millimetres(0.25) } as const;
 const allModuleSizes = [MODULE_SIZES.large, MODULE_SIZES.medium, MODULE_SIZES.small] as const;
 
-export const LABEL_STOCKS = {
+const STOCKS = {
   '4x6in': { id: '4x6in', name: '4 × 6 in thermal', width: inches(4), height: inches(6), inset: inches(0.12), moduleSizes: allModuleSizes },
   '4x2in': { id: '4x2in', name: '4 × 2 in thermal', width: inches(4), height: inches(2), inset: inches(0.08), moduleSizes: allModuleSizes },
   '2x1in': { id: '2x1in', name: '2 × 1 in thermal', width: inches(2), height: inches(1), inset: inches(0.05), moduleSizes: [MODULE_SIZES.medium, MODULE_SIZES.small] },
@@ -51,7 +51,8 @@ export const LABEL_STOCKS = {
   },
 } as const satisfies Record<string, LabelStock>;
 
-export type StockId = keyof typeof LABEL_STOCKS;
+export type StockId = keyof typeof STOCKS;
+export const LABEL_STOCKS: Record<StockId, LabelStock> = STOCKS;
 export const STOCK_IDS = Object.keys(LABEL_STOCKS) as [StockId, ...StockId[]];
 
 export function isStockId(value: string): value is StockId {
