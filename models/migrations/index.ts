@@ -1,10 +1,12 @@
 import * as m0001 from './0001-foundation';
 import * as m0002 from './0002-counting-core';
 import * as m0003 from './0003-kits-orders-stock';
+import * as m0004 from './0004-print-jobs';
 
 // Ordered list of migrations. Add a file `NNNN-what-it-does.ts` exporting up/down and list it here.
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
   { name: '0002-counting-core', ...m0002 },
   { name: '0003-kits-orders-stock', ...m0003 },
+  { name: '0004-print-jobs', ...m0004 },
 ];

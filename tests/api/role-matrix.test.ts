@@ -22,6 +22,7 @@ const capture: Role[] = ['operator', 'clerk', 'quality', 'admin'];
 const partEditors: Role[] = ['planner', 'clerk', 'admin'];
 const binEditors: Role[] = ['clerk', 'admin'];
 const planners: Role[] = ['planner', 'admin'];
+const printers: Role[] = ['planner', 'clerk', 'admin'];
 
 // Every route handler, and who may call it. Add each new route here (see DEVELOPERS.md).
 const MATRIX: Entry[] = [
@@ -68,6 +69,10 @@ const MATRIX: Entry[] = [
   { method: 'GET', route: '/api/v1/kitting-queue', allowed: everyone },
   { method: 'GET', route: '/api/v1/bins', allowed: everyone },
   { method: 'POST', route: '/api/v1/bins', allowed: binEditors, body: {} },
+  { method: 'GET', route: '/api/v1/bins/[id]/label.pdf', allowed: printers, path: '/api/v1/bins/999999/label.pdf' },
+  { method: 'POST', route: '/api/v1/labels', allowed: printers, body: {} },
+  { method: 'GET', route: '/api/v1/print-jobs', allowed: printers },
+  { method: 'POST', route: '/api/v1/print-jobs', allowed: printers, body: {} },
 ];
 
 function routeFiles(dir: string): string[] {
