@@ -33,6 +33,9 @@ export type ReservationStatus = (typeof RESERVATION_STATUSES)[number];
 export const MOVEMENT_REASONS = ['initial', 'receipt', 'adjustment', 'consumption'] as const;
 export type MovementReason = (typeof MOVEMENT_REASONS)[number];
 
+export const PRINT_JOB_STATUSES = ['queued', 'sent', 'failed'] as const;
+export type PrintJobStatus = (typeof PRINT_JOB_STATUSES)[number];
+
 export const ABC_CLASSES = ['A', 'B', 'C'] as const;
 export type AbcClass = (typeof ABC_CLASSES)[number];
 

@@ -18,6 +18,7 @@ import { KitComponent } from './kit-component';
 import { Part } from './part';
 import { PartStock } from './part-stock';
 import { PieceWeightSample } from './piece-weight-sample';
+import { PrintJob } from './print-job';
 import { Scale } from './scale';
 import { PasswordToken } from './password-token';
 import { SignInThrottle } from './sign-in-throttle';
@@ -45,6 +46,7 @@ export {
   PartStock,
   PasswordToken,
   PieceWeightSample,
+  PrintJob,
   Scale,
   SignInThrottle,
   SiteSettings,
@@ -58,7 +60,7 @@ const initialised = new WeakSet<Sequelize>();
 
 export function initModels(sequelize: Sequelize): void {
   if (initialised.has(sequelize)) return;
-  const models = [User, SiteSettings, PasswordToken, SignInThrottle, MailMessage, Scale, Container, Part, PieceWeightSample, CountEvent];
+  const models = [User, SiteSettings, PasswordToken, SignInThrottle, MailMessage, PrintJob, Scale, Container, Part, PieceWeightSample, CountEvent];
   const stockModels = [Bin, BinCount, PartStock, StockMovement, Kit, KitComponent, BuildOrder, BuildOrderLine, StockReservation];
   const qualityModels = [TestWeight, CalibrationRecord, JobRun, Audit, AuditItem];
   for (const model of [...models, ...stockModels, ...qualityModels]) {

@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # npm run bench: the figures behind the speed goals, written to bench-results/ (git-ignored).
-#   1. the bench page's per-reading pipeline and first-load JavaScript (no database; builds if needed);
+#   1. the bench page's per-reading pipeline and first-load JavaScript, and label rendering
+#      (no database; builds if needed);
 #   2. every scripts/bench/db-*.ts against a throwaway database on its own MariaDB (.data/bench,
 #      port TF_BENCH_DB_PORT or 3329); each appends to bench-results/<name>.json.
 source "$(dirname "$0")/lib.sh"
@@ -15,6 +16,8 @@ fi
 mkdir -p bench-results
 log "bench: scale pipeline and page weight"
 "$ROOT/node_modules/.bin/tsx" scripts/bench/run-bench.ts
+log "bench: 1 000 bin labels against the encode-only and text-only floors"
+$TSX scripts/bench/labels.ts
 
 ensure_mariadb
 export DB_NAME="tallyforge_bench_$$"

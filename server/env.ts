@@ -19,6 +19,8 @@ const envSchema = z.object({
   SMTP_USER: z.string().optional(),
   SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().default('Tallyforge <tallyforge@localhost>'),
+  // The label printer (IPP; ipps for TLS). The default is the local printer fake that npm start runs.
+  PRINTER_URL: z.string().regex(/^ipps?:\/\/[^/]+\/\S*$/, 'PRINTER_URL must be an ipp:// or ipps:// printer URL').default('ipp://127.0.0.1:8631/printers/labels'),
 });
 
 export type Env = z.infer<typeof envSchema>;

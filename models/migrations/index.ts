@@ -3,6 +3,7 @@ import * as m0002 from './0002-counting-core';
 import * as m0003 from './0003-kits-orders-stock';
 import * as m0004 from './0004-quality';
 import * as m0005 from './0005-bin-counts';
+import * as m0006 from './0006-print-jobs';
 
 // Ordered list of migrations. Add a file `NNNN-what-it-does.ts` exporting up/down and list it here.
 export const migrations = [
@@ -11,4 +12,5 @@ export const migrations = [
   { name: '0003-kits-orders-stock', ...m0003 },
   { name: '0004-quality', ...m0004 },
   { name: '0005-bin-counts', ...m0005 },
+  { name: '0006-print-jobs', ...m0006 },
 ];

@@ -23,6 +23,7 @@ const partEditors: Role[] = ['planner', 'clerk', 'admin'];
 const binEditors: Role[] = ['clerk', 'admin'];
 const planners: Role[] = ['planner', 'admin'];
 const quality: Role[] = ['quality', 'admin'];
+const printers: Role[] = ['planner', 'clerk', 'admin'];
 
 // Every route handler, and who may call it. Add each new route here (see DEVELOPERS.md).
 const MATRIX: Entry[] = [
@@ -89,6 +90,10 @@ const MATRIX: Entry[] = [
   { method: 'GET', route: '/api/v1/bins/due', allowed: everyone },
   { method: 'GET', route: '/api/v1/bin-counts', allowed: everyone },
   { method: 'POST', route: '/api/v1/bin-counts/[id]/decision', allowed: ['planner', 'quality', 'admin'], path: '/api/v1/bin-counts/999999/decision', body: {} },
+  { method: 'GET', route: '/api/v1/bins/[id]/label.pdf', allowed: printers, path: '/api/v1/bins/999999/label.pdf' },
+  { method: 'POST', route: '/api/v1/labels', allowed: printers, body: {} },
+  { method: 'GET', route: '/api/v1/print-jobs', allowed: printers },
+  { method: 'POST', route: '/api/v1/print-jobs', allowed: printers, body: {} },
 ];
 
 function routeFiles(dir: string): string[] {

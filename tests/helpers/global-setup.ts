@@ -1,4 +1,4 @@
-// Starts the local SMTP sink and one production `next start` against the test database,
+// Starts the local SMTP sink, the IPP printer fake and one production `next start` against the test database,
 // and hands their addresses to the tests. `npm test` has already migrated and built.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { createWriteStream, mkdirSync, mkdtempSync } from 'node:fs';
@@ -6,6 +6,7 @@ import { createServer } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
+import { startIppPrinter, type IppPrinterFake } from '../../scripts/fakes/ipp-printer';
 import { startSmtpSink, type SmtpSink } from '../../scripts/fakes/smtp-sink';
 import './test-env';
 
@@ -55,6 +56,7 @@ export async function startApp(env: Record<string, string>): Promise<{ url: stri
 }
 
 let sink: SmtpSink | undefined;
+let printer: IppPrinterFake | undefined;
 let app: ChildProcess | undefined;
 
 export async function setup(project: TestProject): Promise<void> {
@@ -63,13 +65,18 @@ export async function setup(project: TestProject): Promise<void> {
   sink = await startSmtpSink({ port: 0, dir: mailDir });
   process.env.SMTP_PORT = String(sink.port);
   // Scheduled jobs run when a test asks (POST /api/v1/jobs/...), not by the clock.
-  const started = await startApp({ SMTP_HOST: '127.0.0.1', SMTP_PORT: String(sink.port), TF_JOBS: '0' });
+  const printDir = mkdtempSync(path.join(os.tmpdir(), 'tallyforge-printed-'));
+  printer = await startIppPrinter({ port: 0, dir: printDir });
+  const started = await startApp({ SMTP_HOST: '127.0.0.1', SMTP_PORT: String(sink.port), PRINTER_URL: printer.url, TF_JOBS: '0' });
   app = started.child;
   project.provide('baseUrl', started.url);
   project.provide('mailDir', mailDir);
+  project.provide('printDir', printDir);
+  project.provide('printerUrl', printer.url);
 }
 
 export async function teardown(): Promise<void> {
   app?.kill('SIGTERM');
   await sink?.close();
+  await printer?.close();
 }

@@ -3,6 +3,8 @@ declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
     mailDir: string;
+    printDir: string;
+    printerUrl: string;
   }
 }
 

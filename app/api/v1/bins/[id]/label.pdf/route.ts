@@ -1,0 +1,10 @@
+import { pdfResponse } from '@/server/http/pdf-response';
+import { route } from '@/server/http/route';
+import { idParamSchema } from '@/server/schemas/common';
+import { binLabelQuerySchema } from '@/server/schemas/labels';
+import { renderLabelPdf } from '@/server/services/labels/render-label-pdf';
+
+export const GET = route({ access: 'labels.print', params: idParamSchema, query: binLabelQuerySchema }, async ({ params, query }) => {
+  const { pdf, filename } = await renderLabelPdf({ template: 'bin', stock: query.stock, ids: [params.id] });
+  return pdfResponse(pdf, filename);
+});

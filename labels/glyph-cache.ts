@@ -1,0 +1,35 @@
+import type { PDFFont } from 'pdf-lib';
+
+// Text for labels, encoded a character at a time: each character's glyph is looked up (and added to the
+// font subset) once per document, then strings are joined from cached pieces. Asking the font to lay out
+// every string costs a millisecond or so each, which dominated large batches. Labels set short lines of
+// codes and words, so per-character glyphs (no ligatures, no kerning) are what they should show anyway.
+export class GlyphCache {
+  private readonly glyphs = new Map<string, { hex: string; width: number }>();
+
+  constructor(readonly font: PDFFont) {}
+
+  private glyph(ch: string): { hex: string; width: number } {
+    let g = this.glyphs.get(ch);
+    if (!g) {
+      const hex = this.font.encodeText(ch).toString();
+      g = { hex: hex.slice(1, -1), width: this.font.widthOfTextAtSize(ch, 1) };
+      this.glyphs.set(ch, g);
+    }
+    return g;
+  }
+
+  // Width of the text at 1 pt; multiply by the size.
+  width(text: string): number {
+    let w = 0;
+    for (const ch of text) w += this.glyph(ch).width;
+    return w;
+  }
+
+  // The text as a PDF hex string of glyph ids, for Tj.
+  hex(text: string): string {
+    let h = '<';
+    for (const ch of text) h += this.glyph(ch).hex;
+    return `${h}>`;
+  }
+}

@@ -1,0 +1,34 @@
+import { assembleLabelsPdf } from './assemble-pdf';
+import type { PreparedLabel } from './label-content';
+import { LABEL_STOCKS, type StockId } from './stocks';
+import { labelsPerPage } from './sheet-layout';
+import { prepareBinLabel, type BinLabelData } from './templates/bin-label';
+import { prepareKitLabel, type KitLabelData } from './templates/kit-label';
+import { preparePartLabel, type PartLabelData } from './templates/part-label';
+
+export const LABEL_TEMPLATES = ['bin', 'part', 'kit'] as const;
+export type LabelTemplate = (typeof LABEL_TEMPLATES)[number];
+
+export type LabelBatch =
+  | { template: 'bin'; stock: StockId; items: BinLabelData[] }
+  | { template: 'part'; stock: StockId; items: PartLabelData[] }
+  | { template: 'kit'; stock: StockId; items: KitLabelData[] };
+
+// Encodes and lays out every label of a batch (the CPU-heavy half: bwip-js encoding).
+export function prepareLabels(batch: LabelBatch): PreparedLabel[] {
+  const stock = LABEL_STOCKS[batch.stock];
+  switch (batch.template) {
+    case 'bin':
+      return batch.items.map((item) => prepareBinLabel(stock, item));
+    case 'part':
+      return batch.items.map((item) => preparePartLabel(stock, item));
+    case 'kit':
+      return batch.items.map((item) => prepareKitLabel(stock, item));
+  }
+}
+
+export async function renderLabels(batch: LabelBatch & { title: string }): Promise<{ pdf: Uint8Array; pages: number }> {
+  const stock = LABEL_STOCKS[batch.stock];
+  const pdf = await assembleLabelsPdf({ stock, labels: prepareLabels(batch), title: batch.title });
+  return { pdf, pages: Math.ceil(batch.items.length / labelsPerPage(stock)) };
+}

@@ -1,0 +1,33 @@
+import 'server-only';
+import { Op } from 'sequelize';
+import type { LabelTemplate } from '@/labels/render-labels';
+import type { StockId } from '@/labels/stocks';
+import { PrintJob, User } from '@/models';
+import { getDb } from '../../db';
+import { sendToPrinter } from '../../print/send-to-printer';
+import type { PrintJobDto } from '../../schemas/labels';
+import { renderLabelPdf } from '../labels/render-label-pdf';
+import { toPrintJobDto } from './print-job-dto';
+
+// Renders and sends queued jobs one after another. A failure is written on its job row and the next
+// job still goes: nothing here throws for a printer that is off or a label that cannot be made.
+export async function sendPrintJobs({ jobIds }: { jobIds: number[] }): Promise<PrintJobDto[]> {
+  getDb();
+  const jobs = await PrintJob.findAll({ where: { id: { [Op.in]: jobIds }, status: 'queued' }, order: [['id', 'ASC']] });
+  for (const job of jobs) {
+    try {
+      const { pdf, pages, filename } = await renderLabelPdf({ template: job.template as LabelTemplate, stock: job.stock as StockId, ids: JSON.parse(job.itemIds) as number[] });
+      await job.update({ pages, bytes: pdf.length });
+      const user = job.requestedBy ? await User.findByPk(job.requestedBy) : null;
+      const jobName = job.batchCount > 1 ? `${filename} (${job.batchIndex + 1} of ${job.batchCount})` : filename;
+      const sent = await sendToPrinter({ printerUrl: job.printerUrl, pdf, jobName, userName: user?.email ?? 'tallyforge' });
+      await job.update({ status: 'sent', printerJobId: sent.printerJobId, sentAt: new Date() });
+    } catch (err) {
+      const message = err instanceof Error ? err.message : String(err);
+      await job.update({ status: 'failed', error: message.slice(0, 500) });
+      console.error('[print] job failed', job.id, message);
+    }
+  }
+  const done = await PrintJob.findAll({ where: { id: { [Op.in]: jobIds } }, order: [['id', 'ASC']] });
+  return done.map(toPrintJobDto);
+}
