@@ -4,6 +4,8 @@ import { Bin, PartStock, StockMovement, StockReservation } from '../../models';
 import { createPart, createScale, stockPart, testDb, unique } from '../helpers/db';
 import { signedIn, type Agent } from '../helpers/http';
 import { waitForMail } from '../helpers/mail';
+import { decodePdf } from '../helpers/decode-pdf';
+import { printedJobs } from '../helpers/printer';
 
 async function makeKit(agent: Agent, parts: Array<{ id: number; quantity: number; below?: number; above?: number }>) {
   const res = await agent.post('/api/v1/kits').send({
@@ -126,6 +128,10 @@ describe('kits and build orders', () => {
     const done = await planner.agent.post(`/api/v1/orders/${order.id}/complete`).send({ version: inProgress.version });
     expect(done.status).toBe(200);
     expect(done.body.order.status).toBe('complete');
+    // The kit label went to the printer by itself on completion; its GS1 DataMatrix names the order.
+    expect(done.body.order.kitLabel).toMatchObject({ status: 'sent' });
+    const symbols = (await decodePdf(printedJobs().at(-1)!.pdf)).flat();
+    expect(symbols.some((sym) => sym.text.includes(order.number))).toBe(true);
     testDb();
     const stock = await PartStock.findByPk(pin.id);
     expect(stock).toMatchObject({ onHand: 400, reserved: 0 });

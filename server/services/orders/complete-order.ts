@@ -6,11 +6,13 @@ import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
 import { retryOnDeadlock } from '../../retry-deadlock';
 import type { CompleteOrderInput, OrderDto } from '../../schemas/orders';
+import { log } from '../../log';
+import { printKitLabel } from '../print-jobs/print-kit-label';
 import { getOrder } from './get-order';
 
 // Completion turns the reservation into a recorded consumption: what was counted into kits leaves
 // the part's bins (largest first), and the hold on stock ends. All in one transaction.
-export async function completeOrder({ orderId, input, by }: { orderId: number; input: CompleteOrderInput; by: SessionUser }): Promise<OrderDto> {
+export async function completeOrder({ orderId, input, by }: { orderId: number; input: CompleteOrderInput; by: SessionUser }): Promise<OrderDto & { kitLabel: { jobId: number; status: string } | null }> {
   const db = getDb();
   await retryOnDeadlock(() =>
     db.transaction(async (transaction) => {
@@ -36,7 +38,12 @@ export async function completeOrder({ orderId, input, by }: { orderId: number; i
       await order.save({ transaction });
     }),
   );
-  return getOrder({ orderId });
+  // The kit label goes out after the commit; a printer problem is on the print log, not an error here.
+  const label = await printKitLabel({ orderId }).catch((err: unknown) => {
+    log.error({ err, orderId }, 'kit label could not be queued');
+    return null;
+  });
+  return { ...(await getOrder({ orderId })), kitLabel: label ? { jobId: label.id, status: label.status } : null };
 }
 
 async function consumeFromBins(line: BuildOrderLine, orderNumber: string, userId: number, transaction: Transaction): Promise<void> {
