@@ -3,6 +3,7 @@ import { MailMessage } from '@/models';
 import type { MailStatus } from '@/models/mail-message';
 import { getDb } from '../db';
 import { getEnv } from '../env';
+import { addressListForLog } from './address-list';
 import { getTransport } from './transport';
 
 export interface OutgoingMail {
@@ -19,7 +20,7 @@ export async function sendMail(mail: OutgoingMail): Promise<MailStatus> {
   if (!mail.to.length) return 'sent';
   const row = await MailMessage.create({
     kind: mail.kind,
-    toAddress: mail.to.join(', '),
+    toAddress: addressListForLog(mail.to),
     subject: mail.subject,
     bodyText: mail.text,
     status: 'queued',
