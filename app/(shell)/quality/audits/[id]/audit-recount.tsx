@@ -78,7 +78,7 @@ export function AuditRecount({ initial, scaleNames, operatorNames }: { initial: 
               <th scope="col" className="px-3 py-2">Count</th>
               <th scope="col" className="px-3 py-2 text-right">Scale count</th>
               <th scope="col" className="px-3 py-2">Hand count</th>
-              <th scope="col" className="px-3 py-2">Result</th>
+              <th scope="col" className="px-3 py-2 hidden lg:table-cell">Result</th>
             </tr>
           </thead>
           <tbody>
@@ -111,8 +111,10 @@ export function AuditRecount({ initial, scaleNames, operatorNames }: { initial: 
                     onKeyDown={onKey(item, index)}
                   />
                   <p id={`hand-${item.id}-error`} className="field-error" aria-live="polite">{errors[item.id] || null}</p>
+                  {/* On narrow screens the result sits under the input instead of in a column off to the side. */}
+                  <span className="lg:hidden"><ItemVerdict item={item} /></span>
                 </td>
-                <td className="px-3 py-2.5"><ItemVerdict item={item} /></td>
+                <td className="px-3 py-2.5 hidden lg:table-cell"><ItemVerdict item={item} /></td>
               </tr>
             ))}
           </tbody>
