@@ -8,7 +8,7 @@ export const metadata = { title: 'Today' };
 
 export default async function TodayPage() {
   const user = await requirePageUser();
-  const waiting = await getWaiting(user.role);
+  const waiting = await getWaiting(user);
   const allowed = Object.entries(ROLE_PERMISSIONS).filter(([, roles]) => roles.includes(user.role));
   return (
     <div className="space-y-6">

@@ -4,6 +4,7 @@ import type { MailStatus } from '@/models/mail-message';
 import { getDb } from '../db';
 import { getEnv } from '../env';
 import { log } from '../log';
+import { addressListForLog } from './address-list';
 import { getTransport } from './transport';
 
 export interface OutgoingMail {
@@ -20,7 +21,7 @@ export async function sendMail(mail: OutgoingMail): Promise<MailStatus> {
   if (!mail.to.length) return 'sent';
   const row = await MailMessage.create({
     kind: mail.kind,
-    toAddress: mail.to.join(', '),
+    toAddress: addressListForLog(mail.to),
     subject: mail.subject,
     bodyText: mail.text,
     status: 'queued',

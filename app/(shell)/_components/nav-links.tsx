@@ -8,6 +8,8 @@ export function NavLinks({ items }: { items: NavItem[] }) {
   const pathname = usePathname();
   const groups: Array<[NavItem['group'], string]> = [
     ['work', 'Work'],
+    ['stock', 'Stockroom'],
+    ['quality', 'Quality'],
     ['admin', 'Administration'],
   ];
   return (
@@ -19,7 +21,7 @@ export function NavLinks({ items }: { items: NavItem[] }) {
           <div key={group} className="flex md:block gap-1 md:mb-4">
             <p className="hidden md:block px-3 pb-1 text-xs uppercase tracking-wider text-paper-line/60">{title}</p>
             {entries.map((item) => {
-              const active = item.href === '/' ? pathname === '/' : pathname.startsWith(item.href);
+              const active = isActive(item.href, pathname, items);
               return (
                 <Link
                   key={item.href}
@@ -38,4 +40,11 @@ export function NavLinks({ items }: { items: NavItem[] }) {
       })}
     </nav>
   );
+}
+
+// The longest matching entry wins, so /bins/variances does not also light up /bins.
+function isActive(href: string, pathname: string, items: NavItem[]): boolean {
+  const matches = (h: string) => (h === '/' ? pathname === '/' : pathname === h || pathname.startsWith(`${h}/`));
+  if (!matches(href)) return false;
+  return !items.some((other) => other.href.length > href.length && other.href.startsWith(href) && matches(other.href));
 }

@@ -1,7 +1,7 @@
 import 'server-only';
 import { QueryTypes } from 'sequelize';
 import { getDb } from '../../db';
-import type { WaitingItem } from './get-waiting';
+import type { WaitingItem } from './waiting-item';
 
 // The planner's three piles, from one query: drafts not released, open orders past due, and
 // open orders whose every line is in tolerance, waiting only for someone to complete them.

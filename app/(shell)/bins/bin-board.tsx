@@ -1,0 +1,57 @@
+'use client';
+
+import type { ColDef, ICellRendererParams } from 'ag-grid-community';
+import { useState } from 'react';
+import type { BinDto } from '@/server/schemas/bins';
+import type { LastVariance } from '@/server/services/bins/latest-bin-counts';
+import { DataGrid } from '../../_components/data-grid';
+import { formatWhen } from '../../_components/format';
+import { BenchLink } from './bench-link';
+
+export type BinRow = BinDto & { lastVariance: LastVariance | null };
+
+const STATUS_WORDS: Record<string, string> = { applied: 'booked', pending: 'awaiting approval', approved: 'approved', rejected: 'rejected, recount' };
+
+function VarianceCell({ value }: { value: LastVariance | null }) {
+  if (!value) return <span className="text-ink-faint">not counted</span>;
+  const tone = value.status === 'pending' ? 'text-caution' : value.status === 'rejected' ? 'text-fault' : 'text-ink';
+  return (
+    <span className={tone}>
+      <span className="num">{value.variance > 0 ? '+' : ''}{value.variance}</span> pcs · {STATUS_WORDS[value.status] ?? value.status}
+    </span>
+  );
+}
+
+export function BinBoard({ rows, canCount }: { rows: BinRow[]; canCount: boolean }) {
+  const [filter, setFilter] = useState('');
+  const columns: ColDef<BinRow>[] = [
+    { field: 'code', headerName: 'Bin', minWidth: 140, cellClass: 'num' },
+    { field: 'partNumber', headerName: 'Part', minWidth: 140 },
+    { field: 'bookQuantity', headerName: 'Book qty', maxWidth: 130, type: 'numericColumn', cellClass: 'num' },
+    { field: 'abcClass', headerName: 'ABC', maxWidth: 90 },
+    { field: 'lastCountedAt', headerName: 'Last counted', minWidth: 180, valueFormatter: (p) => (p.value ? formatWhen(p.value) : 'never') },
+    {
+      field: 'lastVariance',
+      headerName: 'Last variance',
+      minWidth: 200,
+      comparator: (a: LastVariance | null, b: LastVariance | null) => Math.abs(a?.variance ?? 0) - Math.abs(b?.variance ?? 0),
+      filter: false,
+      cellRenderer: (p: ICellRendererParams<BinRow>) => <VarianceCell value={p.data?.lastVariance ?? null} />,
+    },
+    ...(canCount
+      ? [{ headerName: '', colId: 'count', sortable: false, filter: false, width: 180, flex: 0, cellRenderer: (p: ICellRendererParams<BinRow>) => (p.data ? <BenchLink code={p.data.code} /> : null) } satisfies ColDef<BinRow>]
+      : []),
+  ];
+  return (
+    <section aria-labelledby="bins-title" className="space-y-3">
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <h2 id="bins-title" className="text-lg font-bold">All bins <span className="num text-ink-faint">({rows.length})</span></h2>
+        <div className="flex items-center gap-2">
+          <label htmlFor="bin-filter" className="text-sm text-ink-soft">Find</label>
+          <input id="bin-filter" className="field max-w-xs" value={filter} onChange={(e) => setFilter(e.target.value)} placeholder="Bin code or part" />
+        </div>
+      </div>
+      <DataGrid label="Bins" rows={rows} columns={columns} rowId={(b) => String(b.id)} quickFilter={filter} height={Math.min(480, 46 + Math.max(rows.length, 3) * 48)} />
+    </section>
+  );
+}

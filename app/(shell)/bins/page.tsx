@@ -1,0 +1,36 @@
+import { can } from '@/lib/roles';
+import { requirePageUser } from '@/server/auth/authorize';
+import { binsDue } from '@/server/services/bins/bins-due';
+import { latestBinCounts } from '@/server/services/bins/latest-bin-counts';
+import { listBins } from '@/server/services/bins/list-bins';
+import { listContainers } from '@/server/services/containers/list-containers';
+import { listParts } from '@/server/services/parts/list-parts';
+import { BinBoard } from './bin-board';
+import { BinForm } from './bin-form';
+import { CycleCountPlan } from './cycle-count-plan';
+
+export const metadata = { title: 'Bins' };
+
+export default async function BinsPage() {
+  const user = await requirePageUser('catalog.read', '/bins');
+  const [bins, last, due] = await Promise.all([listBins({}), latestBinCounts(), binsDue()]);
+  const rows = bins.map((b) => ({ ...b, lastVariance: last[b.id] ?? null }));
+  const editor = can(user.role, 'bins.edit');
+  const [parts, containers] = editor ? await Promise.all([listParts({ page: 1, pageSize: 500, sort: 'partNumber', dir: 'asc' }), listContainers()]) : [null, []];
+  return (
+    <div className="space-y-6">
+      <header>
+        <h1 className="page-title">Bins</h1>
+        <p className="text-ink-soft">Book quantities by location, what is due for a cycle count, and how the last count compared.</p>
+      </header>
+      <CycleCountPlan bins={due} canCount={can(user.role, 'counts.capture')} />
+      <BinBoard rows={rows} canCount={can(user.role, 'counts.capture')} />
+      {editor && parts ? (
+        <section aria-labelledby="new-bin-title" className="space-y-3">
+          <h2 id="new-bin-title" className="text-lg font-bold">Add a bin</h2>
+          <BinForm parts={parts.parts.map((p) => ({ id: p.id, partNumber: p.partNumber }))} containers={containers.map((c) => ({ id: c.id, name: c.name }))} />
+        </section>
+      ) : null}
+    </div>
+  );
+}

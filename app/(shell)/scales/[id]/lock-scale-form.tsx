@@ -1,0 +1,44 @@
+'use client';
+
+import { Form, Formik } from 'formik';
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import * as yup from 'yup';
+import { apiFetch } from '../../../_components/api-client';
+import { toFormikErrors } from '../../../_components/field-errors';
+import { FormField, FormMessage } from '../../../_components/form-field';
+
+const schema = yup.object({ reason: yup.string().trim().min(5, 'Say why the scale is locked').max(300, 'At most 300 characters').required('Say why the scale is locked') });
+
+// A hand lock-out (dropped, damaged, suspect readings). Only a passing test lifts it.
+export function LockScaleForm({ scaleId, locked }: { scaleId: number; locked: boolean }) {
+  const router = useRouter();
+  const [message, setMessage] = useState<string | null>(null);
+  return (
+    <Formik
+      initialValues={{ reason: '' }}
+      validationSchema={schema}
+      onSubmit={async (values, helpers) => {
+        setMessage(null);
+        const res = await apiFetch(`/api/v1/scales/${scaleId}/lock`, { method: 'POST', body: values });
+        if (!res.ok) {
+          helpers.setErrors(toFormikErrors(res.fields));
+          setMessage(res.message);
+          return;
+        }
+        helpers.resetForm();
+        router.refresh();
+      }}
+    >
+      {({ isSubmitting }) => (
+        <Form noValidate className="card space-y-3 border-fault/40" aria-label="Lock out this scale">
+          <h2 className="font-bold">{locked ? 'Change the lock-out reason' : 'Lock out this scale'}</h2>
+          <p className="text-sm text-ink-soft">No one can capture counts on a locked scale. It returns to service when a passing test is recorded.</p>
+          <FormField name="reason" label="Reason" autoComplete="off" placeholder="e.g. dropped while moving the bench" />
+          <FormMessage message={message} />
+          <button type="submit" className="btn-danger" disabled={isSubmitting}>{isSubmitting ? 'Locking…' : 'Lock out'}</button>
+        </Form>
+      )}
+    </Formik>
+  );
+}
