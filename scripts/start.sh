@@ -14,6 +14,7 @@ export APP_URL="${APP_URL:-http://localhost:$PORT}"
 export SESSION_SECRET="${SESSION_SECRET:-$(secret_file dev session-secret)}"
 export SMTP_HOST="${SMTP_HOST:-127.0.0.1}" SMTP_PORT="${SMTP_PORT:-2525}"
 export MAIL_SINK_DIR="$ROOT/.data/dev/mail"
+export UPLOAD_DIR="${UPLOAD_DIR:-$ROOT/.data/dev/uploads}"
 TSX="$ROOT/node_modules/.bin/tsx --conditions=react-server"
 
 if [ "$SMTP_HOST" = "127.0.0.1" ] && ! { [ -f "$run/fakes.pid" ] && kill -0 "$(cat "$run/fakes.pid")" 2>/dev/null; }; then

@@ -19,6 +19,7 @@ db_reset_database test
 export NODE_ENV=production
 export SESSION_SECRET="test-secret-$(head -c 24 /dev/urandom | base64 | tr -d '/+=')"
 export DEMO_PASSWORD="${DEMO_PASSWORD:-tallyforge-demo}"
+export UPLOAD_DIR="$ROOT/.data/test/uploads"
 TSX="$ROOT/node_modules/.bin/tsx --conditions=react-server"
 
 log "migrating the test database"

@@ -53,6 +53,7 @@ export interface PartDto {
   pieceSpread: number | null;
   spreadLearned: boolean;
   spreadObservations: number;
+  hasPhoto: boolean;
   version: number;
   updatedAt: string;
 }

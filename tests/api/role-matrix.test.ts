@@ -94,6 +94,10 @@ const MATRIX: Entry[] = [
   { method: 'POST', route: '/api/v1/labels', allowed: printers, body: {} },
   { method: 'GET', route: '/api/v1/print-jobs', allowed: printers },
   { method: 'POST', route: '/api/v1/print-jobs', allowed: printers, body: {} },
+  { method: 'GET', route: '/api/v1/parts/[id]/photo', allowed: everyone, path: '/api/v1/parts/999999/photo' },
+  { method: 'PUT', route: '/api/v1/parts/[id]/photo', allowed: partEditors, path: '/api/v1/parts/999999/photo' },
+  { method: 'GET', route: '/api/v1/test-weights/[id]/certificate', allowed: everyone, path: '/api/v1/test-weights/999999/certificate' },
+  { method: 'PUT', route: '/api/v1/test-weights/[id]/certificate', allowed: quality, path: '/api/v1/test-weights/999999/certificate' },
 ];
 
 function routeFiles(dir: string): string[] {

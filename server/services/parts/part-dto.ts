@@ -14,6 +14,7 @@ export function toPartDto(p: Part): PartDto {
     pieceSpread: p.pieceSpread === null ? null : Number(p.pieceSpread),
     spreadLearned: p.pieceSpread !== null,
     spreadObservations: p.spreadObservations,
+    hasPhoto: Boolean(p.photoFile),
     version: p.version,
     updatedAt: p.updatedAt.toISOString(),
   };
