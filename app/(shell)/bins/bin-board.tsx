@@ -22,7 +22,7 @@ function VarianceCell({ value }: { value: LastVariance | null }) {
   );
 }
 
-export function BinBoard({ rows, canCount }: { rows: BinRow[]; canCount: boolean }) {
+export function BinBoard({ rows, canCount, canPrint }: { rows: BinRow[]; canCount: boolean; canPrint: boolean }) {
   const [filter, setFilter] = useState('');
   const columns: ColDef<BinRow>[] = [
     { field: 'code', headerName: 'Bin', minWidth: 140, cellClass: 'num' },
@@ -40,6 +40,24 @@ export function BinBoard({ rows, canCount }: { rows: BinRow[]; canCount: boolean
     },
     ...(canCount
       ? [{ headerName: '', colId: 'count', sortable: false, filter: false, width: 180, flex: 0, cellRenderer: (p: ICellRendererParams<BinRow>) => (p.data ? <BenchLink code={p.data.code} /> : null) } satisfies ColDef<BinRow>]
+      : []),
+    ...(canPrint
+      ? [
+          {
+            headerName: '',
+            colId: 'label',
+            sortable: false,
+            filter: false,
+            width: 150,
+            flex: 0,
+            cellRenderer: (p: ICellRendererParams<BinRow>) =>
+              p.data ? (
+                <a href={`/api/v1/bins/${p.data.id}/label.pdf?stock=4x2in`} target="_blank" rel="noopener" className="text-forge hover:underline" aria-label={`Label for bin ${p.data.code} (PDF)`}>
+                  Label (PDF)
+                </a>
+              ) : null,
+          } satisfies ColDef<BinRow>,
+        ]
       : []),
   ];
   return (

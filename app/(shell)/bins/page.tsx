@@ -24,7 +24,7 @@ export default async function BinsPage() {
         <p className="text-ink-soft">Book quantities by location, what is due for a cycle count, and how the last count compared.</p>
       </header>
       <CycleCountPlan bins={due} canCount={can(user.role, 'counts.capture')} />
-      <BinBoard rows={rows} canCount={can(user.role, 'counts.capture')} />
+      <BinBoard rows={rows} canCount={can(user.role, 'counts.capture')} canPrint={can(user.role, 'labels.print')} />
       {editor && parts ? (
         <section aria-labelledby="new-bin-title" className="space-y-3">
           <h2 id="new-bin-title" className="text-lg font-bold">Add a bin</h2>
