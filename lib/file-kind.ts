@@ -4,6 +4,9 @@
  */
 export type FileKind = 'jpeg' | 'png' | 'webp' | 'pdf';
 
+// One limit for the browser's early check and the server's real one.
+export const MAX_UPLOAD_BYTES = 5 * 1024 * 1024;
+
 export const CONTENT_TYPES: Readonly<Record<FileKind, string>> = {
   jpeg: 'image/jpeg',
   png: 'image/png',

@@ -8,13 +8,15 @@ export interface ApiFailure {
 }
 export type ApiResult<T> = { ok: true; status: number; data: T } | ApiFailure;
 
+// A FormData body goes as multipart (the browser sets its boundary); anything else as JSON.
 export async function apiFetch<T>(path: string, init: { method?: string; body?: unknown; headers?: Record<string, string> } = {}): Promise<ApiResult<T>> {
   let res: Response;
+  const multipart = init.body instanceof FormData;
   try {
     res = await fetch(path, {
       method: init.method ?? 'GET',
-      headers: { ...(init.body !== undefined ? { 'Content-Type': 'application/json' } : {}), ...init.headers },
-      body: init.body !== undefined ? JSON.stringify(init.body) : undefined,
+      headers: { ...(init.body !== undefined && !multipart ? { 'Content-Type': 'application/json' } : {}), ...init.headers },
+      body: multipart ? (init.body as FormData) : init.body !== undefined ? JSON.stringify(init.body) : undefined,
       credentials: 'same-origin',
     });
   } catch {

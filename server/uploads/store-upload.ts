@@ -2,11 +2,9 @@ import 'server-only';
 import { randomUUID } from 'node:crypto';
 import { mkdir, readFile, rename, writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { detectFileKind, type FileKind } from '@/lib/file-kind';
+import { detectFileKind, MAX_UPLOAD_BYTES, type FileKind } from '@/lib/file-kind';
 import { getEnv } from '../env';
 import { AppError } from '../errors';
-
-export const MAX_UPLOAD_BYTES = 5 * 1024 * 1024;
 
 function uploadDir(): string {
   return path.resolve(getEnv().UPLOAD_DIR);

@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import bwipjs from 'bwip-js/node';
 import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Kit } from '../../models';
@@ -107,6 +108,33 @@ describe('planner (browser)', () => {
     expect(await page.getByRole('row', { name: new RegExp(`${tag}-LEARNED`) }).textContent()).toContain('1.2 %');
     expect(await page.getByRole('link', { name: 'Download CSV' }).getAttribute('href')).toBe(`/api/v1/parts/export?q=${tag}`);
     await screenshot(page, 'parts-tablet');
+  });
+
+  it('a planner adds a part photo from the edit form; a file that only claims to be a picture is refused with the reason', async () => {
+    const part = await createPart();
+    // A real, decodable PNG: a QR symbol of the part number.
+    const png = await bwipjs.toBuffer({ bcid: 'qrcode', text: part.partNumber, scale: 4 });
+    const page = await desk.newPage();
+    await signInThroughPage(page, 'planner');
+    await page.goto(`/parts?q=${part.partNumber}`);
+    await page.getByRole('button', { name: `Edit ${part.partNumber}` }).click();
+    const form = page.getByRole('form', { name: `Edit ${part.partNumber}` });
+    await expect.poll(() => form.getByTestId('part-photo').textContent()).toContain('No photo');
+
+    await form.getByLabel('Add a photo').setInputFiles({ name: 'label.png', mimeType: 'image/png', buffer: Buffer.from('<svg onload=alert(1)>') });
+    await expect.poll(() => form.getByTestId('part-photo').textContent()).toContain('must be JPEG, PNG, WEBP');
+
+    await form.getByLabel('Add a photo').setInputFiles({ name: 'qr.png', mimeType: 'image/png', buffer: png });
+    await expect.poll(() => form.getByTestId('part-photo').textContent()).toContain('Photo saved');
+    const img = form.getByRole('img', { name: `Photo of ${part.partNumber}` });
+    await expect.poll(() => img.evaluate((el: HTMLImageElement) => el.complete && el.naturalWidth)).toBeGreaterThan(0);
+    await expect.poll(() => page.getByRole('row', { name: new RegExp(part.partNumber) }).getByRole('img').count()).toBe(1);
+
+    // The photo bumped the part's version; the form took the new one, so saving still works.
+    await form.getByLabel('Description').fill('Pin with a photo');
+    await form.getByRole('button', { name: 'Save part' }).click();
+    await expect.poll(() => page.getByTestId('parts-notice').textContent()).toContain(`${part.partNumber} saved`);
+    await screenshot(page, 'part-photo');
   });
 
   it('creates a kit in the form by part number, copies it to a new revision and retires the old one', async () => {

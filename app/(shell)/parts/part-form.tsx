@@ -6,6 +6,7 @@ import * as yup from 'yup';
 import type { PartDto } from '@/server/schemas/parts';
 import { apiFetch } from '../../_components/api-client';
 import { FormField, FormMessage } from '../../_components/form-field';
+import { PartPhoto } from './part-photo';
 
 const schema = yup.object({
   partNumber: yup
@@ -18,7 +19,8 @@ const schema = yup.object({
 });
 
 // Creates a part, or edits the one given (its part number stays: labels and scans carry it).
-export function PartForm({ part, onSaved, onCancel }: { part: PartDto | null; onSaved: (p: PartDto) => void; onCancel: () => void }) {
+// A new photo bumps the part's version, so the form takes the part back through onPhotoSaved.
+export function PartForm({ part, onSaved, onPhotoSaved, onCancel }: { part: PartDto | null; onSaved: (p: PartDto) => void; onPhotoSaved: (p: PartDto) => void; onCancel: () => void }) {
   const [message, setMessage] = useState<string | null>(null);
   return (
     <Formik
@@ -51,6 +53,7 @@ export function PartForm({ part, onSaved, onCancel }: { part: PartDto | null; on
               <option value="hand">Hand</option>
             </Field>
           </div>
+          {part ? <PartPhoto part={part} onSaved={onPhotoSaved} /> : null}
           <div className="md:col-span-3 flex flex-wrap gap-3 items-center">
             <button type="submit" className="btn-primary" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : part ? 'Save part' : 'Add part'}</button>
             <button type="button" className="btn-quiet" onClick={onCancel}>Close</button>

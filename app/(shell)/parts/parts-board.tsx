@@ -26,6 +26,19 @@ export function PartsBoard({ parts, total, q, canEdit, defaultSpread }: Props) {
   const columns: ColDef<PartDto>[] = [
     { field: 'partNumber', headerName: 'Part number', minWidth: 210, cellClass: 'num' },
     { field: 'description', headerName: 'Description', minWidth: 220, flex: 2 },
+    {
+      field: 'hasPhoto',
+      headerName: 'Photo',
+      maxWidth: 90,
+      filter: false,
+      cellRenderer: (p: ICellRendererParams<PartDto>) =>
+        p.data?.hasPhoto ? (
+          // eslint-disable-next-line @next/next/no-img-element
+          <img src={`/api/v1/parts/${p.data.id}/photo?v=${p.data.version}`} alt={`Photo of ${p.data.partNumber}`} loading="lazy" className="my-1 h-8 w-8 rounded object-cover" />
+        ) : (
+          <span className="text-ink-faint">—</span>
+        ),
+    },
     { field: 'countingMethod', headerName: 'Counted by', minWidth: 130, maxWidth: 150, valueFormatter: (p) => (p.value === 'hand' ? 'Hand' : 'Scale') },
     {
       field: 'averagePieceWeight',
@@ -77,6 +90,10 @@ export function PartsBoard({ parts, total, q, canEdit, defaultSpread }: Props) {
         <PartForm
           part={editing === 'new' ? null : editing}
           onCancel={() => setEditing(null)}
+          onPhotoSaved={(p) => {
+            setEditing(p);
+            router.refresh();
+          }}
           onSaved={(p) => {
             setNotice(`${p.partNumber} saved.`);
             setEditing(null);
