@@ -50,6 +50,8 @@ db_start() {
       --bind-address=127.0.0.1 --user=root --pid-file="$run/mariadb.pid" \
       --log-error="$dir/mariadb.err" --character-set-server=utf8mb4 \
       --collation-server=utf8mb4_unicode_ci --max-connections=300 >/dev/null 2>&1 &
+    # Not a job of this shell: a fault test may kill it, and the shell need not report that.
+    disown
     for _ in $(seq 1 150); do
       mariadb-admin --no-defaults -S "$DB_SOCKET" -u root ping >/dev/null 2>&1 && break
       sleep 0.2

@@ -29,8 +29,19 @@ export function toAppError(err: unknown): AppError {
     const match = err.message.match(/^\w+: ([\w.]+) (.+)$/);
     return new AppError('validation_failed', 'Some fields need attention', { fields: match ? { [match[1]]: match[2] } : { _: err.message } });
   }
-  if (err instanceof ConnectionError) return new AppError('unavailable', 'The database is not reachable right now; try again shortly');
+  if (err instanceof ConnectionError || lostConnection(err)) {
+    return new AppError('unavailable', 'The database is not reachable right now; try again shortly', { headers: { 'Retry-After': '5' } });
+  }
   return new AppError('internal', 'Something went wrong on our side');
+}
+
+// A connection that dies mid-query reaches us as a query error whose driver cause is marked fatal
+// (SQLSTATE class 08, "connection exception"); the transaction on it was rolled back by the server.
+function lostConnection(err: unknown): boolean {
+  const cause = (err as { parent?: unknown; original?: unknown } | null)?.parent ?? (err as { original?: unknown } | null)?.original ?? err;
+  if (typeof cause !== 'object' || cause === null) return false;
+  const { fatal, sqlState } = cause as { fatal?: unknown; sqlState?: unknown };
+  return fatal === true || (typeof sqlState === 'string' && sqlState.startsWith('08'));
 }
 
 export function errorResponse(err: unknown, requestId?: string | null): Response {

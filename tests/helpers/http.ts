@@ -13,10 +13,10 @@ export function anonymous(): Agent {
   return request.agent(baseUrl());
 }
 
-// A fresh user of the role, signed in through the public API.
-export async function signedIn(role: Role): Promise<{ agent: Agent; userId: number; email: string }> {
+// A fresh user of the role, signed in through the public API (of another app instance when given).
+export async function signedIn(role: Role, url = baseUrl()): Promise<{ agent: Agent; userId: number; email: string }> {
   const user = await createUser(role);
-  const agent = request.agent(baseUrl());
+  const agent = request.agent(url);
   const res = await agent.post('/api/v1/session').send({ email: user.email, password: TEST_PASSWORD });
   if (res.status !== 200) throw new Error(`sign-in as ${role} failed: ${res.status} ${JSON.stringify(res.body)}`);
   return { agent, userId: user.id, email: user.email };

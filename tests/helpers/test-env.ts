@@ -5,6 +5,8 @@ declare module 'vitest' {
     mailDir: string;
     printDir: string;
     printerUrl: string;
+    // What the first app instance was started with, so a test can start another just like it.
+    appEnv: Record<string, string>;
   }
 }
 
