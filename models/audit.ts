@@ -38,8 +38,8 @@ export class Audit extends Model<InferAttributes<Audit>, InferCreationAttributes
         verdict: { type: DataTypes.ENUM(...AUDIT_VERDICTS), allowNull: true },
         createdBy: { type: DataTypes.INTEGER, allowNull: false },
         closedAt: { type: DataTypes.DATE, allowNull: true },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'Audit', tableName: 'audits' },
     );

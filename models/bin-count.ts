@@ -29,8 +29,8 @@ export class BinCount extends Model<InferAttributes<BinCount>, InferCreationAttr
         decidedBy: { type: DataTypes.INTEGER, allowNull: true },
         decidedAt: { type: DataTypes.DATE, allowNull: true },
         note: { type: DataTypes.STRING(300), allowNull: true },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'BinCount', tableName: 'bin_counts' },
     );

@@ -24,8 +24,8 @@ export class Bin extends Model<InferAttributes<Bin>, InferCreationAttributes<Bin
         abcClass: { type: DataTypes.ENUM(...ABC_CLASSES), allowNull: false, defaultValue: 'C' },
         lastCountedAt: { type: DataTypes.DATE, allowNull: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'Bin', tableName: 'bins', version: true },
     );

@@ -30,8 +30,8 @@ export class BuildOrderLine extends Model<InferAttributes<BuildOrderLine>, Infer
         varianceSum: { type: DataTypes.DECIMAL(16, 6), allowNull: false, defaultValue: 0 },
         captures: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         verdict: { type: DataTypes.ENUM(...LINE_VERDICTS), allowNull: false, defaultValue: 'open' },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'BuildOrderLine', tableName: 'build_order_lines' },
     );

@@ -32,8 +32,8 @@ export class BuildOrder extends Model<InferAttributes<BuildOrder>, InferCreation
         cancelledAt: { type: DataTypes.DATE, allowNull: true },
         overrideReason: { type: DataTypes.STRING(500), allowNull: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'BuildOrder', tableName: 'build_orders', version: true },
     );

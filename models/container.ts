@@ -19,8 +19,8 @@ export class Container extends Model<InferAttributes<Container>, InferCreationAt
         kind: { type: DataTypes.ENUM(...CONTAINER_KINDS), allowNull: false },
         tareG: { type: grams(), allowNull: false },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'Container', tableName: 'containers', version: true },
     );

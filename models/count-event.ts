@@ -60,8 +60,8 @@ export class CountEvent extends Model<InferAttributes<CountEvent>, InferCreation
         operatorId: { type: DataTypes.INTEGER, allowNull: false },
         orderLineId: { type: DataTypes.INTEGER, allowNull: true },
         binId: { type: DataTypes.INTEGER, allowNull: true },
-        createdAt: DataTypes.DATE(3),
-        updatedAt: DataTypes.DATE(3),
+        createdAt: { type: DataTypes.DATE(3), allowNull: false },
+        updatedAt: { type: DataTypes.DATE(3), allowNull: false },
       },
       { sequelize, modelName: 'CountEvent', tableName: 'count_events' },
     );

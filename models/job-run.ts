@@ -10,7 +10,7 @@ export class JobRun extends Model<InferAttributes<JobRun>, InferCreationAttribut
       {
         job: { type: DataTypes.STRING(60), primaryKey: true },
         runKey: { type: DataTypes.STRING(120), primaryKey: true },
-        createdAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'JobRun', tableName: 'job_runs', updatedAt: false },
     );

@@ -19,8 +19,8 @@ export class Kit extends Model<InferAttributes<Kit>, InferCreationAttributes<Kit
         description: { type: DataTypes.STRING(200), allowNull: false },
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'Kit', tableName: 'kits', version: true, indexes: [{ unique: true, fields: ['code', 'revision'] }] },
     );

@@ -27,8 +27,8 @@ export class MailMessage extends Model<InferAttributes<MailMessage>, InferCreati
         status: { type: DataTypes.ENUM(...MAIL_STATUSES), allowNull: false },
         error: { type: DataTypes.STRING(500), allowNull: true },
         sentAt: { type: DataTypes.DATE, allowNull: true },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'MailMessage', tableName: 'mail_messages' },
     );

@@ -29,8 +29,8 @@ export class Part extends Model<InferAttributes<Part>, InferCreationAttributes<P
         spreadObservations: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         photoFile: { type: DataTypes.STRING(80), allowNull: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'Part', tableName: 'parts', version: true },
     );

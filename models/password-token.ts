@@ -18,8 +18,8 @@ export class PasswordToken extends Model<InferAttributes<PasswordToken>, InferCr
         tokenHash: { type: DataTypes.CHAR(64), allowNull: false, unique: true },
         expiresAt: { type: DataTypes.DATE, allowNull: false },
         usedAt: { type: DataTypes.DATE, allowNull: true },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'PasswordToken', tableName: 'password_tokens' },
     );

@@ -41,8 +41,8 @@ export class PrintJob extends Model<InferAttributes<PrintJob>, InferCreationAttr
         error: { type: DataTypes.STRING(500), allowNull: true },
         requestedBy: { type: DataTypes.INTEGER, allowNull: true },
         sentAt: { type: DataTypes.DATE, allowNull: true },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'PrintJob', tableName: 'print_jobs' },
     );

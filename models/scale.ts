@@ -36,8 +36,8 @@ export class Scale extends Model<InferAttributes<Scale>, InferCreationAttributes
         statusReason: { type: DataTypes.STRING(300), allowNull: true },
         calibrationDueAt: { type: DataTypes.DATEONLY, allowNull: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'Scale', tableName: 'scales', version: true },
     );

@@ -16,7 +16,7 @@ export class SiteSettings extends Model<InferAttributes<SiteSettings>, InferCrea
   static initModel(sequelize: Sequelize): void {
     SiteSettings.init(
       {
-        id: { type: DataTypes.INTEGER, primaryKey: true, defaultValue: 1 },
+        id: { type: DataTypes.INTEGER, primaryKey: true },
         siteName: { type: DataTypes.STRING(120), allowNull: false },
         displayUnit: { type: DataTypes.STRING(4), allowNull: false },
         defaultPieceSpread: { type: DataTypes.DECIMAL(6, 4), allowNull: false },
@@ -24,8 +24,8 @@ export class SiteSettings extends Model<InferAttributes<SiteSettings>, InferCrea
         varianceThresholdPct: { type: DataTypes.DECIMAL(6, 2), allowNull: false },
         varianceThresholdPcs: { type: DataTypes.INTEGER, allowNull: false },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'SiteSettings', tableName: 'site_settings', version: true },
     );

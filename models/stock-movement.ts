@@ -26,7 +26,7 @@ export class StockMovement extends Model<InferAttributes<StockMovement>, InferCr
         refId: { type: DataTypes.INTEGER, allowNull: true },
         note: { type: DataTypes.STRING(300), allowNull: true },
         createdBy: { type: DataTypes.INTEGER, allowNull: false },
-        createdAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'StockMovement', tableName: 'stock_movements', updatedAt: false },
     );

@@ -18,8 +18,8 @@ export class StockReservation extends Model<InferAttributes<StockReservation>, I
         partId: { type: DataTypes.INTEGER, allowNull: false },
         quantity: { type: DataTypes.INTEGER, allowNull: false },
         status: { type: DataTypes.ENUM(...RESERVATION_STATUSES), allowNull: false, defaultValue: 'active' },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'StockReservation', tableName: 'stock_reservations' },
     );

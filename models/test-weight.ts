@@ -26,8 +26,8 @@ export class TestWeight extends Model<InferAttributes<TestWeight>, InferCreation
         dueAt: { type: DataTypes.DATEONLY, allowNull: true },
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
+        createdAt: { type: DataTypes.DATE, allowNull: false },
+        updatedAt: { type: DataTypes.DATE, allowNull: false },
       },
       { sequelize, modelName: 'TestWeight', tableName: 'test_weights', version: true },
     );
