@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
-import { describe, expect, inject, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { Bin, BuildOrder, CountEvent, PartStock, StockMovement, StockReservation } from '../../models';
-import { startApp } from '../helpers/app-process';
+import { startAnotherApp } from '../helpers/app-process';
 import { crashDatabase, holdRowLocks, startDatabase, waitForLockWaits, waitForNoOpenTransactions } from '../helpers/database-faults';
 import { createPart, createScale, stockPart, testDb } from '../helpers/db';
 import { anonymous, signedIn, type Agent } from '../helpers/http';
@@ -110,8 +110,8 @@ describe('faults: the database crashes, the app is killed', () => {
   });
 
   it('leaves the database as it was when the app is killed halfway through a release, and a restarted app releases it once', { timeout: 120_000 }, async () => {
-    const first = await startApp(inject('appEnv'));
-    let restarted: Awaited<ReturnType<typeof startApp>> | undefined;
+    const first = await startAnotherApp();
+    let restarted: Awaited<ReturnType<typeof startAnotherApp>> | undefined;
     try {
       const planner = await signedIn('planner', first.url);
       const { order } = await releasedOrder(planner.agent, { status: 'draft' });
@@ -131,7 +131,7 @@ describe('faults: the database crashes, the app is killed', () => {
       expect(await reservationsFor(order.id)).toBe(0);
       expect(await stockOf(partId)).toEqual(before);
 
-      restarted = await startApp(inject('appEnv'));
+      restarted = await startAnotherApp();
       const again = await signedIn('planner', restarted.url);
       expect((await again.agent.post(`/api/v1/orders/${order.id}/release`).send({ version: order.version })).status).toBe(200);
       expect(await stockOf(partId)).toEqual({ onHand: before.onHand, reserved: before.reserved + order.lines[0].required });

@@ -1,7 +1,7 @@
 import { once } from 'node:events';
-import { describe, expect, inject, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { PartStock } from '../../models';
-import { startApp } from '../helpers/app-process';
+import { startAnotherApp } from '../helpers/app-process';
 import { holdRowLocks, waitForLockWaits } from '../helpers/database-faults';
 import { testDb } from '../helpers/db';
 import { signedIn } from '../helpers/http';
@@ -9,7 +9,7 @@ import { releasedOrder } from '../helpers/orders';
 
 describe('graceful shutdown', () => {
   it('on SIGTERM stops taking new requests, finishes the release in flight, and exits', { timeout: 60_000 }, async () => {
-    const app = await startApp(inject('appEnv'));
+    const app = await startAnotherApp();
     try {
       const planner = await signedIn('planner', app.url);
       const { order } = await releasedOrder(planner.agent, { status: 'draft' });

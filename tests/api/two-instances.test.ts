@@ -1,8 +1,8 @@
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CountEvent, PartStock, Scale } from '../../models';
-import { startApp } from '../helpers/app-process';
+import { startAnotherApp } from '../helpers/app-process';
 import { createPart, createScale, createUser, stockPart, TEST_PASSWORD, testDb, unique } from '../helpers/db';
 import { baseUrl, type Agent } from '../helpers/http';
 import { mailTo, waitForMail } from '../helpers/mail';
@@ -21,10 +21,10 @@ async function signedInOnBoth(role: Role, urls: [string, string]): Promise<{ a: 
 }
 
 describe('two app instances on one database', () => {
-  let second: Awaited<ReturnType<typeof startApp>>;
+  let second: Awaited<ReturnType<typeof startAnotherApp>>;
   let urls: [string, string];
   beforeAll(async () => {
-    second = await startApp(inject('appEnv'));
+    second = await startAnotherApp();
     urls = [baseUrl(), second.url];
   }, 60_000);
   afterAll(() => {

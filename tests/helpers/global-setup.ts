@@ -7,7 +7,7 @@ import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { startIppPrinter, type IppPrinterFake } from '../../scripts/fakes/ipp-printer';
 import { startSmtpSink, type SmtpSink } from '../../scripts/fakes/smtp-sink';
-import { startApp } from './app-process';
+import { startApp } from '../../scripts/next-start';
 import './test-env';
 
 let sink: SmtpSink | undefined;
@@ -23,7 +23,7 @@ export async function setup(project: TestProject): Promise<void> {
   const printDir = mkdtempSync(path.join(os.tmpdir(), 'tallyforge-printed-'));
   printer = await startIppPrinter({ port: 0, dir: printDir });
   const appEnv = { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(sink.port), PRINTER_URL: printer.url, TF_JOBS: '0' };
-  const started = await startApp(appEnv);
+  const started = await startApp(appEnv, 'test-results');
   app = started.child;
   project.provide('baseUrl', started.url);
   project.provide('appEnv', appEnv);
