@@ -4,4 +4,4 @@ import { inject } from 'vitest';
 import { startApp } from '../../scripts/next-start';
 import './test-env';
 
-export const startAnotherApp = () => startApp(inject('appEnv'), 'test-results');
+export const startAnotherApp = (env: Record<string, string> = {}) => startApp({ ...inject('appEnv'), ...env }, 'test-results');
