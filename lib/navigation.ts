@@ -18,6 +18,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { href: '/parts', label: 'Parts', permission: 'catalog.read', group: 'work' },
   { href: '/bins', label: 'Bins', permission: 'catalog.read', group: 'stock' },
   { href: '/bins/variances', label: 'Variances', permission: 'catalog.read', group: 'stock' },
+  { href: '/labels', label: 'Labels', permission: 'labels.print', group: 'stock' },
   { href: '/scales', label: 'Scales', permission: 'catalog.read', group: 'quality' },
   { href: '/quality/test-weights', label: 'Test weights', permission: 'calibration.manage', group: 'quality' },
   { href: '/quality/audits', label: 'Count audits', permission: 'audits.run', group: 'quality' },

@@ -23,7 +23,11 @@ $TSX scripts/bench/labels.ts
 ensure_mariadb
 export DB_NAME="tallyforge_bench_$$"
 db_start bench "${TF_BENCH_DB_PORT:-3329}"
-drop_bench_db() { mariadb --no-defaults -S "$ROOT/.data/bench/run/mariadb.sock" -u root -e "DROP DATABASE IF EXISTS \`$DB_NAME\`" || true; db_stop bench; }
+# The release bench sends its mails to a local sink, as npm start does, so they cost what they would.
+export SMTP_HOST=127.0.0.1 SMTP_PORT="${TF_BENCH_SMTP_PORT:-2535}" PRINTER_PORT="${TF_BENCH_PRINTER_PORT:-8641}"
+MAIL_SINK_DIR="$ROOT/.data/bench/mail" PRINT_SINK_DIR="$ROOT/.data/bench/printed" $TSX scripts/fakes/run-fakes.ts >"$ROOT/.data/bench/fakes.log" 2>&1 &
+fakes_pid=$!
+drop_bench_db() { kill "$fakes_pid" 2>/dev/null || true; mariadb --no-defaults -S "$ROOT/.data/bench/run/mariadb.sock" -u root -e "DROP DATABASE IF EXISTS \`$DB_NAME\`" || true; db_stop bench; }
 trap drop_bench_db EXIT
 export NODE_ENV=production
 export SESSION_SECRET="bench-secret-$(head -c 24 /dev/urandom | base64 | tr -d '/+=')"

@@ -27,6 +27,11 @@ export async function startApp(env: Record<string, string>, logDir: string): Pro
     env: { ...process.env, APP_URL: url, ...env, PORT: String(port) },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
+  // Never outlive the process that started it, even when that one ends without cleaning up
+  // (a timed-out test, a failed bench).
+  const reap = () => child.kill('SIGKILL');
+  process.once('exit', reap);
+  child.once('exit', () => process.off('exit', reap));
   mkdirSync(path.join(root, logDir), { recursive: true });
   const log = createWriteStream(path.join(root, logDir, `app-${port}.log`));
   let output = '';

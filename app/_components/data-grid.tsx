@@ -30,9 +30,11 @@ interface DataGridProps<T> {
   height?: number | string;
   quickFilter?: string;
   label: string;
+  // Checkbox rows; the grid reports the chosen rows after every change.
+  onSelection?: (rows: T[]) => void;
 }
 
-export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, label }: DataGridProps<T>) {
+export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, label, onSelection }: DataGridProps<T>) {
   return (
     <div style={{ height }} aria-label={label} role="region">
       <AgGridReact<T>
@@ -43,6 +45,8 @@ export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, l
         quickFilterText={quickFilter}
         defaultColDef={{ sortable: true, filter: true, resizable: true, flex: 1, minWidth: 110 }}
         animateRows={false}
+        rowSelection={onSelection ? { mode: 'multiRow', selectAll: 'filtered' } : undefined}
+        onSelectionChanged={onSelection ? (e) => onSelection(e.api.getSelectedRows()) : undefined}
         // Every column stays in the page, so narrow screens scroll instead of dropping cells
         // that find-in-page and screen readers would miss.
         suppressColumnVirtualisation
