@@ -1,12 +1,19 @@
 import 'server-only';
 import { log } from '../log';
+import { failInterruptedPrintJobs } from '../services/print-jobs/fail-interrupted-print-jobs';
 import { runCalibrationReminders } from './calibration-reminders';
 
-const HOUR = 3_600_000;
+const MINUTE = 60_000;
 
-// Runs scheduled work in each app instance; claimRun keeps several instances from repeating it.
-export function startScheduler(): void {
-  const tick = () => runCalibrationReminders().catch((err) => log.error({ err }, 'calibration reminders failed'));
+function every(ms: number, name: string, work: () => Promise<unknown>): void {
+  const tick = () => work().catch((err) => log.error({ err }, `${name} failed`));
   setTimeout(tick, 15_000).unref();
-  setInterval(tick, HOUR).unref();
+  setInterval(tick, ms).unref();
+}
+
+// Runs scheduled work in each app instance; claimRun keeps several instances from repeating a
+// reminder, and the print-job sweep is one conditional UPDATE, safe to run anywhere at once.
+export function startScheduler(): void {
+  every(60 * MINUTE, 'calibration reminders', () => runCalibrationReminders());
+  every(5 * MINUTE, 'interrupted print jobs', () => failInterruptedPrintJobs());
 }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { PDFDocument } from 'pdf-lib';
 import { PrintJob } from '../../models';
+import { failInterruptedPrintJobs, INTERRUPTED_MESSAGE } from '../../server/services/print-jobs/fail-interrupted-print-jobs';
 import { printKitLabel } from '../../server/services/print-jobs/print-kit-label';
 import { decodePdf, isPdf } from '../helpers/decode-pdf';
 import { createPart, stockPart, testDb } from '../helpers/db';
@@ -63,6 +64,22 @@ describe('print jobs over IPP', () => {
     expect(unknown.status).toBe(404);
     expect((await agent.get('/api/v1/print-jobs?batch=nope')).status).toBe(400);
     expect(await PrintJob.count()).toBe(before);
+  });
+});
+
+describe('print jobs an app left behind when it stopped', () => {
+  it('marks jobs still queued after 10 minutes as failed, saying why, and leaves newer ones alone', async () => {
+    testDb();
+    const job = (minutesAgo: number) => {
+      const at = new Date(Date.now() - minutesAgo * 60_000);
+      return PrintJob.create({ batchId: crypto.randomUUID(), batchIndex: 0, batchCount: 1, template: 'bin', stock: '2x1in', itemIds: '[1]', labels: 1, printerUrl: 'ipp://127.0.0.1:1/printers/x', status: 'queued', requestedBy: null, createdAt: at, updatedAt: at });
+    };
+    const stranded = await job(11);
+    const fresh = await job(2);
+    expect(await failInterruptedPrintJobs()).toBeGreaterThanOrEqual(1);
+    expect(await PrintJob.findByPk(stranded.id)).toMatchObject({ status: 'failed', error: INTERRUPTED_MESSAGE });
+    expect(await PrintJob.findByPk(fresh.id)).toMatchObject({ status: 'queued', error: null });
+    await fresh.destroy();
   });
 });
 

@@ -4,6 +4,7 @@ import type { LabelTemplate } from '@/labels/render-labels';
 import type { StockId } from '@/labels/stocks';
 import { PrintJob, User } from '@/models';
 import { getDb } from '../../db';
+import { log } from '../../log';
 import { sendToPrinter } from '../../print/send-to-printer';
 import type { PrintJobDto } from '../../schemas/labels';
 import { renderLabelPdf } from '../labels/render-label-pdf';
@@ -25,7 +26,7 @@ export async function sendPrintJobs({ jobIds }: { jobIds: number[] }): Promise<P
     } catch (err) {
       const message = err instanceof Error ? err.message : String(err);
       await job.update({ status: 'failed', error: message.slice(0, 500) });
-      console.error('[print] job failed', job.id, message);
+      log.error({ printJobId: job.id, err }, 'print job failed');
     }
   }
   const done = await PrintJob.findAll({ where: { id: { [Op.in]: jobIds } }, order: [['id', 'ASC']] });
