@@ -50,6 +50,8 @@ export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, l
         // Every column stays in the page, so narrow screens scroll instead of dropping cells
         // that find-in-page and screen readers would miss.
         suppressColumnVirtualisation
+        // Rows added later (a new print job on top) keep the DOM in display order for screen readers.
+        ensureDomOrder
       />
     </div>
   );

@@ -1,9 +1,11 @@
+import { randomUUID } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { decodePdf } from '../helpers/decode-pdf';
 import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
-import { createPart, stockPart } from '../helpers/db';
+import { PrintJob } from '../../models';
+import { createPart, stockPart, testDb } from '../helpers/db';
 import { printedJobs } from '../helpers/printer';
 
 describe('labels (browser)', () => {
@@ -18,6 +20,9 @@ describe('labels (browser)', () => {
   it('a clerk ticks a bin, downloads its label PDF, sends it to the printer and watches the print log reach sent', async () => {
     const part = await createPart();
     const bin = await stockPart(part.id, 40);
+    // Older jobs already in the log, as in any shop: the new one must be found among them.
+    testDb();
+    for (const labels of [3, 7]) await PrintJob.create({ batchId: randomUUID(), batchIndex: 0, batchCount: 1, template: 'part', stock: '2x1in', itemIds: '[1]', labels, printerUrl: 'ipp://127.0.0.1:1/printers/labels', status: 'sent', requestedBy: null });
     const page = await desk.newPage();
     await signInThroughPage(page, 'clerk');
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Labels' }).click();
@@ -36,9 +41,10 @@ describe('labels (browser)', () => {
 
     const before = printedJobs().length;
     await page.getByRole('button', { name: 'Send to printer' }).click();
-    await expect.poll(() => page.getByTestId('label-status').textContent()).toBe('1 bin label queued for the printer in 1 job.');
-    const log = page.getByRole('region', { name: 'Print log' });
-    await expect.poll(() => log.getByRole('row').nth(1).textContent(), { timeout: 20_000 }).toMatch(/1 bin.*2x1in.*Sent/);
+    await expect.poll(() => page.getByTestId('label-status').textContent()).toMatch(/^1 bin label queued for the printer as job \d+\.$/);
+    const jobId = /job (\d+)/.exec((await page.getByTestId('label-status').textContent())!)![1];
+    const row = page.getByRole('region', { name: 'Print log' }).getByRole('row').filter({ has: page.getByRole('gridcell', { name: jobId, exact: true }) });
+    await expect.poll(() => row.textContent(), { timeout: 20_000 }).toMatch(/1 bin.*2x1in.*Sent/);
     await expect.poll(() => printedJobs().length).toBe(before + 1);
     const [printed] = await decodePdf(printedJobs().at(-1)!.pdf);
     expect(printed.map((s) => s.text)).toContain(bin.code);

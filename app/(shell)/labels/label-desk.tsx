@@ -106,7 +106,8 @@ export function LabelDesk({ bins, parts, orders, stocks, jobs }: Props) {
       return;
     }
     setBatch(res.data.batchId);
-    setMessage({ tone: 'ok', text: `${what} queued for the printer in ${res.data.jobs.length} job${res.data.jobs.length === 1 ? '' : 's'}.` });
+    const ids = res.data.jobs.map((j) => j.id);
+    setMessage({ tone: 'ok', text: `${what} queued for the printer as job ${ids.length === 1 ? ids[0] : `${ids[0]}–${ids[ids.length - 1]}`}.` });
   }
 
   return (
