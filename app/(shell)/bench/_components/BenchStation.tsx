@@ -313,7 +313,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
       </header>
       <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="min-w-0 space-y-4">
-          <CountReadout frame={frame} showing={showing} targetQuantity={work?.targetQuantity ?? null} verdict={verdict} />
+          <CountReadout frame={frame} division={scale?.division ?? 1} showing={showing} targetQuantity={work?.targetQuantity ?? null} verdict={verdict} />
           {notice && !notice.code ? (
             <p role="status" data-testid="notice" className={`rounded-md px-4 py-3 text-lg ${notice.tone === 'fault' ? 'bg-fault-light text-fault' : notice.tone === 'ok' ? 'bg-ok-light text-ok' : 'bg-forge-light text-forge-dark'}`}>{notice.text}</p>
           ) : null}

@@ -1,9 +1,12 @@
 import { toWholePieces } from '@/lib/weighing/count';
+import { formatWeight } from '@/lib/weighing/display-decimals';
 import type { ToleranceVerdict } from '@/lib/weighing/tolerance';
 import type { LiveFrame } from '../_lib/reading-pipeline';
 
 interface Props {
   frame: LiveFrame | null;
+  /** Scale division d (g): weights show its decimals; 1 g when no scale is chosen. */
+  division: number;
   /** What the big number is: a weight before the sample, pieces after. */
   showing: 'gross' | 'net' | 'count';
   targetQuantity: number | null;
@@ -17,7 +20,7 @@ const VERDICT_TEXT: Record<ToleranceVerdict, { text: string; cls: string }> = {
 };
 
 // The number the operator reads from across the bench: very large mono digits, the unit in words.
-export function CountReadout({ frame, showing, targetQuantity, verdict }: Props) {
+export function CountReadout({ frame, division, showing, targetQuantity, verdict }: Props) {
   const est = frame?.estimate ?? null;
   const u = est ? toWholePieces(est.expandedUncertainty) : 0;
   const weight = frame ? (showing === 'gross' ? frame.gross : frame.net) : null;
@@ -28,7 +31,7 @@ export function CountReadout({ frame, showing, targetQuantity, verdict }: Props)
           {frame ? (frame.stable ? 'Settled' : 'Settling…') : 'No readings'}
         </span>
         <span className="num text-paper-line" data-testid="gross">
-          gross {frame ? frame.gross.toFixed(2) : '–'} g
+          gross {frame ? formatWeight(frame.gross, division) : '–'} g
         </span>
       </div>
       {showing === 'count' && est ? (
@@ -42,7 +45,7 @@ export function CountReadout({ frame, showing, targetQuantity, verdict }: Props)
         </div>
       ) : (
         <p className="num mt-2 text-[5rem] leading-none font-bold sm:text-[7rem]" data-testid="live-weight">
-          {weight === null ? '—' : weight.toFixed(1)}
+          {weight === null ? '—' : formatWeight(weight, division)}
           <span className="ml-3 text-3xl font-normal text-paper-line">g {showing === 'net' ? 'net' : ''}</span>
         </p>
       )}
