@@ -4,6 +4,8 @@ import { Part, Scale, TestWeight } from '../../models';
 import { defaultTestLoads } from '../../lib/metrology/evaluate-calibration';
 import { createRandom } from '../../lib/scale/prng';
 import type { SessionUser } from '../../server/auth/session';
+import { createAudit } from '../../server/services/audits/create-audit';
+import { recordHandCount } from '../../server/services/audits/record-hand-count';
 import { createBin } from '../../server/services/bins/create-bin';
 import { recordCalibration } from '../../server/services/calibration/record-calibration';
 import { createTestWeight } from '../../server/services/calibration/test-weights';
@@ -55,6 +57,7 @@ export async function loadDemo(people: People): Promise<void> {
   // 100 drive kits need 200 bearings against 120 in stock: left in draft to show the shortage.
   await createOrder({ input: { kitId: kits[1].id, quantity: 100, dueDate: '2027-01-12' }, by: people.planner });
   await demoCaptures(released.lines, parts, scales.get('Bench 2 · kitting')!, people.operator);
+  await demoAudit(parts, scales.get('Bench 2 · kitting')!, people);
 }
 
 // Builds each weighing-test load from the F1/M1 set, largest weights first.
@@ -134,4 +137,33 @@ async function demoCaptures(lines: Array<{ id: number; partId: number; required:
       by: operator,
     });
   }
+}
+
+// A morning of bag counts at Bench 2, then a count audit over them that quality has finished:
+// each recount is the true number of pieces the simulated bag held, so the accuracy report shows
+// how the bench really did, near-misses included.
+async function demoAudit(parts: Map<string, Part>, bench: Scale, people: People): Promise<void> {
+  const d = Number(bench.divisionG);
+  const bagTare = DEMO_CONTAINERS[0].tare;
+  const truth = new Map<number, number>();
+  for (let i = 0; i < 30; i++) {
+    const spec = DEMO_PARTS[i % DEMO_PARTS.length];
+    const pieces = 40 + Math.floor(random.next() * 160);
+    const weigh = (n: number) => Array.from({ length: n }, () => spec.apw * (1 + spec.spread * random.normal())).reduce((a, b) => a + b, 0);
+    const sample = weigh(20);
+    const rest = weigh(pieces - 20);
+    const answer = await recordCount({
+      idempotencyKey: `demo-bag-${i + 1}`,
+      input: {
+        purpose: 'part', partId: parts.get(spec.partNumber)!.id, scaleId: bench.id, containerId: null, unit: 'g',
+        gross: Number(roundTo(bagTare + sample + rest, d).toFixed(6)), tare: bagTare, sample: { quantity: 20, netWeight: Number(roundTo(sample, d).toFixed(6)) },
+        sampleOnPan: true, targetQuantity: null, stable: true, binId: null, binVersion: null,
+      },
+      by: people.operator,
+    });
+    truth.set(answer.count.id, pieces);
+  }
+  const today = new Date().toISOString().slice(0, 10);
+  const audit = await createAudit({ input: { population: { from: today, to: today, purpose: 'part' }, level: 'II', aql: 2.5, seed: 20261202 }, by: people.quality });
+  for (const item of audit.items) await recordHandCount({ auditId: audit.id, itemId: item.id, handCount: truth.get(item.countEventId)!, by: people.quality });
 }
