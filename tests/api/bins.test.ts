@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { Bin, PartStock, StockMovement } from '../../models';
 import { createPart, createScale, testDb } from '../helpers/db';
 import { signedIn, type Agent } from '../helpers/http';
+import { mailTo, waitForMail } from '../helpers/mail';
 
 async function newBin(agent: Agent, partId: number, bookQuantity: number, abcClass = 'A') {
   const code = `BZ-${String(1 + Math.floor(Math.random() * 99)).padStart(2, '0')}-${1 + Math.floor(Math.random() * 9)}-${String(1 + Math.floor(Math.random() * 99)).padStart(2, '0')}`;
@@ -50,6 +51,12 @@ describe('bins and cycle counts', () => {
     expect((await Bin.findByPk(bin.id))!.bookQuantity).toBe(997);
     const pending = await quality.agent.get(`/api/v1/bin-counts?status=pending&binId=${bin.id}`);
     expect(pending.body.binCounts).toHaveLength(1);
+    // The approvers hear of it at once, with the numbers they decide on; the small one mailed nobody.
+    const [notice] = await waitForMail(quality.email);
+    expect(notice.subject).toBe(`Variance to decide: bin ${bin.code} counted 900, book 997 (-97 pcs, 9.7 %)`);
+    expect(notice.text).toContain(`${part.partNumber}`);
+    expect(mailTo(quality.email)).toHaveLength(1);
+    expect(mailTo(clerk.email)).toHaveLength(0);
 
     expect((await clerk.agent.post(`/api/v1/bin-counts/${large.body.binCount.id}/decision`).send({ decision: 'approve' })).status).toBe(403);
     const approved = await quality.agent.post(`/api/v1/bin-counts/${large.body.binCount.id}/decision`).send({ decision: 'approve', note: 'found a torn bag' });

@@ -8,10 +8,12 @@ import { estimateCount } from '@/lib/weighing';
 import { toGrams } from '@/lib/weighing/units';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
+import { log } from '../../log';
 import { AppError } from '../../errors';
 import { retryOnDeadlock } from '../../retry-deadlock';
 import type { CountEventDto, RecordCountInput } from '../../schemas/counts';
 import { applyBinCount, type BinCountResult } from '../bins/apply-bin-count';
+import { notifyPendingVariance } from '../bins/notify-pending-variance';
 import { applyCountToLine, type LineProgress } from '../orders/apply-count-to-line';
 import { loadUsableScale, scaleNoise } from '../scales/usable-scale';
 import { getSettings } from '../settings/get-settings';
@@ -39,8 +41,9 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
   const earlier = await CountEvent.findOne({ where: { idempotencyKey } });
   if (earlier) return replay(earlier, requestHash);
   const { defaultPieceSpread, varianceThresholdPcs, varianceThresholdPct } = await getSettings();
+  let answer: CountAnswer;
   try {
-    return await retryOnDeadlock(() => db.transaction(async (transaction) => {
+    answer = await retryOnDeadlock(() => db.transaction(async (transaction) => {
       const part = await Part.findByPk(input.partId, { transaction });
       if (!part) throw new AppError('not_found', 'Part was not found', { fields: { partId: 'no such part' } });
       if (part.countingMethod === 'hand') throw new AppError('rule_violated', `${part.partNumber} is counted by hand, not by weight`);
@@ -128,6 +131,9 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
     }
     throw err;
   }
+  // The count stands whatever happens to the notice; a failed one is in the log and the outbox.
+  if (answer.binCount?.status === 'pending') await notifyPendingVariance(answer.binCount, by).catch((err) => log.error({ err }, 'variance notice failed'));
+  return answer;
 }
 
 async function replay(event: CountEvent, requestHash: string): Promise<CountAnswer> {
