@@ -1,6 +1,6 @@
 // Builds the demo through the same services the app uses, so stock, movements and learned
 // weights are consistent. Deterministic: a fixed seed makes every sample the same each time.
-import { Part, Scale, TestWeight } from '../../models';
+import { Bin, Part, Scale, TestWeight } from '../../models';
 import { defaultTestLoads } from '../../lib/metrology/evaluate-calibration';
 import { createRandom } from '../../lib/scale/prng';
 import type { SessionUser } from '../../server/auth/session';
@@ -58,6 +58,7 @@ export async function loadDemo(people: People): Promise<void> {
   await createOrder({ input: { kitId: kits[1].id, quantity: 100, dueDate: '2027-01-12' }, by: people.planner });
   await demoCaptures(released.lines, parts, scales.get('Bench 2 · kitting')!, people.operator);
   await demoAudit(parts, scales.get('Bench 2 · kitting')!, people);
+  await demoVarianceWaiting(parts, scales.get('Bench 2 · kitting')!, people.clerk);
 }
 
 // Builds each weighing-test load from the F1/M1 set, largest weights first.
@@ -166,4 +167,22 @@ async function demoAudit(parts: Map<string, Part>, bench: Scale, people: People)
   const today = new Date().toISOString().slice(0, 10);
   const audit = await createAudit({ input: { population: { from: today, to: today, purpose: 'part' }, level: 'II', aql: 2.5, seed: 20261202 }, by: people.quality });
   for (const item of audit.items) await recordHandCount({ auditId: audit.id, itemId: item.id, handCount: truth.get(item.countEventId)!, by: people.quality });
+}
+
+// The clerk's recount of the M3 nut bin comes up 130 short, beyond the site limits: it waits on
+// the Variances page for a planner or quality engineer, and its notice is in the outbox.
+async function demoVarianceWaiting(parts: Map<string, Part>, bench: Scale, clerk: SessionUser): Promise<void> {
+  const spec = DEMO_PARTS.find((p) => p.partNumber === 'CMW-NUT-M3')!;
+  const bin = (await Bin.findOne({ where: { code: spec.bin } }))!;
+  const d = Number(bench.divisionG);
+  const weigh = (n: number) => roundTo(Array.from({ length: n }, () => spec.apw * (1 + spec.spread * random.normal())).reduce((a, b) => a + b, 0), d);
+  await recordCount({
+    idempotencyKey: 'demo-bin-recount-nuts',
+    input: {
+      purpose: 'bin', partId: parts.get(spec.partNumber)!.id, scaleId: bench.id, containerId: null, unit: 'g',
+      gross: Number(weigh(spec.stock - 130).toFixed(6)), tare: 0, sample: { quantity: 50, netWeight: Number(weigh(50).toFixed(6)) },
+      sampleOnPan: false, targetQuantity: null, stable: true, binId: bin.id, binVersion: bin.version,
+    },
+    by: clerk,
+  });
 }

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Audit, AuditItem, BuildOrder, CountEvent, Scale, User } from '../../models';
+import { Audit, AuditItem, BinCount, BuildOrder, CountEvent, MailMessage, Scale, User } from '../../models';
 import { migrateUp } from '../../models/migrate';
 import { seedDemoData } from '../../scripts/demo/seed-demo-data';
 import { getDb } from '../../server/db';
@@ -43,6 +43,12 @@ describe('the demo (Corvel Motion Works)', () => {
     const scales = await Scale.findAll();
     expect(scales.filter((s) => s.status === 'locked').map((s) => s.name)).toEqual([expect.stringContaining('serial')]);
     expect(scales.filter((s) => s.status === 'in_service').length).toBeGreaterThanOrEqual(2);
+  });
+
+  it("has the clerk's short recount of a bin waiting for a decision, and its notice in the outbox", async () => {
+    const [waiting] = await BinCount.findAll({ where: { status: 'pending' } });
+    expect(waiting.variance).toBeLessThan(-100);
+    expect(await MailMessage.count({ where: { kind: 'variance_pending' } })).toBe(1);
   });
 
   it('has a finished count audit whose recounts fill the accuracy report', async () => {
