@@ -21,6 +21,11 @@ export async function proxy(req: NextRequest): Promise<NextResponse> {
   }
   const live = Boolean(data.userId) && !isIdleExpired(data, now);
   const isApi = pathname.startsWith('/api/');
+  // Next's router answers a bare text 500 for a path that is not valid percent-encoded UTF-8
+  // (it fails decoding the [id] before any handler runs): API callers get the usual JSON 400.
+  if (isApi && !decodes(pathname)) {
+    return NextResponse.json({ error: { code: 'bad_request', message: 'The address is not valid (bad percent-encoding)' } }, { status: 400 });
+  }
 
   if (!live && !isApi && !PUBLIC_PAGES.includes(pathname)) {
     const target = new URL('/sign-in', req.url);
@@ -40,6 +45,15 @@ export async function proxy(req: NextRequest): Promise<NextResponse> {
     res.cookies.set(SESSION_COOKIE, fresh, { ...options.cookieOptions, maxAge: (options.ttl ?? 0) - 60 });
   }
   return res;
+}
+
+function decodes(pathname: string): boolean {
+  try {
+    decodeURIComponent(pathname);
+    return true;
+  } catch {
+    return false;
+  }
 }
 
 // A fresh nonce per page: Next puts it on its own scripts, and nothing else may run.

@@ -1,5 +1,5 @@
 import 'server-only';
-import { UniqueConstraintError, OptimisticLockError, ConnectionError, ValidationError, ForeignKeyConstraintError } from 'sequelize';
+import { UniqueConstraintError, OptimisticLockError, ConnectionError, DatabaseError, ValidationError, ForeignKeyConstraintError } from 'sequelize';
 import { ZodError } from 'zod';
 import { AppError } from '../errors';
 import { log } from '../log';
@@ -20,6 +20,12 @@ export function toAppError(err: unknown): AppError {
   }
   if (err instanceof OptimisticLockError) return new AppError('stale_version', 'Someone else changed this record; reload and try again');
   if (err instanceof ForeignKeyConstraintError) return new AppError('conflict', 'A related record is missing or still in use');
+  // A number beyond its DECIMAL or INT column (ER_WARN_DATA_OUT_OF_RANGE), given or derived from what was
+  // given (grams from kilograms, a piece weight from a sample): the request cannot be stored, and the
+  // service's transaction rolls back, so it is the caller's 400 rather than our 500.
+  if (err instanceof DatabaseError && (err.original as { errno?: number }).errno === 1264) {
+    return new AppError('validation_failed', 'A number is too large to store', { fields: { _: 'a number is out of the range that can be stored' } });
+  }
   if (err instanceof ValidationError) {
     const fields = Object.fromEntries(err.errors.map((e) => [e.path ?? 'value', e.message]));
     return new AppError('validation_failed', 'Some fields need attention', { fields });

@@ -28,6 +28,15 @@ describe('parts and samples', () => {
     expect((await agent.get('/api/v1/parts?pageSize=0')).status).toBe(400);
   });
 
+  it('answers an id that is not valid percent-encoding with a JSON 400, not a bare 500 (found by fuzzing)', async () => {
+    const { agent } = await signedIn('clerk');
+    for (const id of ['%ZZ', '%ED%A0%80']) {
+      const res = await agent.patch(`/api/v1/parts/${id}`).send({ description: 'x', version: 0 });
+      expect(res.status).toBe(400);
+      expect(res.body.error.code).toBe('bad_request');
+    }
+  });
+
   it('updates with the loaded version and answers a stale one with 409', async () => {
     const { agent } = await signedIn('clerk');
     const part = await createPart();

@@ -56,4 +56,18 @@ describe('scales and containers', () => {
     const bad = await agent.post('/api/v1/containers').send({ name: 'x', kind: 'crate', tare: -1 });
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(['kind', 'tare']);
   });
+
+  // Found by fuzzing: both answered 500. 10^6 kg passes the schema but is 10^9 g, beyond DECIMAL(14,6).
+  it('refuses a tare too large to store, in grams or on the way there, and keeps the container as it was', async () => {
+    const { agent } = await signedIn('clerk');
+    const { container } = (await agent.post('/api/v1/containers').send({ name: unique('Tote'), kind: 'tote', tare: 120 })).body;
+    const overColumn = await agent.patch(`/api/v1/containers/${container.id}`).send({ tare: 1_000_000, unit: 'kg', version: container.version });
+    expect(overColumn.status).toBe(400);
+    expect(overColumn.body.error.fields).toEqual({ _: 'a number is out of the range that can be stored' });
+    const infinite = await agent.patch(`/api/v1/containers/${container.id}`).send({ tare: Number.MAX_VALUE, unit: 'kg', version: container.version });
+    expect(infinite.status).toBe(400);
+    expect(infinite.body.error.fields.tare).toMatch(/implausibly large/);
+    const again = await agent.patch(`/api/v1/containers/${container.id}`).send({ tare: 121, version: container.version });
+    expect(again.body.container).toMatchObject({ tare: 121, version: container.version + 1 });
+  });
 });
