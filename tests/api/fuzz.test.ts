@@ -7,11 +7,10 @@
 // also swept through column-breaking values before the random requests.
 // Replay a failure with the seed fast-check prints: TF_FUZZ_SEED=<seed> (and TF_FUZZ_RUNS for more runs).
 import { randomUUID } from 'node:crypto';
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import path from 'node:path';
 import fc from 'fast-check';
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { apiRouteFiles } from '../helpers/route-files';
 import { ROLE_PERMISSIONS, ROLES, type Permission, type Role } from '../../lib/roles';
 import { BOM_CSV_COLUMNS } from '../../server/schemas/kits';
 import { PART_CSV_COLUMNS } from '../../server/schemas/parts';
@@ -38,18 +37,7 @@ interface Handler {
   uploadField?: string; // multipart handlers: the form field they read
 }
 
-function routeFiles(dir: string): string[] {
-  return readdirSync(dir).flatMap((name) => {
-    const full = path.join(dir, name);
-    if (statSync(full).isDirectory()) return routeFiles(full);
-    return name === 'route.ts' ? [full] : [];
-  });
-}
-
-const appDir = path.resolve(__dirname, '../../app');
-const HANDLERS: Handler[] = routeFiles(path.join(appDir, 'api')).flatMap((file) => {
-  const route = '/' + path.relative(appDir, path.dirname(file)).split(path.sep).filter((s) => !s.startsWith('(')).join('/');
-  const source = readFileSync(file, 'utf8');
+const HANDLERS: Handler[] = apiRouteFiles().flatMap(({ route, source }) => {
   const exports = [...source.matchAll(/export const (GET|POST|PATCH|PUT|DELETE)\b/g)];
   return exports.map((m, i) => {
     const method = m[1] as Method;

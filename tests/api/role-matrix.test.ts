@@ -1,6 +1,5 @@
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { apiRouteFiles } from '../helpers/route-files';
 import { ROLES, type Role } from '../../lib/roles';
 import { anonymous, signedIn, type Agent } from '../helpers/http';
 
@@ -100,18 +99,8 @@ const MATRIX: Entry[] = [
   { method: 'PUT', route: '/api/v1/test-weights/[id]/certificate', allowed: quality, path: '/api/v1/test-weights/999999/certificate' },
 ];
 
-function routeFiles(dir: string): string[] {
-  return readdirSync(dir).flatMap((name) => {
-    const full = path.join(dir, name);
-    if (statSync(full).isDirectory()) return routeFiles(full);
-    return name === 'route.ts' ? [full] : [];
-  });
-}
-
-const appDir = path.resolve(__dirname, '../../app');
-const declared = routeFiles(path.join(appDir, 'api')).flatMap((file) => {
-  const route = '/' + path.relative(appDir, path.dirname(file)).split(path.sep).filter((s) => !s.startsWith('(')).join('/');
-  const methods = [...readFileSync(file, 'utf8').matchAll(/export const (GET|POST|PATCH|PUT|DELETE)\b/g)].map((m) => m[1]);
+const declared = apiRouteFiles().flatMap(({ route, source }) => {
+  const methods = [...source.matchAll(/export const (GET|POST|PATCH|PUT|DELETE)\b/g)].map((m) => m[1]);
   return methods.map((method) => `${method} ${route}`);
 });
 
