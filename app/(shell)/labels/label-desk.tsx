@@ -1,7 +1,7 @@
 'use client';
 
 import type { ColDef } from 'ag-grid-community';
-import { useEffect, useMemo, useState } from 'react';
+import { useMemo, useState } from 'react';
 import type { PrintJobDto } from '@/server/schemas/labels';
 import { apiFetch } from '../../_components/api-client';
 import { DataGrid, fitHeight } from '../../_components/data-grid';
@@ -38,10 +38,9 @@ export function LabelDesk({ bins, parts, orders, stocks, jobs }: Props) {
   const [message, setMessage] = useState<{ tone: 'ok' | 'fault'; text: string } | null>(null);
   const [batch, setBatch] = useState<string | null>(null);
 
+  // Kit labels offer only the wide stocks; a narrow choice made for bins falls back to the first wide one.
   const usable = stocks.filter((s) => template !== 'kit' || s.kit);
-  useEffect(() => {
-    if (!usable.some((s) => s.id === stock)) setStock(usable[0].id);
-  }, [usable, stock]);
+  const chosenStock = usable.some((s) => s.id === stock) ? stock : usable[0].id;
 
   const grid = useMemo(() => {
     if (template === 'bin') {
@@ -68,15 +67,14 @@ export function LabelDesk({ bins, parts, orders, stocks, jobs }: Props) {
     return <DataGrid<OrderRow> key="kit" label="Build orders to label" rows={orders} columns={columns} rowId={(r) => String(r.id)} quickFilter={find} height={fitHeight(orders.length, 420)} onSelection={(rows) => setChosen(rows.map((r) => r.id))} />;
   }, [template, bins, parts, orders, find]);
 
-  const request = () => ({ template, stock, ids: chosen, ...(printer.trim() ? { printer: printer.trim() } : {}) });
+  const labels = { template, stock: chosenStock, ids: chosen };
   const what = `${chosen.length} ${template} label${chosen.length === 1 ? '' : 's'}`;
 
   async function downloadPdf() {
     setBusy('pdf');
     setMessage(null);
-    const { printer: _unused, ...body } = request();
     try {
-      const res = await fetch('/api/v1/labels', { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body), credentials: 'same-origin' });
+      const res = await fetch('/api/v1/labels', { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(labels), credentials: 'same-origin' });
       if (!res.ok) {
         const err = (await res.json().catch(() => null)) as { error?: { message?: string; fields?: Record<string, string> } } | null;
         setMessage({ tone: 'fault', text: [err?.error?.message ?? `The server answered ${res.status}`, ...Object.values(err?.error?.fields ?? {})].join(': ') });
@@ -99,7 +97,7 @@ export function LabelDesk({ bins, parts, orders, stocks, jobs }: Props) {
   async function sendToPrinter() {
     setBusy('print');
     setMessage(null);
-    const res = await apiFetch<{ batchId: string; jobs: PrintJobDto[] }>('/api/v1/print-jobs', { method: 'POST', body: request() });
+    const res = await apiFetch<{ batchId: string; jobs: PrintJobDto[] }>('/api/v1/print-jobs', { method: 'POST', body: { ...labels, ...(printer.trim() ? { printer: printer.trim() } : {}) } });
     setBusy(null);
     if (!res.ok) {
       setMessage({ tone: 'fault', text: [res.message, ...Object.values(res.fields)].join(': ') });
@@ -143,7 +141,7 @@ export function LabelDesk({ bins, parts, orders, stocks, jobs }: Props) {
         <div className="flex flex-wrap items-end gap-4">
           <div>
             <label htmlFor="label-stock" className="field-label">Label stock</label>
-            <select id="label-stock" className="field" value={stock} onChange={(e) => setStock(e.target.value)}>
+            <select id="label-stock" className="field" value={chosenStock} onChange={(e) => setStock(e.target.value)}>
               {usable.map((s) => (
                 <option key={s.id} value={s.id}>{s.name}</option>
               ))}
