@@ -1,11 +1,12 @@
 import 'server-only';
+import { driverCause } from './db-error-cause';
 
 const DEADLOCK = 1213;
 const LOCK_WAIT_TIMEOUT = 1205;
 
 function isRetryable(err: unknown): boolean {
-  const parent = (err as { parent?: { errno?: number } })?.parent ?? (err as { original?: { errno?: number } })?.original;
-  return parent?.errno === DEADLOCK || parent?.errno === LOCK_WAIT_TIMEOUT;
+  const errno = driverCause(err)?.errno;
+  return errno === DEADLOCK || errno === LOCK_WAIT_TIMEOUT;
 }
 
 // InnoDB may pick a transaction as a deadlock victim and roll it back whole; running it again is

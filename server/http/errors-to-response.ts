@@ -1,6 +1,7 @@
 import 'server-only';
 import { UniqueConstraintError, OptimisticLockError, ConnectionError, DatabaseError, ValidationError, ForeignKeyConstraintError } from 'sequelize';
 import { ZodError } from 'zod';
+import { driverCause } from '../db-error-cause';
 import { AppError } from '../errors';
 import { log } from '../log';
 import { zodFields } from './zod-fields';
@@ -23,7 +24,7 @@ export function toAppError(err: unknown): AppError {
   // A number beyond its DECIMAL or INT column (ER_WARN_DATA_OUT_OF_RANGE), given or derived from what was
   // given (grams from kilograms, a piece weight from a sample): the request cannot be stored, and the
   // service's transaction rolls back, so it is the caller's 400 rather than our 500.
-  if (err instanceof DatabaseError && (err.original as { errno?: number }).errno === 1264) {
+  if (err instanceof DatabaseError && driverCause(err)?.errno === 1264) {
     return new AppError('validation_failed', 'A number is too large to store', { fields: { _: 'a number is out of the range that can be stored' } });
   }
   if (err instanceof ValidationError) {
@@ -44,10 +45,8 @@ export function toAppError(err: unknown): AppError {
 // A connection that dies mid-query reaches us as a query error whose driver cause is marked fatal
 // (SQLSTATE class 08, "connection exception"); the transaction on it was rolled back by the server.
 function lostConnection(err: unknown): boolean {
-  const cause = (err as { parent?: unknown; original?: unknown } | null)?.parent ?? (err as { original?: unknown } | null)?.original ?? err;
-  if (typeof cause !== 'object' || cause === null) return false;
-  const { fatal, sqlState } = cause as { fatal?: unknown; sqlState?: unknown };
-  return fatal === true || (typeof sqlState === 'string' && sqlState.startsWith('08'));
+  const cause = driverCause(err);
+  return cause?.fatal === true || (typeof cause?.sqlState === 'string' && cause.sqlState.startsWith('08'));
 }
 
 export function errorResponse(err: unknown, requestId?: string | null): Response {
