@@ -61,6 +61,11 @@ function parseWith(schema: z.ZodType | undefined, value: unknown, message: strin
 async function readJson(req: NextRequest): Promise<unknown> {
   const text = await req.text();
   if (!text.trim()) return {};
+  // A body under another type is refused rather than guessed at: it is not what our clients send,
+  // and a form or text/plain post is what a cross-site page can send without a preflight.
+  if (!isJsonMediaType(req.headers.get('content-type'))) {
+    throw new AppError('unsupported_media_type', 'Send the body as JSON, with Content-Type: application/json');
+  }
   try {
     return JSON.parse(text);
   } catch {
@@ -70,4 +75,13 @@ async function readJson(req: NextRequest): Promise<unknown> {
 
 export function created(data: unknown): Response {
   return Response.json(data, { status: 201 });
+}
+
+// application/json or a +json type (RFC 6839), in UTF-8: the only charset JSON text may use on the wire (RFC 8259 §8.1).
+function isJsonMediaType(header: string | null): boolean {
+  if (!header) return false;
+  const [type, ...params] = header.split(';').map((p) => p.trim().toLowerCase());
+  if (type !== 'application/json' && !/^application\/[a-z0-9.!#$&^_-]+\+json$/.test(type)) return false;
+  const charset = params.find((p) => p.startsWith('charset='))?.slice('charset='.length).replace(/"/g, '');
+  return charset === undefined || charset === 'utf-8';
 }

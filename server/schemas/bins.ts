@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { BIN_CODE_HINT, formatBinCode, parseBinCode } from '@/lib/bin-code';
 import { ABC_CLASSES, type AbcClass } from '@/models/columns';
-import { requiredText } from './common';
+import { recordIdSchema, requiredText } from './common';
 import { wholeCount } from './weights';
 
 export const binCodeSchema = requiredText('Bin code').transform((text, ctx) => {
@@ -22,7 +22,7 @@ export const createBinSchema = z.object({
 });
 export type CreateBinInput = z.infer<typeof createBinSchema>;
 
-export const listBinsSchema = z.object({ code: z.string().trim().max(20).optional(), partId: z.coerce.number().int().positive().optional() });
+export const listBinsSchema = z.object({ code: z.string().trim().max(20).optional(), partId: recordIdSchema.optional() });
 
 export interface BinDto {
   id: number;

@@ -10,9 +10,15 @@ export const emailSchema = requiredText('E-mail')
   .toLowerCase()
   .pipe(z.email({ error: 'Enter a valid e-mail address' }).max(254, { error: 'At most 254 characters' }));
 
-export const idParamSchema = z.object({
-  id: z.coerce.number({ error: 'Not a record id' }).int({ error: 'Not a record id' }).positive({ error: 'Not a record id' }),
-});
+// A record id as it arrives in a path or query: plain decimal digits only. Number() alone would also
+// take "0x1F", "1e3" or " 7 ", so two spellings could name one record; ids are INT columns.
+export const recordIdSchema = z
+  .string({ error: 'Not a record id' })
+  .regex(/^[1-9][0-9]{0,9}$/, { error: 'Not a record id' })
+  .transform(Number)
+  .pipe(z.number().max(2_147_483_647, { error: 'Not a record id' }));
+
+export const idParamSchema = z.object({ id: recordIdSchema });
 
 export const versionSchema = z.number({ error: 'version is required (the one you loaded)' }).int().min(0);
 

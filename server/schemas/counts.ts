@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { COUNT_PURPOSES, type CountPurpose } from '@/models/columns';
 import type { CountingWarning } from '@/lib/weighing';
-import { pagingSchema } from './common';
+import { pagingSchema, recordIdSchema } from './common';
 import { nonNegativeNumber, positiveNumber, unitSchema, wholeCount } from './weights';
 
 // Chosen by the client once per capture and reused on every retry of it.
@@ -33,9 +33,9 @@ export const recordCountSchema = z.object({
 export type RecordCountInput = z.infer<typeof recordCountSchema>;
 
 export const listCountsSchema = pagingSchema.extend({
-  partId: z.coerce.number().int().positive().optional(),
-  scaleId: z.coerce.number().int().positive().optional(),
-  operatorId: z.coerce.number().int().positive().optional(),
+  partId: recordIdSchema.optional(),
+  scaleId: recordIdSchema.optional(),
+  operatorId: recordIdSchema.optional(),
   purpose: purposeSchema.optional(),
   from: z.iso.datetime({ offset: true, error: 'from must be an ISO date-time' }).or(z.iso.date()).optional(),
   to: z.iso.datetime({ offset: true, error: 'to must be an ISO date-time' }).or(z.iso.date()).optional(),

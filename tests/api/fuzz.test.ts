@@ -135,6 +135,11 @@ const PDF = Buffer.from('%PDF-1.4\n%fuzz certificate\n');
 const SAMPLES: Record<string, (w: World) => Sample> = {
   'POST /api/v1/session': (w) => ({ bodies: [{ email: fresh('e-mail', (n) => `fuzz-${RUN}-${n}@example.test`), password: 'not the password' }, { email: w.user.email, password: TEST_PASSWORD }] }),
   'DELETE /api/v1/session': () => ({}),
+  // The catch-all for addresses no route serves reads nothing; whatever comes, it answers 404.
+  'POST /api/[...path]': () => ({}),
+  'PUT /api/[...path]': () => ({}),
+  'PATCH /api/[...path]': () => ({}),
+  'DELETE /api/[...path]': () => ({}),
   'POST /api/v1/invitations/accept': () => ({ bodies: [{ token: 'a'.repeat(40), password: 'a long new password' }] }),
   'POST /api/v1/users': () => ({ bodies: [{ name: 'Fuzz Invitee', email: fresh('e-mail', (n) => `fuzz-${RUN}-${n}@example.test`), role: 'operator' }] }),
   'PATCH /api/v1/users/[id]': (w) => ({ bodies: [{ role: 'clerk', active: true, version: new Live('users', w.user.id) }] }),

@@ -97,6 +97,8 @@ const MATRIX: Entry[] = [
   { method: 'PUT', route: '/api/v1/parts/[id]/photo', allowed: partEditors, path: '/api/v1/parts/999999/photo' },
   { method: 'GET', route: '/api/v1/test-weights/[id]/certificate', allowed: everyone, path: '/api/v1/test-weights/999999/certificate' },
   { method: 'PUT', route: '/api/v1/test-weights/[id]/certificate', allowed: quality, path: '/api/v1/test-weights/999999/certificate' },
+  // Addresses no route serves answer 404 to anyone, signed in or not.
+  ...(['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const).map((method): Entry => ({ method, route: '/api/[...path]', allowed: 'public', path: '/api/v1/no-such-route' })),
 ];
 
 const declared = apiRouteFiles().flatMap(({ route, source }) => {

@@ -2,8 +2,8 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { can } from '@/lib/roles';
 import { requirePageUser } from '@/server/auth/authorize';
-import { AppError } from '@/server/errors';
-import type { KitDto } from '@/server/schemas/kits';
+import { orNotFound } from '@/server/http/or-not-found';
+import { idParamSchema } from '@/server/schemas/common';
 import { getKit, listKits } from '@/server/services/kits/list-kits';
 import { KitEditor } from './kit-editor';
 
@@ -12,15 +12,9 @@ export const metadata = { title: 'Kit' };
 export default async function KitPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const user = await requirePageUser('catalog.read', `/kits/${id}`);
-  const kitId = Number(id);
-  if (!Number.isInteger(kitId) || kitId <= 0) notFound();
-  let kit: KitDto;
-  try {
-    kit = await getKit({ kitId });
-  } catch (err) {
-    if (err instanceof AppError && err.code === 'not_found') notFound();
-    throw err;
-  }
+  const parsed = idParamSchema.safeParse({ id });
+  if (!parsed.success) notFound();
+  const kit = await orNotFound(getKit({ kitId: parsed.data.id }));
   const revisions = (await listKits()).filter((k) => k.code === kit.code);
   return (
     <div className="space-y-6">

@@ -1,9 +1,10 @@
 import { z } from 'zod';
 import { route } from '@/server/http/route';
 import { recordHandCountSchema } from '@/server/schemas/audits';
+import { recordIdSchema } from '@/server/schemas/common';
 import { recordHandCount } from '@/server/services/audits/record-hand-count';
 
-const params = z.object({ id: z.coerce.number().int().positive(), itemId: z.coerce.number().int().positive() });
+const params = z.object({ id: recordIdSchema, itemId: recordIdSchema });
 
 // PUT: keying the same hand count twice leaves the same state.
 export const PUT = route({ access: 'audits.run', params, body: recordHandCountSchema }, async ({ params: p, body, user }) => ({
