@@ -1,6 +1,6 @@
 import 'server-only';
 import { randomUUID } from 'node:crypto';
-import { mkdir, readFile, rename, writeFile } from 'node:fs/promises';
+import { mkdir, readFile, rename, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { detectFileKind, MAX_UPLOAD_BYTES, type FileKind } from '@/lib/file-kind';
 import { getEnv } from '../env';
@@ -27,8 +27,28 @@ export async function storeUpload(file: unknown, allowed: readonly FileKind[], f
   return { name, kind };
 }
 
-export async function readUpload(name: string): Promise<Buffer> {
-  // Stored names are ours (uuid.ext); anything else never reaches the file system.
+// Stores the file, then runs `attach` to point a record at it. If attaching fails (record gone, database
+// away) the stored file is removed again, so no file is left that nothing refers to.
+export async function storeAttachedUpload<T>(file: unknown, allowed: readonly FileKind[], field: string, attach: (name: string) => Promise<T>): Promise<T> {
+  const { name } = await storeUpload(file, allowed, field);
+  try {
+    return await attach(name);
+  } catch (err) {
+    await removeUpload(name);
+    throw err;
+  }
+}
+
+// Stored names are ours (uuid.ext); anything else never reaches the file system.
+function storedPath(name: string): string {
   if (!/^[0-9a-f-]{36}\.(jpg|png|webp|pdf)$/.test(name)) throw new AppError('not_found', 'File was not found');
-  return readFile(path.join(uploadDir(), name));
+  return path.join(uploadDir(), name);
+}
+
+export async function readUpload(name: string): Promise<Buffer> {
+  return readFile(storedPath(name));
+}
+
+export async function removeUpload(name: string): Promise<void> {
+  await rm(storedPath(name), { force: true });
 }

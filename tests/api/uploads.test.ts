@@ -1,8 +1,11 @@
+import { readdirSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { createPart, createTestWeight } from '../helpers/db';
+import { Part } from '../../models';
+import { createPart, createTestWeight, testDb } from '../helpers/db';
 import { anonymous, signedIn } from '../helpers/http';
 
 const PNG = Buffer.from('89504e470d0a1a0a0000000d4948445200000001000000010806000000', 'hex');
+const storedFiles = () => new Set(readdirSync(process.env.UPLOAD_DIR!).filter((f) => !f.startsWith('.')));
 
 describe('uploads', () => {
   it('stores a part photo checked by its content and serves it to signed-in users only', async () => {
@@ -27,6 +30,25 @@ describe('uploads', () => {
     expect(big.status).toBe(400);
     expect(big.body.error.fields.photo).toMatch(/at most 5 MB/);
     expect((await agent.get(`/api/v1/parts/${part.id}/photo`)).status).toBe(404);
+  });
+
+  it('removes the photo a new one replaces, and leaves no file behind when the part is not there', async () => {
+    const { agent } = await signedIn('planner');
+    const part = await createPart();
+    expect((await agent.put(`/api/v1/parts/${part.id}/photo`).attach('photo', PNG, { filename: 'first.png' })).status).toBe(200);
+    testDb();
+    const first = (await Part.findByPk(part.id))!.photoFile!;
+    expect(storedFiles().has(first)).toBe(true);
+    expect((await agent.put(`/api/v1/parts/${part.id}/photo`).attach('photo', PNG, { filename: 'second.png' })).status).toBe(200);
+    const second = (await Part.findByPk(part.id))!.photoFile!;
+    expect(second).not.toBe(first);
+    expect(storedFiles().has(second)).toBe(true);
+    expect(storedFiles().has(first)).toBe(false);
+
+    const before = storedFiles();
+    const missing = await agent.put('/api/v1/parts/2147483647/photo').attach('photo', PNG, { filename: 'nobody.png' });
+    expect(missing.status).toBe(404);
+    expect(storedFiles()).toEqual(before);
   });
 
   it('keeps a test weight certificate as a PDF', async () => {

@@ -3,16 +3,18 @@ import { TestWeight } from '@/models';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
 import type { TestWeightDto } from '../../schemas/calibration';
-import { readUpload, storeUpload } from '../../uploads/store-upload';
+import { readUpload, storeAttachedUpload } from '../../uploads/store-upload';
 import { toTestWeightDto } from './test-weights';
 
+// A superseded certificate's file is kept: it backs the calibrations recorded while it was current.
 export async function saveCertificate({ testWeightId, file }: { testWeightId: number; file: unknown }): Promise<TestWeightDto> {
   getDb();
-  const weight = await TestWeight.findByPk(testWeightId);
-  if (!weight) throw notFound('Test weight');
-  const { name } = await storeUpload(file, ['pdf'], 'certificate');
-  weight.certificateFile = name;
-  await weight.save();
+  const weight = await storeAttachedUpload(file, ['pdf'], 'certificate', async (name) => {
+    const found = await TestWeight.findByPk(testWeightId);
+    if (!found) throw notFound('Test weight');
+    found.certificateFile = name;
+    return found.save();
+  });
   return toTestWeightDto(weight);
 }
 
