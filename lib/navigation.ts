@@ -13,6 +13,7 @@ export interface NavItem {
 export const NAV_ITEMS: readonly NavItem[] = [
   { href: '/', label: 'Today', group: 'work' },
   { href: '/bench', label: 'Bench', permission: 'counts.capture', group: 'work' },
+  { href: '/counts', label: 'Count log', permission: 'catalog.read', group: 'work' },
   { href: '/orders', label: 'Build orders', permission: 'catalog.read', group: 'work' },
   { href: '/kits', label: 'Kits', permission: 'catalog.read', group: 'work' },
   { href: '/parts', label: 'Parts', permission: 'catalog.read', group: 'work' },

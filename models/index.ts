@@ -72,6 +72,9 @@ export function initModels(sequelize: Sequelize): void {
   CountEvent.belongsTo(Part, { foreignKey: 'partId', as: 'part' });
   CountEvent.belongsTo(Scale, { foreignKey: 'scaleId', as: 'scale' });
   CountEvent.belongsTo(User, { foreignKey: 'operatorId', as: 'operator' });
+  // The migrations hold these foreign keys; the models only need them for reading, so sync adds none.
+  CountEvent.belongsTo(BuildOrderLine, { foreignKey: 'orderLineId', as: 'orderLine', constraints: false });
+  CountEvent.belongsTo(Bin, { foreignKey: 'binId', as: 'bin', constraints: false });
   Bin.belongsTo(Part, { foreignKey: 'partId', as: 'part' });
   BinCount.belongsTo(Bin, { foreignKey: 'binId', as: 'bin' });
   BinCount.belongsTo(CountEvent, { foreignKey: 'countEventId', as: 'event' });

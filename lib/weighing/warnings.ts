@@ -19,40 +19,49 @@ export interface CountingWarning {
 }
 
 export interface WarningText {
+  short: string; // a few words, for lists and logs
   message: string;
   remedy: string;
 }
 
 export const WARNING_TEXT: Readonly<Record<WarningCode, WarningText>> = {
   apw_below_resolution: {
+    short: 'piece below division',
     message: 'One piece weighs less than the smallest step this scale shows.',
     remedy: 'Use a scale with a finer division, or count these parts by hand.',
   },
   below_min_capacity: {
+    short: 'below Min',
     message: 'The load is lighter than the smallest load this scale is rated for, so its error may be large.',
     remedy: 'Put more pieces on the pan, or weigh on a smaller, finer scale.',
   },
   count_not_exact: {
+    short: 'not exact',
     message: 'The count could be off by one piece or more; it is shown with its ± range.',
     remedy: 'Grow the sample, count in smaller batches, or use a finer scale.',
   },
   sample_too_small: {
+    short: 'sample too small',
     message: 'With this sample the target quantity cannot be counted exactly.',
     remedy: 'Grow the sample in steps, use a finer scale, or count the rest by hand.',
   },
   over_capacity: {
+    short: 'over capacity',
     message: 'The load is above what this scale can weigh.',
     remedy: 'Take some pieces off and weigh them in batches, or use a larger scale.',
   },
   cv_assumed: {
+    short: 'spread assumed',
     message: 'How much single pieces vary is not yet known for this part, so a typical value was used.',
     remedy: 'Build a sample piece by piece a few times so the app learns this part.',
   },
   unstable: {
+    short: 'unstable',
     message: 'The reading is still moving, so it was not taken.',
     remedy: 'Wait until the pan is still, keep hands and air draughts off it, and try again.',
   },
   scale_locked: {
+    short: 'scale locked',
     message: 'This scale is out of calibration or locked, so its readings cannot be used.',
     remedy: 'Use another scale, or ask quality to calibrate and release this one.',
   },

@@ -42,6 +42,41 @@ export const listCountsSchema = pagingSchema.extend({
 });
 export type ListCountsQuery = z.infer<typeof listCountsSchema>;
 
+// A GET form sends every field, the unused ones empty: empty means "any".
+const optionalField = <S extends z.ZodType>(schema: S) => z.preprocess((v) => (v === '' ? undefined : v), schema.optional());
+
+// The count log's filters, as the page's form and the CSV download send them.
+export const countLogQuerySchema = z.object({
+  partNumber: optionalField(z.string().trim().toUpperCase().max(40, { error: 'A part number has at most 40 characters' })),
+  scaleId: optionalField(recordIdSchema),
+  purpose: optionalField(purposeSchema),
+  from: optionalField(z.iso.date({ error: 'from must be a date (YYYY-MM-DD)' })),
+  to: optionalField(z.iso.date({ error: 'to must be a date (YYYY-MM-DD)' })),
+  notExact: optionalField(z.enum(['1'], { error: 'notExact is 1 or left out' })),
+  page: optionalField(z.coerce.number({ error: 'page must be a whole number' }).int({ error: 'page must be a whole number' }).min(1).max(100_000)),
+});
+export type CountLogQuery = z.infer<typeof countLogQuerySchema>;
+
+export interface CountLogRow {
+  id: number;
+  at: string;
+  purpose: CountPurpose;
+  partNumber: string;
+  description: string;
+  scaleName: string;
+  operatorName: string;
+  orderNumber: string | null;
+  binCode: string | null;
+  net: number;
+  sampleQuantity: number;
+  averagePieceWeight: number;
+  count: number;
+  expandedUncertainty: number;
+  exact: boolean;
+  targetQuantity: number | null;
+  warnings: CountingWarning['code'][];
+}
+
 export interface CountEventDto {
   id: number;
   purpose: CountPurpose;

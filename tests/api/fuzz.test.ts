@@ -172,6 +172,7 @@ const SAMPLES: Record<string, (w: World) => Sample> = {
   'GET /api/v1/parts/[id]/photo': () => ({}),
   'PUT /api/v1/parts/[id]/photo': () => ({ file: { name: 'washer.png', type: 'image/png', bytes: PNG } }),
   'GET /api/v1/counts': (w) => ({ query: { partId: String(w.part.id), scaleId: String(w.scale.id), purpose: 'part', from: w.today, to: `${w.today}T23:59:59Z`, page: '1', pageSize: '20' } }),
+  'GET /api/v1/counts/export': (w) => ({ query: { partNumber: w.part.partNumber, scaleId: String(w.scale.id), purpose: 'part', from: w.today, to: w.today, notExact: '1', page: '1' } }),
   'POST /api/v1/counts': (w) => {
     const weighing = { partId: w.part.id, scaleId: w.scale.id, unit: 'g', gross: 25, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true };
     return {

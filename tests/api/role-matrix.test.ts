@@ -56,6 +56,7 @@ const MATRIX: Entry[] = [
   { method: 'POST', route: '/api/v1/parts/[id]/samples', allowed: capture, path: '/api/v1/parts/999999/samples', body: {} },
   { method: 'GET', route: '/api/v1/counts', allowed: everyone },
   { method: 'POST', route: '/api/v1/counts', allowed: capture, body: {} },
+  { method: 'GET', route: '/api/v1/counts/export', allowed: everyone },
   { method: 'GET', route: '/api/v1/kits', allowed: everyone },
   { method: 'POST', route: '/api/v1/kits', allowed: planners, body: {} },
   { method: 'POST', route: '/api/v1/kits/import', allowed: planners, body: {} },

@@ -1,11 +1,9 @@
+import { csvResponse } from '@/server/http/csv-response';
 import { route } from '@/server/http/route';
 import { exportPartsSchema } from '@/server/schemas/parts';
-import { exportPartsCsv } from '@/server/services/parts/export-parts-csv';
+import { exportPartsTable } from '@/server/services/parts/export-parts-table';
 
 export const GET = route({ access: 'catalog.read', query: exportPartsSchema }, async ({ query }) => {
-  const csv = await exportPartsCsv(query);
-  const day = new Date().toISOString().slice(0, 10);
-  return new Response(csv, {
-    headers: { 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="parts-${day}.csv"`, 'Cache-Control': 'no-store' },
-  });
+  const { header, rows } = await exportPartsTable(query);
+  return csvResponse(header, rows, `parts-${new Date().toISOString().slice(0, 10)}.csv`);
 });

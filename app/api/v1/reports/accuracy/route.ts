@@ -1,6 +1,5 @@
-import { stringify } from 'csv-stringify/sync';
 import { z } from 'zod';
-import { safeCell } from '@/lib/csv-safe';
+import { csvResponse } from '@/server/http/csv-response';
 import { route } from '@/server/http/route';
 import { accuracyReport } from '@/server/services/audits/accuracy-report';
 
@@ -15,8 +14,6 @@ export const GET = route({ access: 'audits.run', query }, async ({ query: q }) =
   const rows = await accuracyReport(q);
   if (q.format === 'json') return { rows };
   const header = ['group', 'recounts', 'nonconforming', 'error_rate', 'mean_abs_error_pcs', 'mean_abs_error_pct', 'exact_flagged', 'exact_right', 'exact_right_share'];
-  const body = rows.map((r) => [r.label, r.recounts, r.nonconforming, r.errorRate, r.meanAbsError, r.meanAbsErrorPct, r.exactFlagged, r.exactRight, r.exactRightShare ?? ''].map(safeCell));
-  return new Response(stringify([header, ...body]), {
-    headers: { 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="accuracy-by-${q.by}-${q.from}-to-${q.to}.csv"` },
-  });
+  const body = rows.map((r) => [r.label, r.recounts, r.nonconforming, r.errorRate, r.meanAbsError, r.meanAbsErrorPct, r.exactFlagged, r.exactRight, r.exactRightShare ?? '']);
+  return csvResponse(header, body, `accuracy-by-${q.by}-${q.from}-to-${q.to}.csv`);
 });

@@ -1,7 +1,5 @@
 import 'server-only';
-import { stringify } from 'csv-stringify/sync';
 import { Part } from '@/models';
-import { safeCell } from '@/lib/csv-safe';
 import { getDb } from '../../db';
 import type { ExportPartsQuery } from '../../schemas/parts';
 import { toPartDto } from './part-dto';
@@ -10,9 +8,9 @@ import { partSearch } from './part-search';
 const HEADER = ['part_number', 'description', 'counting_method', 'apw_g', 'apw_sample_size', 'piece_spread', 'spread_learned'];
 
 // The same columns the import reads come first, so an exported file can be edited and imported back.
-export async function exportPartsCsv(query: ExportPartsQuery): Promise<string> {
+export async function exportPartsTable(query: ExportPartsQuery): Promise<{ header: readonly string[]; rows: unknown[][] }> {
   getDb();
   const parts = await Part.findAll({ where: partSearch(query.q), order: [[query.sort, query.dir.toUpperCase()]], limit: 50_000 });
   const rows = parts.map(toPartDto).map((p) => [p.partNumber, p.description, p.countingMethod, p.averagePieceWeight, p.apwSampleSize, p.pieceSpread, p.spreadLearned ? 'yes' : 'no']);
-  return stringify([HEADER, ...rows.map((r) => r.map(safeCell))]);
+  return { header: HEADER, rows };
 }

@@ -1,0 +1,42 @@
+'use client';
+
+import type { ColDef, ICellRendererParams } from 'ag-grid-community';
+import { COUNT_PURPOSE_LABELS } from '@/lib/count-purposes';
+import { describeWarning } from '@/lib/weighing/warnings';
+import type { CountLogRow } from '@/server/schemas/counts';
+import { DataGrid, fitHeight } from '../../_components/data-grid';
+import { formatGrams, formatWhen } from '../../_components/format';
+
+const columns: ColDef<CountLogRow>[] = [
+  { field: 'at', headerName: 'When', minWidth: 200, valueFormatter: (p) => formatWhen(p.value) },
+  { field: 'partNumber', headerName: 'Part', minWidth: 170, cellClass: 'num', tooltipField: 'description' },
+  {
+    headerName: 'Count',
+    minWidth: 140,
+    valueGetter: (p) => p.data?.count,
+    cellRenderer: (p: ICellRendererParams<CountLogRow>) =>
+      p.data ? (
+        <span className="num">
+          {p.data.count} <span className="text-ink-faint">± {p.data.expandedUncertainty.toFixed(2)}</span>
+        </span>
+      ) : null,
+  },
+  {
+    field: 'exact',
+    headerName: 'Exact',
+    maxWidth: 110,
+    cellRenderer: (p: ICellRendererParams<CountLogRow>) => (p.data ? p.data.exact ? <span>yes</span> : <span className="font-medium text-caution">no</span> : null),
+  },
+  { headerName: 'Order / bin', minWidth: 140, cellClass: 'num', valueGetter: (p) => p.data?.orderNumber ?? p.data?.binCode ?? '—' },
+  { field: 'purpose', headerName: 'For', minWidth: 130, valueFormatter: (p) => COUNT_PURPOSE_LABELS[p.value as CountLogRow['purpose']] },
+  { field: 'targetQuantity', headerName: 'Target', maxWidth: 120, cellClass: 'num', valueFormatter: (p) => (p.value ?? '—') },
+  { field: 'net', headerName: 'Net', minWidth: 120, cellClass: 'num', valueFormatter: (p) => formatGrams(p.value) },
+  { field: 'sampleQuantity', headerName: 'Sample (pcs)', maxWidth: 140, cellClass: 'num' },
+  { field: 'scaleName', headerName: 'Scale', minWidth: 140 },
+  { field: 'operatorName', headerName: 'Counted by', minWidth: 150 },
+  { headerName: 'Warnings', minWidth: 200, flex: 2, valueGetter: (p) => (p.data?.warnings ?? []).map((w) => describeWarning(w).short).join(', ') || '—' },
+];
+
+export function CountLogGrid({ rows }: { rows: CountLogRow[] }) {
+  return <DataGrid label="Count log" rows={rows} columns={columns} rowId={(r) => String(r.id)} height={fitHeight(rows.length, 620)} />;
+}
