@@ -65,6 +65,7 @@ export interface CountLogRow {
   description: string;
   scaleName: string;
   operatorName: string;
+  orderId: number | null;
   orderNumber: string | null;
   binCode: string | null;
   net: number;

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { parse } from 'csv-parse/sync';
 import { describe, expect, it } from 'vitest';
-import { createPart, createScale, unique } from '../helpers/db';
+import { createPart, createScale, stockPart, unique } from '../helpers/db';
 import { signedIn, type Agent } from '../helpers/http';
 
 // A part count of `pieces` pieces at 0.5 g from a sample of 20 weighed apart.
@@ -39,6 +39,21 @@ describe('count log', () => {
     expect(notExact[0].exact).toBe('no');
     expect(notExact[0].warnings.split(' ')).toContain('count_not_exact');
     expect(rows[1].exact).toBe('yes');
+  });
+
+  it('names the bin a bin count was for', async () => {
+    const { agent } = await signedIn('clerk');
+    const part = await createPart({ pieceSpread: 0.002 });
+    const scale = await createScale({ divisionG: 0.01, eG: 0.1, repeatabilityG: 0.005 });
+    const bin = await stockPart(part.id, 30);
+    const res = await agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send({ purpose: 'bin', binId: bin.id, binVersion: bin.version, partId: part.id, scaleId: scale.id, gross: 15, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true });
+    expect(res.status).toBe(201);
+    const rows: Record<string, string>[] = parse((await agent.get('/api/v1/counts/export').query({ partNumber: part.partNumber, purpose: 'bin' })).text, { columns: true });
+    expect(rows).toHaveLength(1);
+    expect(rows[0]).toMatchObject({ purpose: 'bin', bin: bin.code, order: '', count: '30' });
   });
 
   it('refuses filters it cannot read with field messages', async () => {

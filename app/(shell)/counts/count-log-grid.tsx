@@ -1,6 +1,7 @@
 'use client';
 
 import type { ColDef, ICellRendererParams } from 'ag-grid-community';
+import Link from 'next/link';
 import { COUNT_PURPOSE_LABELS } from '@/lib/count-purposes';
 import { describeWarning } from '@/lib/weighing/warnings';
 import type { CountLogRow } from '@/server/schemas/counts';
@@ -27,7 +28,14 @@ const columns: ColDef<CountLogRow>[] = [
     maxWidth: 110,
     cellRenderer: (p: ICellRendererParams<CountLogRow>) => (p.data ? p.data.exact ? <span>yes</span> : <span className="font-medium text-caution">no</span> : null),
   },
-  { headerName: 'Order / bin', minWidth: 140, cellClass: 'num', valueGetter: (p) => p.data?.orderNumber ?? p.data?.binCode ?? '—' },
+  {
+    headerName: 'Order / bin',
+    minWidth: 140,
+    cellClass: 'num',
+    valueGetter: (p) => p.data?.orderNumber ?? p.data?.binCode ?? '—',
+    cellRenderer: (p: ICellRendererParams<CountLogRow>) =>
+      p.data?.orderId ? <Link href={`/orders/${p.data.orderId}`} className="text-forge hover:underline">{p.data.orderNumber}</Link> : p.value,
+  },
   { field: 'purpose', headerName: 'For', minWidth: 130, valueFormatter: (p) => COUNT_PURPOSE_LABELS[p.value as CountLogRow['purpose']] },
   { field: 'targetQuantity', headerName: 'Target', maxWidth: 120, cellClass: 'num', valueFormatter: (p) => (p.value ?? '—') },
   { field: 'net', headerName: 'Net', minWidth: 120, cellClass: 'num', valueFormatter: (p) => formatGrams(p.value) },
