@@ -23,6 +23,8 @@ type People = Record<'admin' | 'planner' | 'operator' | 'clerk' | 'quality', Ses
 
 const random = createRandom(20261202);
 const roundTo = (x: number, step: number) => Math.round(x / step) * step;
+// Dates are set from the day the demo is loaded, so it tells the same story whenever it is started.
+const daysFromToday = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
 
 export async function loadDemo(people: People): Promise<void> {
   const scales = new Map<string, Scale>();
@@ -34,7 +36,7 @@ export async function loadDemo(people: People): Promise<void> {
     scales.set(s.name, (await Scale.findByPk(dto.id))!);
   }
   for (const c of DEMO_CONTAINERS) await createContainer({ input: { ...c, unit: 'g' } });
-  for (const w of DEMO_TEST_WEIGHTS) await createTestWeight({ input: { ...w, unit: 'g', certificateNumber: `CMW-CAL-${w.identifier.slice(7)}`, dueAt: '2027-09-30' } });
+  for (const w of DEMO_TEST_WEIGHTS) await createTestWeight({ input: { ...w, unit: 'g', certificateNumber: `CMW-CAL-${w.identifier.slice(7)}`, dueAt: daysFromToday(300) } });
   await calibrateAll(scales, people.quality);
 
   const parts = new Map<string, Part>();
@@ -51,11 +53,11 @@ export async function loadDemo(people: People): Promise<void> {
     const components = k.lines.map(([pn, quantity, toleranceBelow, toleranceAbove]) => ({ partId: parts.get(pn)!.id, quantity, toleranceBelow, toleranceAbove }));
     kits.push(await createKit({ input: { code: k.code, revision: k.revision, description: k.description, components } }));
   }
-  const endcaps = await createOrder({ input: { kitId: kits[0].id, quantity: 40, dueDate: '2026-12-09' }, by: people.planner });
+  const endcaps = await createOrder({ input: { kitId: kits[0].id, quantity: 40, dueDate: daysFromToday(7) }, by: people.planner });
   const released = await releaseOrder({ orderId: endcaps.id, version: endcaps.version, by: people.planner });
-  await createOrder({ input: { kitId: kits[1].id, quantity: 25, dueDate: '2026-12-16' }, by: people.planner });
+  await createOrder({ input: { kitId: kits[1].id, quantity: 25, dueDate: daysFromToday(14) }, by: people.planner });
   // 100 drive kits need 200 bearings against 120 in stock: left in draft to show the shortage.
-  await createOrder({ input: { kitId: kits[1].id, quantity: 100, dueDate: '2027-01-12' }, by: people.planner });
+  await createOrder({ input: { kitId: kits[1].id, quantity: 100, dueDate: daysFromToday(41) }, by: people.planner });
   await demoCaptures(released.lines, parts, scales.get('Bench 2 · kitting')!, people.operator);
   await demoAudit(parts, scales.get('Bench 2 · kitting')!, people);
   await demoVarianceWaiting(parts, scales.get('Bench 2 · kitting')!, people.clerk);
@@ -87,7 +89,7 @@ async function calibrateAll(scales: Map<string, Scale>, quality: SessionUser): P
       scaleId: scale.id,
       input: {
         stage: 'in_service',
-        performedAt: '2026-11-27',
+        performedAt: daysFromToday(-5),
         unit: 'g',
         points,
         // Ten weighings, one a division high: s_r ≈ 0.3 d, a steady scale whose readings settle.
@@ -144,6 +146,8 @@ async function demoCaptures(lines: Array<{ id: number; partId: number; required:
 // each recount is the true number of pieces the simulated bag held, so the accuracy report shows
 // how the bench really did, near-misses included.
 async function demoAudit(parts: Map<string, Part>, bench: Scale, people: People): Promise<void> {
+  // The audit samples the counts made from here on, even if loading runs past midnight UTC.
+  const startedOn = daysFromToday(0);
   const d = Number(bench.divisionG);
   const bagTare = DEMO_CONTAINERS[0].tare;
   const truth = new Map<number, number>();
@@ -164,8 +168,7 @@ async function demoAudit(parts: Map<string, Part>, bench: Scale, people: People)
     });
     truth.set(answer.count.id, pieces);
   }
-  const today = new Date().toISOString().slice(0, 10);
-  const audit = await createAudit({ input: { population: { from: today, to: today, purpose: 'part' }, level: 'II', aql: 2.5, seed: 20261202 }, by: people.quality });
+  const audit = await createAudit({ input: { population: { from: startedOn, to: daysFromToday(0), purpose: 'part' }, level: 'II', aql: 2.5, seed: 20261202 }, by: people.quality });
   for (const item of audit.items) await recordHandCount({ auditId: audit.id, itemId: item.id, handCount: truth.get(item.countEventId)!, by: people.quality });
 }
 

@@ -5,11 +5,17 @@ import { createPart, createScale, testDb } from '../helpers/db';
 import { signedIn, type Agent } from '../helpers/http';
 import { mailTo, waitForMail } from '../helpers/mail';
 
+// A random free code in zone BZ; a code another test already took (409) is drawn again.
 async function newBin(agent: Agent, partId: number, bookQuantity: number, abcClass = 'A') {
-  const code = `BZ-${String(1 + Math.floor(Math.random() * 99)).padStart(2, '0')}-${1 + Math.floor(Math.random() * 9)}-${String(1 + Math.floor(Math.random() * 99)).padStart(2, '0')}`;
-  const res = await agent.post('/api/v1/bins').send({ code: code.toLowerCase(), partId, bookQuantity, abcClass });
-  expect(res.status).toBe(201);
-  return res.body.bin;
+  const two = () => String(1 + Math.floor(Math.random() * 99)).padStart(2, '0');
+  let res;
+  for (let attempt = 0; attempt < 5; attempt += 1) {
+    const code = `bz-${two()}-${1 + Math.floor(Math.random() * 9)}-${two()}`;
+    res = await agent.post('/api/v1/bins').send({ code, partId, bookQuantity, abcClass });
+    if (res.status !== 409) break;
+  }
+  expect(res!.status).toBe(201);
+  return res!.body.bin;
 }
 
 // A bin count: the bulk weighed apart from a 20-piece sample of 0.5 g parts (10 g).

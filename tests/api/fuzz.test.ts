@@ -18,6 +18,7 @@ import { createPart, createScale, createTestWeight, createUser, stockPart, TEST_
 import { anonymous, signedIn, type Agent } from '../helpers/http';
 import { releasedOrder } from '../helpers/orders';
 import { waitForBatch } from '../helpers/printer';
+import { utcDay } from '../helpers/days';
 
 const SEED = Number(process.env.TF_FUZZ_SEED ?? 20260408);
 const RUNS = Number(process.env.TF_FUZZ_RUNS ?? 30);
@@ -759,8 +760,8 @@ beforeAll(async () => {
   // A cycle count 10 % under the book is held for a decision; two part counts make a lot to audit.
   const binCount = (await capture({ purpose: 'bin', binId: bin.id, binVersion: bin.version, gross: 450 })).body.binCount;
   for (const gross of [25, 25.5]) expect((await capture({ purpose: 'part', gross })).status).toBe(201);
-  const today = new Date().toISOString().slice(0, 10);
-  const audit = (await agents.get('quality')!.post('/api/v1/audits').send({ population: { from: today, to: today, partId: part.id }, aql: 2.5 })).body.audit;
+  const today = utcDay();
+  const audit = (await agents.get('quality')!.post('/api/v1/audits').send({ population: { from: utcDay(-1), to: today, partId: part.id }, aql: 2.5 })).body.audit;
   expect(binCount?.status).toBe('pending');
   expect(audit?.items.length).toBeGreaterThan(0);
   const binNow = (await clerk.get(`/api/v1/bins?code=${bin.code}`)).body.bins[0];

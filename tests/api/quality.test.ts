@@ -4,6 +4,7 @@ import { Scale } from '../../models';
 import { createPart, createScale, createTestWeight, createUser, testDb } from '../helpers/db';
 import { signedIn, type Agent } from '../helpers/http';
 import { mailTo, waitForMail } from '../helpers/mail';
+import { utcDay } from '../helpers/days';
 
 const contractBody = {
   accuracyClass: 'III',
@@ -175,13 +176,13 @@ describe('sampling plans and count audits', () => {
       const res = await operator.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send({ purpose: 'part', partId: part.id, scaleId: scale.id, gross: 25 + i * 0.25, tare: 0, sample: { quantity: 20, netWeight: 5 }, stable: true });
       expect(res.status).toBe(201);
     }
-    const today = new Date().toISOString().slice(0, 10);
+    const [from, today] = [utcDay(-1), utcDay()];
     // Lot of 10 → code letter B; at AQL 2.5 the arrow leads down to C: n = 5, Ac 0, Re 1.
-    const created = await quality.agent.post('/api/v1/audits').send({ population: { from: today, to: today, partId: part.id }, aql: 2.5, seed: 12345 });
+    const created = await quality.agent.post('/api/v1/audits').send({ population: { from, to: today, partId: part.id }, aql: 2.5, seed: 12345 });
     expect(created.status).toBe(201);
     const audit = created.body.audit;
     expect(audit).toMatchObject({ lotSize: 10, codeLetter: 'B', sampleSize: 5, accept: 0, reject: 1, seed: 12345, status: 'open' });
-    const again = await quality.agent.post('/api/v1/audits').send({ population: { from: today, to: today, partId: part.id }, aql: 2.5, seed: 12345 });
+    const again = await quality.agent.post('/api/v1/audits').send({ population: { from, to: today, partId: part.id }, aql: 2.5, seed: 12345 });
     expect(again.body.audit.items.map((i: { countEventId: number }) => i.countEventId)).toEqual(audit.items.map((i: { countEventId: number }) => i.countEventId));
 
     // Key in recounts: all right except one that is two pieces off an exact count.
@@ -196,7 +197,7 @@ describe('sampling plans and count audits', () => {
     const closed = await quality.agent.put(`/api/v1/audits/${audit.id}/items/${audit.items[0].id}`).send({ handCount: 1 });
     expect(closed.status).toBe(422);
 
-    const report = await quality.agent.get(`/api/v1/reports/accuracy?from=${today}&to=${today}&by=part`);
+    const report = await quality.agent.get(`/api/v1/reports/accuracy?from=${from}&to=${today}&by=part`);
     const row = report.body.rows.find((r: { key: string }) => r.key === String(part.id));
     expect(row).toMatchObject({ recounts: 5, nonconforming: 1, errorRate: 0.2, exactFlagged: 5, exactRight: 4, exactRightShare: 0.8 });
   });
@@ -213,10 +214,10 @@ describe('sampling plans and count audits', () => {
     for (let i = 0; i < 2; i++) {
       await op.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send({ purpose: 'part', partId: part.id, scaleId: scale.id, gross: 60, tare: 0, sample: { quantity: 10, netWeight: 6 }, stable: true });
     }
-    const today = new Date().toISOString().slice(0, 10);
-    const audit = (await quality.agent.post('/api/v1/audits').send({ population: { from: today, to: today, partId: part.id }, aql: 6.5 })).body.audit;
+    const [from, today] = [utcDay(-1), utcDay()];
+    const audit = (await quality.agent.post('/api/v1/audits').send({ population: { from, to: today, partId: part.id }, aql: 6.5 })).body.audit;
     for (const item of audit.items) await quality.agent.put(`/api/v1/audits/${audit.id}/items/${item.id}`).send({ handCount: item.count });
-    const csv = await quality.agent.get(`/api/v1/reports/accuracy?from=${today}&to=${today}&by=operator&format=csv`);
+    const csv = await quality.agent.get(`/api/v1/reports/accuracy?from=${from}&to=${today}&by=operator&format=csv`);
     expect(csv.headers['content-type']).toMatch(/^text\/csv/);
     expect(csv.headers['content-disposition']).toMatch(/attachment; filename="accuracy-by-operator/);
     expect(csv.text).toContain(`"'=HYPERLINK(""http://x"")"`);

@@ -1,10 +1,10 @@
 import type { BrowserContext } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { BinCount, BuildOrderLine, Container, CountEvent } from '../../models';
 import { createPart, createScale, stockPart, testDb, unique } from '../helpers/db';
 import { signedIn } from '../helpers/http';
 import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
-import { headingShown, liveCount, openBench, panButton, putOn, waitSettled, whenSettled } from '../helpers/bench';
+import { CAPTURE_WAIT_MS, headingShown, liveCount, openBench, panButton, putOn, waitSettled, whenSettled } from '../helpers/bench';
 
 // A quiet scale (s_r = 0.2 d) so the ±1 d stability window settles within a second or two.
 const benchScale = (o: Parameters<typeof createScale>[0] = {}) => createScale({ repeatabilityG: 0.02, ...o });
@@ -15,6 +15,11 @@ describe('the bench (browser, simulated scale)', () => {
   beforeAll(async () => {
     landscape = await openBrowser({ width: 1280, height: 800 });
     portrait = await openBrowser({ width: 800, height: 1280 });
+  });
+  // A bench page keeps its simulated feed and live trace running: close each test's pages, so later
+  // tests do not share the machine with them (the first page belongs to the browser profile).
+  afterEach(async () => {
+    for (const context of [landscape, portrait]) for (const page of context.pages().slice(1)) await page.close();
   });
   afterAll(async () => {
     await landscape.close();
@@ -54,7 +59,7 @@ describe('the bench (browser, simulated scale)', () => {
     await screenshot(page, 'bench-4-count');
 
     const result = page.getByTestId('capture-result');
-    await whenSettled(page, () => page.keyboard.press('c'), async () => (await result.count()) === 1);
+    await whenSettled(page, () => page.keyboard.press('c'), async () => (await result.count()) === 1, CAPTURE_WAIT_MS);
     expect(await result.getAttribute('data-count')).toBe('100');
     await screenshot(page, 'bench-5-captured');
     testDb();
@@ -70,7 +75,8 @@ describe('the bench (browser, simulated scale)', () => {
     await stockPart(part.id, 500);
     const planner = await signedIn('planner');
     const kit = (await planner.agent.post('/api/v1/kits').send({ code: unique('KIT'), revision: 'A', description: 'Bench kit', components: [{ partId: part.id, quantity: 10 }] })).body.kit;
-    const draft = (await planner.agent.post('/api/v1/orders').send({ kitId: kit.id, quantity: 10 })).body.order;
+    // Due today: the queue lists dated orders first, so the suite's undated ones cannot push this line out of it.
+    const draft = (await planner.agent.post('/api/v1/orders').send({ kitId: kit.id, quantity: 10, dueDate: new Date().toISOString().slice(0, 10) })).body.order;
     const order = (await planner.agent.post(`/api/v1/orders/${draft.id}/release`).send({ version: draft.version })).body.order;
     const page = await landscape.newPage();
     await signInThroughPage(page, 'operator');
@@ -91,7 +97,7 @@ describe('the bench (browser, simulated scale)', () => {
     await putOn(page, 70);
     await screenshot(page, 'bench-queue-count');
     const result = page.getByTestId('capture-result');
-    await whenSettled(page, () => page.keyboard.press('c'), async () => (await result.count()) === 1);
+    await whenSettled(page, () => page.keyboard.press('c'), async () => (await result.count()) === 1, CAPTURE_WAIT_MS);
     testDb();
     const line = await BuildOrderLine.findByPk(order.lines[0].id);
     expect(line).toMatchObject({ counted: 100, captures: 1, verdict: 'in' });
@@ -123,7 +129,7 @@ describe('the bench (browser, simulated scale)', () => {
     await putOn(page, 300);
     await screenshot(page, 'bench-bin-2-count');
     const result = page.getByTestId('capture-result');
-    await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await result.count()) === 1);
+    await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await result.count()) === 1, CAPTURE_WAIT_MS);
     await screenshot(page, 'bench-bin-3-captured');
     const [event] = await CountEvent.findAll({ where: { partId: part.id } });
     expect(event).toMatchObject({ purpose: 'bin', sampleOnPan: false, sampleQuantity: 20, containerId: bin.id, binId: stockBin.id });
@@ -214,7 +220,7 @@ describe('the bench (browser, simulated scale)', () => {
     await putOn(page, 10);
     await landscape.setOffline(true);
     const queued = page.getByTestId('capture-queue').locator('li');
-    await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await queued.count()) === 1);
+    await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await queued.count()) === 1, CAPTURE_WAIT_MS);
     const key = (await queued.first().getAttribute('data-key'))!;
     await screenshot(page, 'bench-offline-queued');
     testDb();

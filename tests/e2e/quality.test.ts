@@ -6,6 +6,7 @@ import { createPart, createScale, createTestWeight, TEST_PASSWORD, unique } from
 import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
 import { baseUrl, signedIn, type Agent } from '../helpers/http';
 
+// Days are UTC; a population runs from the day of its first capture to today, so a run over midnight keeps it whole.
 const today = () => new Date().toISOString().slice(0, 10);
 // Saves that close an audit also mail every quality engineer and planner before answering; under a
 // full suite that can take longer than expect.poll's one-second default.
@@ -25,10 +26,11 @@ async function openAudit(): Promise<number> {
   const quality = await signedIn('quality');
   const part = await createPart({ pieceSpread: 0.001 });
   const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
+  const from = today();
   for (let i = 0; i < 10; i++) {
     await operator.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(partCapture(part.id, scale.id, i));
   }
-  const res = await quality.agent.post('/api/v1/audits').send({ population: { from: today(), to: today(), partId: part.id }, aql: 2.5 });
+  const res = await quality.agent.post('/api/v1/audits').send({ population: { from, to: today(), partId: part.id }, aql: 2.5 });
   expect(res.status).toBe(201);
   return res.body.audit.id;
 }
@@ -93,8 +95,10 @@ describe('quality pages (browser)', () => {
 
   it('runs a count audit from the sampling plan to the lot verdict, keyed in with Enter', async () => {
     const operator = await signedIn('operator');
-    const part = await createPart({ pieceSpread: 0.001 });
+    // Sorts first among the suite's parts, so it is in the audit form's list of parts however many exist.
+    const part = await createPart({ partNumber: unique('0AUD').toUpperCase(), pieceSpread: 0.001 });
     const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
+    const from = today();
     for (let i = 0; i < 10; i++) {
       const res = await operator.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(partCapture(part.id, scale.id, i));
       expect(res.status).toBe(201);
@@ -107,7 +111,7 @@ describe('quality pages (browser)', () => {
     await expect.poll(() => page.getByTestId('sampling-plan').textContent()).toBe('Code letterHSample size n50Accept (Ac)≤ 1Reject (Re)≥ 2');
 
     const form = page.getByRole('form', { name: 'Start an audit' });
-    await form.getByLabel('Counted from').fill(today());
+    await form.getByLabel('Counted from').fill(from);
     await form.getByLabel('Counted to').fill(today());
     await form.getByLabel('Part').selectOption(String(part.id));
     await form.getByLabel('AQL (%)').selectOption('2.5');
@@ -133,7 +137,7 @@ describe('quality pages (browser)', () => {
     expect(await page.getByTestId('audit-item-1').textContent()).toContain('within ± U');
     await screenshot(page, 'audit-rejected');
 
-    await page.goto(`/quality/reports?from=${today()}&to=${today()}&by=part`);
+    await page.goto(`/quality/reports?from=${from}&to=${today()}&by=part`);
     await expect.poll(() => page.getByRole('table', { name: 'Accuracy by group' }).getByRole('row', { name: new RegExp(part.partNumber) }).textContent()).toContain('20.0 %');
     await page.close();
   });

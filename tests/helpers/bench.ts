@@ -33,17 +33,21 @@ export async function liveCount(page: Page): Promise<number> {
   return Number(await page.getByTestId('live-count').getAttribute('data-count'));
 }
 
+// A capture waits on the server (and its mails when a variance is held): give it longer than a
+// step that only changes the page before pressing again.
+export const CAPTURE_WAIT_MS = 15_000;
+
 /**
  * Does a step once the pan is settled, as an operator would, and presses again if the reading
  * moved at that moment (the page then says so and nothing happens).
  */
-export async function whenSettled(page: Page, act: () => Promise<void>, done: () => Promise<boolean>): Promise<void> {
+export async function whenSettled(page: Page, act: () => Promise<void>, done: () => Promise<boolean>, doneWithinMs = 2000): Promise<void> {
   const badge = page.getByTestId('stability');
   for (let attempt = 0; attempt < 6; attempt += 1) {
     await expect.poll(() => badge.textContent(), { timeout: 10_000 }).toBe('Settled');
     await act();
     try {
-      await expect.poll(done, { timeout: 2000 }).toBe(true);
+      await expect.poll(done, { timeout: doneWithinMs }).toBe(true);
       return;
     } catch {
       // moved just then: try again
