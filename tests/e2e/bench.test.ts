@@ -204,6 +204,30 @@ describe('the bench (browser, simulated scale)', () => {
     await screenshot(page, 'bench-restored');
   });
 
+  it('keeps one bench per browser: a second tab says where it is, takes it over with the count in progress, and gives it back when closed', async () => {
+    const scale = await benchScale();
+    const part = await createPart({ pieceSpread: 0.01 });
+    const first = await landscape.newPage();
+    await signInThroughPage(first, 'operator');
+    await openBench(first, scale.id, 5);
+    await first.getByLabel('Scan or type a part number').fill(part.partNumber);
+    await first.getByLabel('Scan or type a part number').press('Enter');
+    await panButton(first, /Place container/);
+    await waitSettled(first);
+    await whenSettled(first, () => first.getByRole('button', { name: /Tare now/ }).click(), headingShown(first, /Count \d+ pieces onto the pan/));
+
+    const second = await landscape.newPage();
+    await second.goto('/bench');
+    await expect.poll(() => second.getByTestId('bench-tab').textContent()).toContain('The bench is open in another tab');
+    await screenshot(second, 'bench-second-tab');
+    await second.getByRole('button', { name: 'Count here instead' }).click();
+    await expect.poll(headingShown(second, /Count \d+ pieces onto the pan/)).toBe(true);
+    await expect.poll(() => first.getByTestId('bench-tab').textContent()).toContain('The bench moved to another tab');
+
+    await second.close();
+    await expect.poll(headingShown(first, /Count \d+ pieces onto the pan/)).toBe(true);
+  });
+
   it('queues a capture made offline and sends it exactly once when back online', async () => {
     const scale = await benchScale();
     const part = await createPart({ pieceSpread: 0.01 });

@@ -3,6 +3,7 @@ import { listContainers } from '@/server/services/containers/list-containers';
 import { listScales } from '@/server/services/scales/list-scales';
 import { getSettings } from '@/server/services/settings/get-settings';
 import { BenchStation } from './_components/BenchStation';
+import { BenchTabGuard } from './_components/BenchTabGuard';
 
 export const metadata = { title: 'Bench' };
 
@@ -11,12 +12,14 @@ export default async function BenchPage({ searchParams }: { searchParams: Promis
   const { bin } = await searchParams;
   const [scales, containers, settings] = await Promise.all([listScales(), listContainers(), getSettings()]);
   return (
-    <BenchStation
-      scales={scales}
-      containers={containers}
-      stabilityWindowMs={settings.stabilityWindowMs}
-      defaultPieceSpread={settings.defaultPieceSpread}
-      initialBin={bin ?? null}
-    />
+    <BenchTabGuard>
+      <BenchStation
+        scales={scales}
+        containers={containers}
+        stabilityWindowMs={settings.stabilityWindowMs}
+        defaultPieceSpread={settings.defaultPieceSpread}
+        initialBin={bin ?? null}
+      />
+    </BenchTabGuard>
   );
 }
