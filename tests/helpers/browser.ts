@@ -1,5 +1,5 @@
 // Debian's Chromium driven by playwright-core; each test gets a fresh profile.
-import { mkdirSync, mkdtempSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
@@ -9,15 +9,23 @@ import { baseUrl } from './http';
 
 export const SCREENSHOT_DIR = path.resolve(__dirname, '../../test-results/screenshots');
 
+// The profile folder goes when the browser closes, so runs do not pile them up in /tmp.
 export async function openBrowser(viewport = { width: 1280, height: 800 }): Promise<BrowserContext> {
   const profile = mkdtempSync(path.join(os.tmpdir(), 'tallyforge-chromium-'));
-  return chromium.launchPersistentContext(profile, {
+  const context = await chromium.launchPersistentContext(profile, {
     executablePath: '/usr/bin/chromium',
     headless: true,
     viewport,
     baseURL: baseUrl(),
     args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
   });
+  // Once close() resolves the browser process has exited and nothing writes to the profile any more.
+  const close = context.close.bind(context);
+  context.close = async (options) => {
+    await close(options);
+    rmSync(profile, { recursive: true, force: true, maxRetries: 3 });
+  };
+  return context;
 }
 
 export async function screenshot(page: Page, name: string): Promise<void> {
