@@ -13,7 +13,7 @@ const columns: ColDef<CountLogRow>[] = [
   { field: 'partNumber', headerName: 'Part', minWidth: 170, cellClass: 'num', tooltipField: 'description' },
   {
     headerName: 'Count',
-    minWidth: 140,
+    minWidth: 180,
     valueGetter: (p) => p.data?.count,
     cellRenderer: (p: ICellRendererParams<CountLogRow>) =>
       p.data ? (
