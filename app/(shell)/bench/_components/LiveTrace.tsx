@@ -5,6 +5,7 @@ import { useEffect, useRef, useState } from 'react';
 import type uPlotType from 'uplot';
 import type { LiveFrame } from '../_lib/reading-pipeline';
 import type { TraceBuffer, TraceMarkKind } from '../_lib/trace-buffer';
+import { weightAxis } from '../_lib/weight-axis';
 
 const SPAN_MS = 30_000;
 const MARK_COLOURS: Record<TraceMarkKind, string> = { tare: '#6b7780', sample: '#1f5a70', grow: '#2f7d57', capture: '#c28a2c' };
@@ -84,14 +85,15 @@ export function LiveTrace({ trace, frameRef, division, windowMs }: Props) {
       setSessionS(Math.floor((newest - (trace.oldestTime() ?? newest)) / 1000));
     };
 
+    const weight = weightAxis(division);
     void import('uplot').then(({ default: UPlot }) => {
       if (disposed || !box.current) return;
       chart = new UPlot(
         {
           width: box.current.clientWidth,
           height: 180,
-          scales: { x: { time: false } },
-          axes: [{ label: 's' }, { label: 'g', size: 70 }],
+          scales: { x: { time: false }, y: { range: (_u, min, max) => weight.range(min, max) } },
+          axes: [{ label: 's' }, { label: 'g', size: 70, incrs: weight.incrs, values: (_u, ticks) => ticks.map(weight.format) }],
           legend: { show: false },
           cursor: { show: false },
           series: [{}, { stroke: '#1f5a70', width: 2, points: { show: false } }],
