@@ -32,9 +32,11 @@ interface DataGridProps<T> {
   label: string;
   // Checkbox rows; the grid reports the chosen rows after every change.
   onSelection?: (rows: T[]) => void;
+  // What an empty grid says, in place of the grid library's own words.
+  emptyText?: string;
 }
 
-export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, label, onSelection }: DataGridProps<T>) {
+export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, label, onSelection, emptyText = 'Nothing to show here yet.' }: DataGridProps<T>) {
   return (
     <div style={{ height }} aria-label={label} role="region">
       <AgGridReact<T>
@@ -45,6 +47,7 @@ export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, l
         quickFilterText={quickFilter}
         defaultColDef={{ sortable: true, filter: true, resizable: true, flex: 1, minWidth: 110 }}
         animateRows={false}
+        localeText={{ noRowsToShow: emptyText }}
         rowSelection={onSelection ? { mode: 'multiRow', selectAll: 'filtered' } : undefined}
         onSelectionChanged={onSelection ? (e) => onSelection(e.api.getSelectedRows()) : undefined}
         // Every column stays in the page, so narrow screens scroll instead of dropping cells
@@ -56,3 +59,4 @@ export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, l
     </div>
   );
 }
+

@@ -46,5 +46,5 @@ const columns: ColDef<CountLogRow>[] = [
 ];
 
 export function CountLogGrid({ rows }: { rows: CountLogRow[] }) {
-  return <DataGrid label="Count log" rows={rows} columns={columns} rowId={(r) => String(r.id)} height={fitHeight(rows.length, 620)} />;
+  return <DataGrid label="Count log" emptyText="No counts match these filters." rows={rows} columns={columns} rowId={(r) => String(r.id)} height={fitHeight(rows.length, 620)} />;
 }

@@ -45,7 +45,7 @@ export function LabelDesk({ bins, parts, orders, stocks, jobs }: Props) {
   const grid = useMemo(() => {
     if (template === 'bin') {
       const columns: ColDef<BinRow>[] = [
-        { field: 'code', headerName: 'Bin', cellClass: 'num' },
+        { field: 'code', headerName: 'Bin', cellClass: 'num', minWidth: 140 },
         { field: 'partNumber', headerName: 'Part', cellClass: 'num', flex: 2 },
         { field: 'bookQuantity', headerName: 'Book qty', cellClass: 'num', maxWidth: 140 },
       ];
@@ -53,13 +53,13 @@ export function LabelDesk({ bins, parts, orders, stocks, jobs }: Props) {
     }
     if (template === 'part') {
       const columns: ColDef<PartRow>[] = [
-        { field: 'partNumber', headerName: 'Part number', cellClass: 'num' },
+        { field: 'partNumber', headerName: 'Part number', cellClass: 'num', minWidth: 170 },
         { field: 'description', headerName: 'Description', flex: 2 },
       ];
       return <DataGrid<PartRow> key="part" label="Parts to label" rows={parts} columns={columns} rowId={(r) => String(r.id)} quickFilter={find} height={fitHeight(parts.length, 420)} onSelection={(rows) => setChosen(rows.map((r) => r.id))} />;
     }
     const columns: ColDef<OrderRow>[] = [
-      { field: 'number', headerName: 'Build order', cellClass: 'num' },
+      { field: 'number', headerName: 'Build order', cellClass: 'num', minWidth: 160 },
       { field: 'kit', headerName: 'Kit', flex: 2 },
       { field: 'quantity', headerName: 'Kits', cellClass: 'num', maxWidth: 120 },
       { field: 'status', headerName: 'Status', maxWidth: 150, valueFormatter: (p) => String(p.value).replace('_', ' ') },

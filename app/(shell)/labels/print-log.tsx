@@ -92,7 +92,7 @@ export function PrintLog({ initial, followBatch }: { initial: PrintJobDto[]; fol
       <p role="status" aria-live="polite" className="min-h-5 text-sm text-ink-soft" data-testid="print-log-status">
         {note ?? (following ? 'Sending to the printer…' : `${jobs.length} recent job${jobs.length === 1 ? '' : 's'}.`)}
       </p>
-      <DataGrid<PrintJobDto> label="Print log" rows={jobs} columns={columns} rowId={(j) => String(j.id)} height={fitHeight(jobs.length, 420)} />
+      <DataGrid<PrintJobDto> label="Print log" emptyText="No labels printed yet." rows={jobs} columns={columns} rowId={(j) => String(j.id)} height={fitHeight(jobs.length, 420)} />
     </section>
   );
 }

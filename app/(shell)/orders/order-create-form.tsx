@@ -40,8 +40,8 @@ export function OrderCreateForm({ kits }: { kits: KitChoice[] }) {
       }}
     >
       {({ isSubmitting, errors, touched }) => (
-        <Form noValidate className="card grid gap-4 md:grid-cols-[1fr_9rem_11rem_auto] md:items-start" aria-label="New build order">
-          <h2 className="md:col-span-4 font-bold">New build order</h2>
+        <Form noValidate className="card grid gap-4 lg:grid-cols-[minmax(0,1fr)_9rem_11rem_auto] lg:items-start" aria-label="New build order">
+          <h2 className="lg:col-span-4 font-bold">New build order</h2>
           <div>
             <label htmlFor="f-kitId" className="field-label">Kit revision</label>
             <Field as="select" id="f-kitId" name="kitId" className="field" aria-describedby="f-kitId-error" aria-invalid={touched.kitId && errors.kitId ? true : undefined}>
@@ -54,10 +54,10 @@ export function OrderCreateForm({ kits }: { kits: KitChoice[] }) {
           </div>
           <FormField name="quantity" label="Number of kits" inputMode="numeric" autoComplete="off" />
           <FormField name="dueDate" label="Due date" type="date" />
-          <div className="md:pt-6">
+          <div className="lg:pt-6">
             <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>{isSubmitting ? 'Creating…' : 'Create draft'}</button>
           </div>
-          <div className="md:col-span-4">
+          <div className="lg:col-span-4">
             <FormMessage message={message} />
           </div>
         </Form>

@@ -33,7 +33,7 @@ export function InviteForm({ onInvited }: { onInvited: (user: UserDto, mail: str
       }}
     >
       {({ isSubmitting }) => (
-        <Form noValidate className="card grid gap-4 md:grid-cols-[1fr_1fr_12rem_auto] md:items-start" aria-label="Invite someone">
+        <Form noValidate className="card grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)_12rem_auto] lg:items-start" aria-label="Invite someone">
           <FormField name="name" label="Name" autoComplete="off" />
           <FormField name="email" type="email" label="E-mail" autoComplete="off" />
           <div>
@@ -44,12 +44,12 @@ export function InviteForm({ onInvited }: { onInvited: (user: UserDto, mail: str
               ))}
             </Field>
           </div>
-          <div className="md:pt-6">
+          <div className="lg:pt-6">
             <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
               {isSubmitting ? 'Sending…' : 'Send invitation'}
             </button>
           </div>
-          <div className="md:col-span-4">
+          <div className="lg:col-span-4">
             <FormMessage message={message} />
           </div>
         </Form>
