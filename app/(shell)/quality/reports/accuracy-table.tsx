@@ -4,7 +4,7 @@ import { formatPercent } from '../../../_components/format';
 export function AccuracyTable({ rows, groupLabel }: { rows: AccuracyRow[]; groupLabel: string }) {
   return (
     <div className="card p-0 overflow-x-auto">
-      <table className="w-full text-sm" aria-label="Accuracy by group">
+      <table className="w-full text-sm [&_td]:whitespace-nowrap [&_th]:whitespace-nowrap" aria-label="Accuracy by group">
         <thead className="bg-paper-deep text-left text-ink-soft">
           <tr>
             <th scope="col" className="px-3 py-2">{groupLabel}</th>

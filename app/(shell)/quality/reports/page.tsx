@@ -59,7 +59,7 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
         </>
       )}
       <p className="text-xs text-ink-faint">
-        Error rate: share of recounts that differ at all. Nonconforming: hand count outside the count&apos;s own ± U (the ISO 2859-1 audit criterion). Exact-flagged right: share of counts shown as exact that were.
+        Error rate: share of recounts that differ at all. Nonconforming: hand count outside the count&apos;s own ± U, which is what an audit counts as a nonconforming item when it judges the lot by its ISO 2859-1 plan. Exact-flagged right: share of counts shown as exact that were.
       </p>
     </div>
   );
