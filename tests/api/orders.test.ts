@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
-import { Bin, PartStock, StockMovement, StockReservation } from '../../models';
+import { Bin, BuildOrderLine, CountEvent, PartStock, StockMovement, StockReservation } from '../../models';
 import { createPart, createScale, stockPart, testDb, unique } from '../helpers/db';
 import { signedIn, type Agent } from '../helpers/http';
 import { waitForMail } from '../helpers/mail';
@@ -124,6 +124,16 @@ describe('kits and build orders', () => {
     expect(inProgress).toMatchObject({ status: 'in_progress', progress: { linesDone: 1, lines: 1 } });
     const queueAfter = await operator.agent.get('/api/v1/kitting-queue');
     expect(queueAfter.body.lines.some((l: { orderLineId: number }) => l.orderLineId === lineId)).toBe(false);
+    // A second whole count of a line counted in full is refused and records nothing: it would double the line.
+    const again = await operator.agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send({ purpose: 'kit_line', orderLineId: lineId, partId: pin.id, scaleId: scale.id, gross: 25, tare: 0, sample: { quantity: 20, netWeight: 5 }, sampleOnPan: true, targetQuantity: 100, stable: true });
+    expect(again.status).toBe(422);
+    expect(again.body.error.message).toContain('already counted in full (100 of 100)');
+    testDb();
+    expect(await CountEvent.count({ where: { orderLineId: lineId } })).toBe(1);
+    expect((await BuildOrderLine.findByPk(lineId))!.counted).toBe(100);
 
     const done = await planner.agent.post(`/api/v1/orders/${order.id}/complete`).send({ version: inProgress.version });
     expect(done.status).toBe(200);

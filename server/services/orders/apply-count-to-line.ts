@@ -26,6 +26,12 @@ export async function applyCountToLine(
   if (!order || (order.status !== 'released' && order.status !== 'in_progress')) {
     throw new AppError('rule_violated', `Order ${order?.number ?? ''} is not open for kitting (${order?.status ?? 'missing'})`);
   }
+  // A line counted in full takes no more pieces: a second whole count would double the kit line.
+  if (line.counted >= line.required) {
+    throw new AppError('rule_violated', `This line is already counted in full (${line.counted} of ${line.required}); the planner decides what happens to it`, {
+      fields: { orderLineId: 'already counted in full' },
+    });
+  }
   const varianceSum = Number(line.varianceSum) + opts.standardUncertainty ** 2;
   line.counted += opts.count;
   line.captures += 1;

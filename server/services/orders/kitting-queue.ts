@@ -22,7 +22,9 @@ export interface QueueLine {
   verdict: string;
 }
 
-// Lines of released orders that are not yet in tolerance, the most urgent order first.
+// Lines of released orders with pieces still to count, the most urgent order first. A line counted in
+// full but not in tolerance (over, or an uncertain total) is the planner's to decide, not the bench's:
+// adding pieces can only move it further off.
 export async function kittingQueue(): Promise<QueueLine[]> {
   const rows = await getDb().query<Record<string, unknown>>(
     `SELECT l.id AS order_line_id, o.id AS order_id, o.number, k.code, k.revision, o.due_date, p.id AS part_id, p.part_number, p.description,
@@ -31,7 +33,7 @@ export async function kittingQueue(): Promise<QueueLine[]> {
        JOIN build_orders o ON o.id = l.order_id
        JOIN kits k ON k.id = o.kit_id
        JOIN parts p ON p.id = l.part_id
-      WHERE o.status IN ('released', 'in_progress') AND l.verdict <> 'in'
+      WHERE o.status IN ('released', 'in_progress') AND l.verdict <> 'in' AND l.counted < l.required
       ORDER BY o.due_date IS NULL, o.due_date, o.id, p.part_number
       LIMIT 500`,
     { type: QueryTypes.SELECT },

@@ -7,7 +7,7 @@ import type { WaitingItem } from './waiting-item';
 export async function queueWaiting(): Promise<WaitingItem> {
   const [row] = await getDb().query<{ line_count: number; order_count: number }>(
     `SELECT COUNT(*) AS line_count, COUNT(DISTINCT o.id) AS order_count FROM build_order_lines l JOIN build_orders o ON o.id = l.order_id
-      WHERE o.status IN ('released', 'in_progress') AND l.verdict <> 'in'`,
+      WHERE o.status IN ('released', 'in_progress') AND l.verdict <> 'in' AND l.counted < l.required`,
     { type: QueryTypes.SELECT },
   );
   const orders = Number(row?.order_count ?? 0);

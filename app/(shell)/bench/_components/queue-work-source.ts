@@ -13,7 +13,7 @@ function toItem(line: QueueLine): WorkItem {
     partNumber: line.partNumber,
     label: `${line.orderNumber} · ${line.partNumber} — ${line.remaining} of ${line.required} to count (${line.kitCode} rev ${line.kitRevision})`,
     orderLineId: line.orderLineId,
-    targetQuantity: line.remaining > 0 ? line.remaining : line.required,
+    targetQuantity: line.remaining,
     tolerance: { below: line.toleranceBelow, above: line.toleranceAbove },
   };
 }
