@@ -163,6 +163,11 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
       setNotice({ tone: 'fault', text: describeWarning('unstable').message, code: 'unstable' });
       return null;
     }
+    // Above Max the indication means nothing (the load cell may be past its linear range): no step takes it.
+    if (f.load.level === 'over') {
+      setNotice({ tone: 'fault', text: `${describeWarning('over_capacity').message} ${describeWarning('over_capacity').remedy}`, code: 'over_capacity' });
+      return null;
+    }
     setNotice(null);
     return f;
   };
