@@ -1,5 +1,6 @@
 import { toWholePieces } from '@/lib/weighing/count';
 import type { CountEventDto } from '@/server/schemas/counts';
+import { formatGrams } from '../../../_components/format';
 
 // What the server recorded, computed by the server from the weights sent.
 export function CaptureResult({ count }: { count: CountEventDto }) {
@@ -12,7 +13,7 @@ export function CaptureResult({ count }: { count: CountEventDto }) {
         {!count.exact ? <span className="text-brass"> ± {u}</span> : null} pcs
       </p>
       <p className="num mt-1 text-sm text-ink-soft">
-        net {count.net} g · sample {count.sampleQuantity} pcs, {count.sampleNetWeight} g · APW {count.averagePieceWeight} g · {count.exact ? 'exact' : `± ${u} pcs (95 %)`}
+        net {formatGrams(count.net)} · sample {count.sampleQuantity} pcs, {formatGrams(count.sampleNetWeight)} · APW {formatGrams(count.averagePieceWeight)} · {count.exact ? 'exact' : `± ${u} pcs (95 %)`}
       </p>
       {count.warnings.length ? <p className="mt-1 text-sm text-caution">Noted with the count: {count.warnings.map((w) => w.message).join(' ')}</p> : null}
     </section>
