@@ -18,7 +18,7 @@ export const PERMISSIONS = {
   'kits.edit': 'Edit kits and bills of material',
   'orders.manage': 'Create, release, complete and cancel build orders',
   'bins.edit': 'Edit bins and containers, plan cycle counts',
-  'variances.approve': 'Approve variances above the threshold',
+  'variances.approve': 'Approve variances above the threshold, and samples held for review',
   'labels.print': 'Print labels',
   'calibration.manage': 'Record calibrations, manage test weights, lock and unlock scales',
   'audits.run': 'Run count audits and read accuracy reports',

@@ -10,7 +10,10 @@ export class BuildOrderLine extends Model<InferAttributes<BuildOrderLine>, Infer
   declare toleranceBelow: number;
   declare toleranceAbove: number;
   declare counted: CreationOptional<number>;
+  // u² of the line's count (pieces²), captures that share an APW counted together.
   declare varianceSum: CreationOptional<string>;
+  /** ± whole pieces at 95 %; 0 when every capture was exact. */
+  declare wholePieceRange: CreationOptional<number>;
   declare captures: CreationOptional<number>;
   declare verdict: CreationOptional<LineVerdict>;
   declare createdAt: CreationOptional<Date>;
@@ -28,6 +31,7 @@ export class BuildOrderLine extends Model<InferAttributes<BuildOrderLine>, Infer
         toleranceAbove: { type: DataTypes.INTEGER, allowNull: false },
         counted: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         varianceSum: { type: DataTypes.DECIMAL(16, 6), allowNull: false, defaultValue: 0 },
+        wholePieceRange: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         captures: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         verdict: { type: DataTypes.ENUM(...LINE_VERDICTS), allowNull: false, defaultValue: 'open' },
         createdAt: { type: DataTypes.DATE, allowNull: false },

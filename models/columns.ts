@@ -36,6 +36,10 @@ export type MovementReason = (typeof MOVEMENT_REASONS)[number];
 export const PRINT_JOB_STATUSES = ['queued', 'sent', 'failed'] as const;
 export type PrintJobStatus = (typeof PRINT_JOB_STATUSES)[number];
 
+// A sample far from its part's history waits for quality or a planner before it teaches the part anything.
+export const SAMPLE_STATUSES = ['accepted', 'held', 'rejected'] as const;
+export type SampleStatus = (typeof SAMPLE_STATUSES)[number];
+
 export const ABC_CLASSES = ['A', 'B', 'C'] as const;
 export type AbcClass = (typeof ABC_CLASSES)[number];
 

@@ -23,6 +23,11 @@ export class CountEvent extends Model<InferAttributes<CountEvent>, InferCreation
   declare standardUncertainty: string;
   declare expandedUncertainty: string;
   declare exact: boolean;
+  declare probabilityExact: CreationOptional<string | null>;
+  declare wholePieceRange: CreationOptional<number | null>;
+  /** M, and u_r(APW)²: what a kit line needs to count a shared APW once. */
+  declare uncertainPieces: CreationOptional<string | null>;
+  declare apwRelativeVariance: CreationOptional<number | null>;
   declare targetQuantity: number | null;
   declare warnings: Array<{ code: string; message: string }>;
   declare operatorId: number;
@@ -55,6 +60,10 @@ export class CountEvent extends Model<InferAttributes<CountEvent>, InferCreation
         standardUncertainty: { type: dec(), allowNull: false },
         expandedUncertainty: { type: dec(), allowNull: false },
         exact: { type: DataTypes.BOOLEAN, allowNull: false },
+        probabilityExact: { type: DataTypes.DECIMAL(8, 6), allowNull: true },
+        wholePieceRange: { type: DataTypes.INTEGER, allowNull: true },
+        uncertainPieces: { type: dec(), allowNull: true },
+        apwRelativeVariance: { type: DataTypes.DOUBLE, allowNull: true },
         targetQuantity: { type: DataTypes.INTEGER, allowNull: true },
         warnings: { type: DataTypes.JSON, allowNull: false },
         operatorId: { type: DataTypes.INTEGER, allowNull: false },

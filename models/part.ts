@@ -11,6 +11,10 @@ export class Part extends Model<InferAttributes<Part>, InferCreationAttributes<P
   declare apwSampleSize: number | null;
   declare pieceSpread: string | null;
   declare spreadObservations: CreationOptional<number>;
+  // The spread as observed (relative scatter, the noise in it, degrees of freedom): see lib/weighing/spread-belief.ts.
+  declare spreadScatter: CreationOptional<number | null>;
+  declare spreadNoise: CreationOptional<number | null>;
+  declare spreadDof: CreationOptional<number | null>;
   declare photoFile: string | null;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
@@ -27,6 +31,9 @@ export class Part extends Model<InferAttributes<Part>, InferCreationAttributes<P
         apwSampleSize: { type: DataTypes.INTEGER, allowNull: true },
         pieceSpread: { type: ratio(), allowNull: true },
         spreadObservations: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        spreadScatter: { type: DataTypes.DOUBLE, allowNull: true },
+        spreadNoise: { type: DataTypes.DOUBLE, allowNull: true },
+        spreadDof: { type: DataTypes.INTEGER, allowNull: true },
         photoFile: { type: DataTypes.STRING(80), allowNull: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: { type: DataTypes.DATE, allowNull: false },

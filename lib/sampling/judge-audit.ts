@@ -1,15 +1,14 @@
-import { toWholePieces } from '../weighing/count';
-
 export interface AuditedCount {
   count: number;
-  expandedUncertainty: number;
+  /** The count's own ± whole pieces at 95 % (0 when exact). */
+  wholePieceRange: number;
   exact: boolean;
   handCount: number;
 }
 
 export interface ItemVerdict {
   error: number;
-  /** The hand count lies inside the count's own stated interval count ± U (whole pieces). */
+  /** The hand count lies inside the count's own stated range count ± wholePieceRange. */
   withinUncertainty: boolean;
   /** For counts flagged exact: whether they were exactly right; null otherwise. */
   exactRight: boolean | null;
@@ -20,7 +19,7 @@ export function judgeAuditItem(c: AuditedCount): ItemVerdict {
   const error = c.count - c.handCount;
   return {
     error,
-    withinUncertainty: Math.abs(error) <= toWholePieces(c.expandedUncertainty),
+    withinUncertainty: Math.abs(error) <= c.wholePieceRange,
     exactRight: c.exact ? error === 0 : null,
   };
 }

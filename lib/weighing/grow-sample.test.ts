@@ -1,41 +1,51 @@
 import { describe, expect, it } from 'vitest';
 import { SimulatedScale } from '../scale/simulator';
-import { findMaxExactQuantity } from './exact-range';
 import { acceptGrowStep, planGrowStep, type GrowState } from './grow-sample';
-import { netWeightUncertainty } from './uncertainty';
+import { exactReach } from './exact-reach';
 
-const uW = netWeightUncertainty({ division: 0.01 }); // 0.0040825 g, rounding only
+const noise = { division: 0.01, repeatability: 0 };
+const known = (pieceSpread: number) => ({ kind: 'known' as const, pieceSpread });
 
 describe('planGrowStep', () => {
-  // Hand-worked (COUNTING.md quadratic, on-pan shared zero per GUM 5.2.2): n = 10, W_s = 6 g,
-  // c = 0.5 %, u(W) = 0.0040825 g → u_r² = 2.5e-6 + 4.63e-7; a = 1.1852e-5,
-  // b = 4·(2.5e-5 + 4.63e-5/10) = 1.1852e-4, c0 = −0.24981 → M* = 140.27 (141.03 without the
-  // shared zero); with half a piece of margin, M + 0.5 ≤ 140.27 → 139 pieces.
-  it('allows as many added pieces as stay exact with the current APW, with half a piece of margin', () => {
-    const plan = planGrowStep({ sampleQuantity: 10, sampleNet: 6, pieceSpread: 0.005, netWeightUncertainty: uW });
-    expect(plan.maxAdd).toBe(139);
-    expect(plan.maxTotal).toBe(149);
+  // Hand-worked with docs/counting-model.md: n = 10, W_s = 6 g, c = 0.5 %, d = 0.01 g, s_r = 0. The
+  // pieces blur the rounding phase (σ = APW·c·√n ≈ 0.95 d), so the dependent-rounding terms vanish and
+  // u² = M·c² + M²·(c²/n + u(W)²/W_s²) + (u(W)²/APW²)(1 + M/n), u(W)² = d²/6 (GUM F.2.2.1):
+  // 2.963e-6·M² + 2.963e-5·M + 4.63e-5 = u_plan² = 0.19631² → M = 109.1 → 109 pieces.
+  it('allows as many added pieces as stay within exact reach', () => {
+    const plan = planGrowStep({ sampleQuantity: 10, sampleNet: 6, spread: known(0.005), noise });
+    expect(plan.maxAdd).toBe(109);
+    expect(plan.maxTotal).toBe(119);
     expect(plan.tooLight).toBe(false);
   });
 
-  it('plans a step whose count stays exact even if the pieces read half a piece heavy', () => {
-    const state: GrowState = { sampleQuantity: 25, sampleNet: 15, pieceSpread: 0.02, netWeightUncertainty: uW };
-    const plan = planGrowStep(state);
-    const heavy = acceptGrowStep(state, (plan.maxTotal + 0.49) * 0.6, true);
-    expect(heavy.accepted).toBe(true);
-    expect(acceptGrowStep(state, (plan.maxTotal + 2) * 0.6, true).accepted).toBe(false);
+  it('never plans past the pan total the caller caps it at (a kit line\'s window)', () => {
+    const plan = planGrowStep({ sampleQuantity: 10, sampleNet: 6, spread: known(0.005), noise }, 40);
+    expect(plan).toEqual({ maxAdd: 30, maxTotal: 40, tooLight: false });
   });
 
-  it('allows fewer pieces per step when the spread is loose', () => {
-    const tight = planGrowStep({ sampleQuantity: 10, sampleNet: 6, pieceSpread: 0.005, netWeightUncertainty: uW });
-    const loose = planGrowStep({ sampleQuantity: 10, sampleNet: 6, pieceSpread: 0.05, netWeightUncertainty: uW });
+  it('plans a step whose count is judged exact even when the pieces read a little heavy', () => {
+    const state: GrowState = { sampleQuantity: 25, sampleNet: 15, spread: known(0.02), noise };
+    const plan = planGrowStep(state);
+    expect(acceptGrowStep(state, (plan.maxTotal + 0.25) * 0.6, true).accepted).toBe(true);
+    expect(acceptGrowStep(state, (plan.maxTotal + 0.5) * 0.6, true).accepted).toBe(false);
+  });
+
+  it('allows fewer pieces per step when the spread is loose, and fewer still when it is learned from 5 pieces only', () => {
+    const tight = planGrowStep({ sampleQuantity: 10, sampleNet: 6, spread: known(0.005), noise });
+    const loose = planGrowStep({ sampleQuantity: 10, sampleNet: 6, spread: known(0.05), noise });
+    const fromFive = planGrowStep({ sampleQuantity: 10, sampleNet: 6, spread: { kind: 'learned', scatter: 0.005 ** 2, noise: 0, degreesOfFreedom: 4, observations: 5 }, noise });
     expect(loose.maxAdd).toBeLessThan(tight.maxAdd);
     expect(loose.maxAdd).toBeGreaterThan(0);
+    expect(fromFive.maxAdd).toBeLessThan(tight.maxAdd);
+  });
+
+  it('says when not even one piece can be added exactly', () => {
+    expect(planGrowStep({ sampleQuantity: 10, sampleNet: 0.15, spread: known(0.01), noise }).tooLight).toBe(true);
   });
 });
 
 describe('acceptGrowStep', () => {
-  const state: GrowState = { sampleQuantity: 10, sampleNet: 6, pieceSpread: 0.005, netWeightUncertainty: uW };
+  const state: GrowState = { sampleQuantity: 10, sampleNet: 6, spread: known(0.005), noise };
 
   it('accepts an exact, stable step and takes its count as the new sample', () => {
     const step = acceptGrowStep(state, 60.12, true);
@@ -48,12 +58,12 @@ describe('acceptGrowStep', () => {
     if (!step.accepted) expect(step.reason).toBe('unstable');
   });
 
-  it('refuses a step that added more pieces than can be counted exactly', () => {
+  it('refuses a step that added more pieces than can be counted exactly, with the ± range', () => {
     const step = acceptGrowStep(state, 600, true);
     expect(step.accepted).toBe(false);
     if (!step.accepted) {
       expect(step.reason).toBe('not_exact');
-      expect(step.expandedUncertainty).toBeGreaterThanOrEqual(0.5);
+      expect(step.wholePieceRange).toBeGreaterThanOrEqual(1);
     }
   });
 
@@ -63,7 +73,6 @@ describe('acceptGrowStep', () => {
     if (!step.accepted) expect(step.reason).toBe('nothing_added');
   });
 
-  // COUNTING.md: "with a tight piece spread a sample of 10 grows to hundreds in two or three steps".
   it('grows a 10-piece sample past 500 pieces in three exact steps on a simulated scale', () => {
     const scale = new SimulatedScale({ seed: 11, capacity: 6000, division: 0.01, part: { meanWeight: 0.6, spread: 0.005 } });
     const settle = (): number => {
@@ -72,7 +81,7 @@ describe('acceptGrowStep', () => {
     };
     const zero = settle();
     scale.addPieces(10);
-    let grow: GrowState = { sampleQuantity: 10, sampleNet: settle() - zero, pieceSpread: 0.005, netWeightUncertainty: uW };
+    let grow: GrowState = { sampleQuantity: 10, sampleNet: settle() - zero, spread: known(0.005), noise };
     for (let i = 0; i < 3; i += 1) {
       const plan = planGrowStep(grow);
       scale.addPieces(plan.maxAdd);
@@ -83,10 +92,7 @@ describe('acceptGrowStep', () => {
       grow = { ...grow, sampleQuantity: step.sampleQuantity, sampleNet: step.sampleNet };
     }
     expect(grow.sampleQuantity).toBeGreaterThan(500);
-    const range = findMaxExactQuantity({
-      averagePieceWeight: grow.sampleNet / grow.sampleQuantity, apwRelativeUncertainty: 0,
-      pieceSpread: 0.005, netWeightUncertainty: uW, sampleQuantity: grow.sampleQuantity, sampleOnPan: true,
-    });
-    expect(range.maxQuantity).toBeGreaterThan(grow.sampleQuantity);
+    const reach = exactReach({ sampleQuantity: grow.sampleQuantity, averagePieceWeight: grow.sampleNet / grow.sampleQuantity, sampleScale: noise, sampleOnPan: true }, 0.005 ** 2);
+    expect(reach.maxQuantity).toBeGreaterThan(grow.sampleQuantity);
   });
 });

@@ -1,19 +1,21 @@
 /**
- * Growing the sample to refine the APW (COUNTING.md "Growing the sample"):
- * add pieces up to the largest exact quantity, accept the exact count as the new n.
+ * Growing the sample to refine the APW (docs/counting-model.md, "Growing the sample"):
+ * add pieces up to what is within reach, accept the exact count as the new n.
  */
-import { apwRelativeUncertainty } from './apw';
-import { countPieces } from './count';
-import { findExactLimit } from './exact-range';
+import { judgeCount } from './count-judgement';
+import type { CountModel } from './count-variance';
+import { exactReach, planningSpread } from './exact-reach';
+import type { ReadingNoise } from './rounding-covariance';
+import { spreadEstimate, spreadNodes, type SpreadBelief } from './spread-belief';
 
 export interface GrowState {
   /** Current sample size n, all on the pan. */
   sampleQuantity: number;
-  /** Net weight of the current sample, W_s. */
+  /** Net weight of the current sample, W_s (g). */
   sampleNet: number;
-  pieceSpread: number;
-  /** u(W) of one net weight on this scale, same unit as sampleNet. */
-  netWeightUncertainty: number;
+  spread: SpreadBelief;
+  /** The scale's division and repeatability (g). */
+  noise: ReadingNoise;
 }
 
 export interface GrowPlan {
@@ -26,36 +28,22 @@ export interface GrowPlan {
 
 export type GrowStepResult =
   | { accepted: true; sampleQuantity: number; sampleNet: number; averagePieceWeight: number; added: number }
-  | { accepted: false; reason: 'unstable' | 'not_exact' | 'nothing_added'; count: number; expandedUncertainty: number };
+  | { accepted: false; reason: 'unstable' | 'not_exact' | 'nothing_added'; count: number; wholePieceRange: number };
 
-function currentApw(state: GrowState): { apw: number; ur: number } {
-  const apw = state.sampleNet / state.sampleQuantity;
-  const ur = apwRelativeUncertainty({
-    sampleNet: state.sampleNet,
-    sampleQuantity: state.sampleQuantity,
-    pieceSpread: state.pieceSpread,
-    sampleNetUncertainty: state.netWeightUncertainty,
-  });
-  return { apw, ur };
+function modelOf(state: GrowState): CountModel {
+  return { sampleQuantity: state.sampleQuantity, averagePieceWeight: state.sampleNet / state.sampleQuantity, sampleScale: state.noise, sampleOnPan: true };
 }
 
 /**
- * Pieces that may be added safely: the largest M with M + 1/2 ≤ M*, so that any
- * reading which rounds to the planned count is still exact (a plan right at the
- * limit would fail whenever the added pieces happen to weigh a little more).
+ * Pieces that may be added safely: up to the largest pan count within reach, so that a reading
+ * which lands anywhere in its usual spread is still exact. `upTo` caps the pan total (a kit line's
+ * window): growing past what the line needs only means taking pieces off again.
  */
-export function planGrowStep(state: GrowState): GrowPlan {
-  const { apw, ur } = currentApw(state);
-  const root = findExactLimit({
-    averagePieceWeight: apw,
-    apwRelativeUncertainty: ur,
-    pieceSpread: state.pieceSpread,
-    netWeightUncertainty: state.netWeightUncertainty,
-    sampleQuantity: state.sampleQuantity,
-    sampleOnPan: true,
-  });
-  if (root === null) return { maxAdd: 0, maxTotal: state.sampleQuantity, tooLight: true };
-  const maxAdd = Number.isFinite(root) ? Math.max(0, Math.floor(root - 0.5)) : Number.MAX_SAFE_INTEGER;
+export function planGrowStep(state: GrowState, upTo?: number): GrowPlan {
+  const reach = exactReach(modelOf(state), planningSpread(spreadNodes(state.spread)));
+  if (reach.tooLight) return { maxAdd: 0, maxTotal: state.sampleQuantity, tooLight: true };
+  const cap = upTo == null ? reach.maxQuantity : Math.min(reach.maxQuantity, upTo);
+  const maxAdd = Math.max(0, cap - state.sampleQuantity);
   return { maxAdd, maxTotal: state.sampleQuantity + maxAdd, tooLight: false };
 }
 
@@ -64,25 +52,17 @@ export function planGrowStep(state: GrowState): GrowPlan {
  * the accepted count becomes the new n and the pan weight the new W_s.
  */
 export function acceptGrowStep(state: GrowState, panNet: number, stable: boolean): GrowStepResult {
-  const { apw, ur } = currentApw(state);
-  const result = countPieces({
-    bulkNet: panNet,
-    averagePieceWeight: apw,
-    apwRelativeUncertainty: ur,
-    pieceSpread: state.pieceSpread,
-    netWeightUncertainty: state.netWeightUncertainty,
-    sampleQuantity: state.sampleQuantity,
-    sampleOnPan: true,
-  });
-  const rejected = { count: result.count, expandedUncertainty: result.expandedUncertainty };
+  const model = modelOf(state);
+  const judged = judgeCount(model, panNet / model.averagePieceWeight, spreadNodes(state.spread), spreadEstimate(state.spread) ** 2);
+  const rejected = { count: judged.count, wholePieceRange: judged.wholePieceRange };
   if (!stable) return { accepted: false, reason: 'unstable', ...rejected };
-  if (!result.exact) return { accepted: false, reason: 'not_exact', ...rejected };
-  if (result.count <= state.sampleQuantity) return { accepted: false, reason: 'nothing_added', ...rejected };
+  if (!judged.exact) return { accepted: false, reason: 'not_exact', ...rejected };
+  if (judged.count <= state.sampleQuantity) return { accepted: false, reason: 'nothing_added', ...rejected };
   return {
     accepted: true,
-    sampleQuantity: result.count,
+    sampleQuantity: judged.count,
     sampleNet: panNet,
-    averagePieceWeight: panNet / result.count,
-    added: result.count - state.sampleQuantity,
+    averagePieceWeight: panNet / judged.count,
+    added: judged.count - state.sampleQuantity,
   };
 }

@@ -35,3 +35,9 @@ export function roundSignificant(value: number, digits: number): number {
   if (value === 0 || !Number.isFinite(value)) return value;
   return Number(value.toPrecision(digits));
 }
+
+/** Round down to `places` decimals: a probability reported never above the computed one. */
+export function roundDownDecimals(value: number, places: number): number {
+  const factor = 10 ** places;
+  return Math.floor(value * factor + 1e-9) / factor;
+}

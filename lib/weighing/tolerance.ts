@@ -1,5 +1,4 @@
-/** Kit line verdict against its tolerance window (COUNTING.md "Kit line tolerance"). */
-import { toWholePieces } from './count';
+/** Kit line verdict against its tolerance window (docs/counting-model.md, "Kit lines"). */
 
 export interface ToleranceWindow {
   target: number;
@@ -12,20 +11,28 @@ export interface ToleranceWindow {
 export type ToleranceVerdict = 'in' | 'uncertain' | 'out';
 
 export interface CountedLine {
-  /** round(N̂). */
+  /** The counted pieces. */
   count: number;
-  expandedUncertainty: number;
+  /** ± whole pieces at 95 %; 0 exactly when the count is exact. */
+  wholePieceRange: number;
 }
 
 /**
- * 'in' when the whole interval round(N̂) ± U lies in [target − below, target + above],
- * 'uncertain' when only round(N̂) does, 'out' otherwise. Counts are whole pieces, so U
- * is taken as whole pieces (toWholePieces): 0 exactly when the count is exact (U < 0.5).
+ * 'in' when the whole range count ± wholePieceRange lies in [target − below, target + above],
+ * 'uncertain' when only the count does, 'out' otherwise.
  */
 export function judgeKitLine(line: CountedLine, window: ToleranceWindow): ToleranceVerdict {
   const low = window.target - window.below;
   const high = window.target + window.above;
   if (line.count < low || line.count > high) return 'out';
-  const spread = toWholePieces(line.expandedUncertainty);
+  const spread = line.wholePieceRange;
   return line.count - spread >= low && line.count + spread <= high ? 'in' : 'uncertain';
+}
+
+/**
+ * U as whole pieces, half up, at least 1: for counts recorded before a range was kept with them,
+ * and for sums of non-exact counts (if |N̂ − N| < U then |round(N̂) − N| ≤ round(U)).
+ */
+export function toWholePieces(expandedUncertainty: number): number {
+  return Math.max(1, Math.floor(Math.max(0, expandedUncertainty) + 0.5));
 }

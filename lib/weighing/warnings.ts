@@ -7,6 +7,8 @@ export const WARNING_CODES = [
   'sample_too_small',
   'over_capacity',
   'cv_assumed',
+  'single_piece_not_resolved',
+  'not_whole_pieces',
   'unstable',
   'scale_locked',
 ] as const;
@@ -54,6 +56,16 @@ export const WARNING_TEXT: Readonly<Record<WarningCode, WarningText>> = {
     short: 'spread assumed',
     message: 'How much single pieces vary is not yet known for this part, so a typical value was used.',
     remedy: 'Build a sample piece by piece a few times so the app learns this part.',
+  },
+  single_piece_not_resolved: {
+    short: 'one piece not resolved',
+    message: 'On this scale not even one piece can be told apart from the weighing noise, so no count here is exact.',
+    remedy: 'Use a scale with a finer division, or count these parts by hand.',
+  },
+  not_whole_pieces: {
+    short: 'not whole pieces',
+    message: 'The weight fits no whole number of these pieces: something else may be on the pan, a wrong part, or a tare that went wrong.',
+    remedy: 'Check the pan and the part, tare again, and count once more.',
   },
   unstable: {
     short: 'unstable',

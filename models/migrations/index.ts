@@ -4,6 +4,7 @@ import * as m0003 from './0003-kits-orders-stock';
 import * as m0004 from './0004-quality';
 import * as m0005 from './0005-bin-counts';
 import * as m0006 from './0006-print-jobs';
+import * as m0007 from './0007-exact-counts';
 
 // Ordered list of migrations. Add a file `NNNN-what-it-does.ts` exporting up/down and list it here.
 export const migrations = [
@@ -13,4 +14,5 @@ export const migrations = [
   { name: '0004-quality', ...m0004 },
   { name: '0005-bin-counts', ...m0005 },
   { name: '0006-print-jobs', ...m0006 },
+  { name: '0007-exact-counts', ...m0007 },
 ];

@@ -47,6 +47,7 @@ export interface AuditItemDto {
   countedAt: string;
   count: number;
   expandedUncertainty: number;
+  wholePieceRange: number;
   exact: boolean;
   handCount: number | null;
   error: number | null;

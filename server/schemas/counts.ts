@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { COUNT_PURPOSES, type CountPurpose } from '@/models/columns';
 import type { CountingWarning } from '@/lib/weighing';
 import { pagingSchema, recordIdSchema } from './common';
-import { nonNegativeNumber, positiveNumber, unitSchema, wholeCount } from './weights';
+import { nonNegativeNumber, positiveNumber, unitSchema, weightReading, wholeCount } from './weights';
 
 // Chosen by the client once per capture and reused on every retry of it.
 export const idempotencyKeySchema = z
@@ -19,7 +19,8 @@ export const recordCountSchema = z.object({
   containerId: wholeCount('Container').nullish(),
   unit: unitSchema.default('g'),
   gross: nonNegativeNumber('Gross weight'),
-  tare: nonNegativeNumber('Tare'),
+  // May sit a division or so below zero (an empty pan tared after drift); the service decides.
+  tare: weightReading('Tare'),
   sample: z.object({ quantity: wholeCount('Sample quantity'), netWeight: positiveNumber('Sample net weight') }, { error: 'sample is required: { quantity, netWeight }' }),
   sampleOnPan: z.boolean().default(true),
   targetQuantity: wholeCount('Target quantity').nullish(),
@@ -73,6 +74,7 @@ export interface CountLogRow {
   averagePieceWeight: number;
   count: number;
   expandedUncertainty: number;
+  wholePieceRange: number;
   exact: boolean;
   targetQuantity: number | null;
   warnings: CountingWarning['code'][];
@@ -97,8 +99,12 @@ export interface CountEventDto {
   count: number;
   standardUncertainty: number;
   expandedUncertainty: number;
-  coverageFactor: 2;
+  coverageFactor: number;
   exact: boolean;
+  /** Chance that `count` is the true count; null for captures recorded before it was kept. */
+  probabilityExact: number | null;
+  /** ± whole pieces at 95 %: 0 exactly when exact. */
+  wholePieceRange: number;
   targetQuantity: number | null;
   warnings: CountingWarning[];
   operatorId: number;

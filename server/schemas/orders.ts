@@ -34,6 +34,8 @@ export interface OrderLineDto {
   toleranceAbove: number;
   counted: number;
   expandedUncertainty: number;
+  /** ± whole pieces at 95 %; 0 when every capture was exact. */
+  wholePieceRange: number;
   captures: number;
   verdict: LineVerdict;
 }

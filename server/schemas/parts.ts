@@ -1,6 +1,7 @@
 import { z } from 'zod';
-import { COUNTING_METHODS, type CountingMethod } from '@/models/columns';
-import { pagingSchema, requiredText, versionSchema } from './common';
+import type { SpreadBelief } from '@/lib/weighing/spread-belief';
+import { COUNTING_METHODS, type CountingMethod, type SampleStatus } from '@/models/columns';
+import { pagingSchema, recordIdSchema, requiredText, versionSchema } from './common';
 import { positiveNumber, unitSchema, wholeCount } from './weights';
 
 // Part numbers: letters, digits and . _ - / ; stored upper-case so scans match however typed.
@@ -42,6 +43,12 @@ export const recordSampleSchema = z.object({
 });
 export type RecordSampleInput = z.infer<typeof recordSampleSchema>;
 
+export const sampleDecisionSchema = z.object({
+  decision: z.enum(['accept', 'reject'], { error: 'Decision must be accept or reject' }),
+});
+export type SampleDecisionInput = z.infer<typeof sampleDecisionSchema>;
+export const sampleDecisionParamsSchema = z.object({ id: recordIdSchema, sampleId: recordIdSchema });
+
 export interface PartDto {
   id: number;
   partNumber: string;
@@ -53,6 +60,10 @@ export interface PartDto {
   pieceSpread: number | null;
   spreadLearned: boolean;
   spreadObservations: number;
+  /** Degrees of freedom of the learned spread; null until learned. */
+  spreadDegreesOfFreedom: number | null;
+  /** The learned spread as the counting core takes it; null until learned. */
+  spreadBelief: SpreadBelief | null;
   hasPhoto: boolean;
   version: number;
   updatedAt: string;
@@ -67,6 +78,11 @@ export interface SampleDto {
   netWeight: number;
   averagePieceWeight: number;
   pieceByPiece: boolean;
+  /** held: far from the part's history, waiting for quality or a planner; it teaches the part nothing until accepted. */
+  status: SampleStatus;
+  holdReason: string | null;
+  decidedBy: number | null;
+  decidedAt: string | null;
   createdBy: number;
   createdAt: string;
 }

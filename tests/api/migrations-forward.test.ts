@@ -43,6 +43,10 @@ const ERA_ROWS: Record<string, (q: QueryInterface) => Promise<void>> = {
   '0006-print-jobs': async (q) => {
     await q.bulkInsert('print_jobs', [{ id: 901, batch_id: '00000000-0000-4000-8000-000000000901', batch_index: 0, batch_count: 1, template: 'bin', stock: '50x25', item_ids: '[901]', labels: 1, printer_url: 'ipp://127.0.0.1:631/printers/bench', status: 'sent', pages: 1, bytes: 900, printer_job_id: 7, error: null, requested_by: 901, sent_at: now, ...stamps }]);
   },
+  '0007-exact-counts': async (q) => {
+    await q.bulkInsert('piece_weight_samples', [{ id: 901, part_id: 901, scale_id: 901, quantity: 25, net_weight_g: 13.1, apw_g: 0.524, increments_g: null, created_by: 901, status: 'held', hold_reason: 'far from history', net_variance_g2: 0.0025, decided_by: null, decided_at: null, ...stamps }]);
+    await q.bulkUpdate('parts', { spread_scatter: 0.0004, spread_noise: 0.00001, spread_dof: 24 }, { id: 901 });
+  },
 };
 
 describe('migrations on an existing database with data', () => {

@@ -23,6 +23,7 @@ const binEditors: Role[] = ['clerk', 'admin'];
 const planners: Role[] = ['planner', 'admin'];
 const quality: Role[] = ['quality', 'admin'];
 const printers: Role[] = ['planner', 'clerk', 'admin'];
+const deciders: Role[] = ['planner', 'quality', 'admin'];
 
 // Every route handler, and who may call it. Add each new route here (see DEVELOPERS.md).
 const MATRIX: Entry[] = [
@@ -54,6 +55,7 @@ const MATRIX: Entry[] = [
   { method: 'PATCH', route: '/api/v1/parts/[id]', allowed: partEditors, path: '/api/v1/parts/999999', body: {} },
   { method: 'GET', route: '/api/v1/parts/[id]/samples', allowed: everyone, path: '/api/v1/parts/999999/samples' },
   { method: 'POST', route: '/api/v1/parts/[id]/samples', allowed: capture, path: '/api/v1/parts/999999/samples', body: {} },
+  { method: 'POST', route: '/api/v1/parts/[id]/samples/[sampleId]/decision', allowed: deciders, path: '/api/v1/parts/999999/samples/999999/decision', body: {} },
   { method: 'GET', route: '/api/v1/counts', allowed: everyone },
   { method: 'POST', route: '/api/v1/counts', allowed: capture, body: {} },
   { method: 'GET', route: '/api/v1/counts/export', allowed: everyone },

@@ -4,8 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { createRandom } from '../../lib/scale/prng';
-import { apwRelativeUncertainty } from '../../lib/weighing/apw';
-import { countVariance } from '../../lib/weighing/count';
+import { countVariance } from '../../lib/weighing/count-variance';
 import { roundToStep } from '../../lib/weighing/round';
 import { indicationVariance, netWeightUncertainty, rectangularUncertainty, resolutionUncertainty } from '../../lib/weighing/uncertainty';
 
@@ -56,33 +55,35 @@ describe('JCGM 100:2008 and NIST TN 1297', () => {
   });
 
   // GUM 5.1.2 over the independent inputs — three indications I_0, I_s, I_b (each d²/12 + s_r²)
-  // and the piece sums S (n pieces) and A (the M changed) — must equal countVariance, which
-  // states the same thing with correlated net weights (GUM 5.2.2). Sensitivities by central
-  // differences, so this check does not share the algebra it is checking; the simulated scatter
-  // is compared in count-coverage-monte-carlo.test.ts.
+  // and the piece sums — must equal countVariance, which states the same thing with correlated
+  // net weights (GUM 5.2.2). Sensitivities by central differences, so this check does not share the
+  // algebra it is checking. s_r = d/2 makes rounding errors independent (their dependence on a
+  // quiet scale is checked in rounding-covariance.test.ts), so the two agree to about 1e-5.
   it('equals the law of propagation over the separate indications, with a shared or own zero', () => {
     const d = 0.1;
     const sr = 0.05;
     const apw = 0.6;
     const noise = indicationVariance({ division: d, repeatability: sr });
-    const uW = netWeightUncertainty({ division: d, repeatability: sr });
-    // Pieces taken off come out of the sample itself, which the model does not credit (it stays
-    // conservative there), so that row compares the weighing part alone (c = 0).
     for (const { n, change, onPan, c } of [
       { n: 25, change: 25, onPan: true, c: 0.01 },
       { n: 10, change: 40, onPan: true, c: 0.01 },
-      { n: 50, change: -20, onPan: true, c: 0 },
+      { n: 50, change: -20, onPan: true, c: 0.01 },
       { n: 25, change: 60, onPan: false, c: 0.01 },
     ]) {
-      // x = [I_0, I_s, J_0, I_b, S, A]; J_0 is the bulk's own zero, apart only (variance 0 on the pan).
+      // x = [I_0, I_s, J_0, I_b, K, A]: J_0 is the bulk's own zero (apart only). Pieces added: K the
+      // sample's n pieces, A the M added. Taken off: K the n − M that stay, A the M taken off
+      // (they were part of the sample). Apart: K the sample, A the N fresh pieces.
+      const takenOff = change < 0;
+      const m = Math.abs(change);
       const count = (x: number[]): number => {
-        const [i0, is, j0, ib, s, a] = x;
-        const sampleNet = s + is - i0;
-        const load = onPan ? s + a + ib - i0 : a + ib - j0;
+        const [i0, is, j0, ib, k, a] = x;
+        const sampleNet = (takenOff ? k + a : k) + is - i0;
+        const load = onPan ? (takenOff ? k : k + a) + ib - i0 : a + ib - j0;
         return (n * load) / sampleNet;
       };
-      const nominal = [0, 0, 0, 0, n * apw, change * apw];
-      const variances = [noise, noise, onPan ? 0 : noise, noise, n * (c * apw) ** 2, Math.abs(change) * (c * apw) ** 2];
+      const kept = takenOff ? n - m : n;
+      const nominal = [0, 0, 0, 0, kept * apw, m * apw];
+      const variances = [noise, noise, onPan ? 0 : noise, noise, kept * (c * apw) ** 2, m * (c * apw) ** 2];
       let gum = 0;
       nominal.forEach((_, i) => {
         const h = 1e-6;
@@ -90,13 +91,9 @@ describe('JCGM 100:2008 and NIST TN 1297', () => {
         const down = nominal.map((v, j) => (j === i ? v - h : v));
         gum += ((count(up) - count(down)) / (2 * h)) ** 2 * variances[i];
       });
-      const m = onPan ? Math.abs(change) : change;
-      const ur = apwRelativeUncertainty({ sampleNet: n * apw, sampleQuantity: n, pieceSpread: c, sampleNetUncertainty: uW });
-      const model = countVariance({
-        uncertainPieces: m, pieceSpread: c, apwRelativeUncertainty: ur, netWeightUncertainty: uW, averagePieceWeight: apw,
-        sharedZero: onPan ? { sampleQuantity: n, piecesTakenOff: change < 0 } : null,
-      });
-      expect(model / gum, `n=${n} change=${change} onPan=${onPan}`).toBeCloseTo(1, 6);
+      const trueCount = onPan ? n + change : change;
+      const model = countVariance({ sampleQuantity: n, averagePieceWeight: apw, sampleScale: { division: d, repeatability: sr }, sampleOnPan: onPan }, trueCount, c * c);
+      expect(model / gum, `n=${n} change=${change} onPan=${onPan}`).toBeCloseTo(1, 4);
     }
   });
 });

@@ -18,7 +18,7 @@ const columns: ColDef<CountLogRow>[] = [
     cellRenderer: (p: ICellRendererParams<CountLogRow>) =>
       p.data ? (
         <span className="num">
-          {p.data.count} <span className="text-ink-faint">± {p.data.expandedUncertainty.toFixed(2)}</span>
+          {p.data.count} <span className="text-ink-faint">{p.data.exact ? 'exact' : `± ${p.data.wholePieceRange}`}</span>
         </span>
       ) : null,
   },

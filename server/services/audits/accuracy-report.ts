@@ -2,6 +2,7 @@ import 'server-only';
 import { Op } from 'sequelize';
 import { AuditItem, CountEvent, Part, Scale, User } from '@/models';
 import { judgeAuditItem } from '@/lib/sampling/judge-audit';
+import { wholePieceRangeOf } from '../counting/count-event-dto';
 import { getDb } from '../../db';
 
 export type ReportGrouping = 'part' | 'operator' | 'scale' | 'week';
@@ -48,7 +49,7 @@ export async function accuracyReport({ from, to, by }: { from: string; to: strin
     const e = (item as AuditItem & { event: CountEvent & { part: Part; scale: Scale; operator: User } }).event;
     const [key, label] =
       by === 'part' ? [String(e.partId), e.part.partNumber] : by === 'scale' ? [String(e.scaleId), e.scale.name] : by === 'operator' ? [String(e.operatorId), e.operator.name] : [isoWeek(e.createdAt), isoWeek(e.createdAt)];
-    const judged = judgeAuditItem({ count: e.count, expandedUncertainty: Number(e.expandedUncertainty), exact: e.exact, handCount: item.handCount! });
+    const judged = judgeAuditItem({ count: e.count, wholePieceRange: wholePieceRangeOf(e), exact: e.exact, handCount: item.handCount! });
     const group = groups.get(key) ?? { label, rows: [] };
     group.rows.push({ ...judged, hand: item.handCount! });
     groups.set(key, group);

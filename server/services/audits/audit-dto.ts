@@ -2,6 +2,7 @@ import 'server-only';
 import type { Audit, AuditItem, CountEvent, Part } from '@/models';
 import { judgeAuditItem } from '@/lib/sampling/judge-audit';
 import type { AuditDto, AuditItemDto, Population } from '../../schemas/audits';
+import { wholePieceRangeOf } from '../counting/count-event-dto';
 
 type LoadedItem = AuditItem & { event?: CountEvent & { part?: Part } };
 
@@ -9,7 +10,7 @@ export const AUDIT_INCLUDE = [{ association: 'items', include: [{ association: '
 
 export function toAuditItemDto(item: LoadedItem): AuditItemDto {
   const e = item.event!;
-  const base = { count: e.count, expandedUncertainty: Number(e.expandedUncertainty), exact: e.exact };
+  const base = { count: e.count, expandedUncertainty: Number(e.expandedUncertainty), wholePieceRange: wholePieceRangeOf(e), exact: e.exact };
   const judged = item.handCount === null ? null : judgeAuditItem({ ...base, handCount: item.handCount });
   return {
     id: item.id,

@@ -1,6 +1,7 @@
 import 'server-only';
 import { Audit, AuditItem, CountEvent, User } from '@/models';
 import { judgeAuditItem, judgeLot } from '@/lib/sampling/judge-audit';
+import { wholePieceRangeOf } from '../counting/count-event-dto';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
@@ -24,7 +25,7 @@ export async function recordHandCount({ auditId, itemId, handCount, by }: { audi
     if (items.some((i) => i.handCount === null)) return null;
     const defects = items.filter((i) => {
       const e = (i as AuditItem & { event: CountEvent }).event;
-      return !judgeAuditItem({ count: e.count, expandedUncertainty: Number(e.expandedUncertainty), exact: e.exact, handCount: i.handCount! }).withinUncertainty;
+      return !judgeAuditItem({ count: e.count, wholePieceRange: wholePieceRangeOf(e), exact: e.exact, handCount: i.handCount! }).withinUncertainty;
     }).length;
     audit.set({ status: 'closed', defects, verdict: judgeLot(defects, audit.accept), closedAt: new Date() });
     await audit.save({ transaction });

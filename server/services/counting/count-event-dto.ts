@@ -1,7 +1,13 @@
 import 'server-only';
 import type { CountEvent } from '@/models';
-import type { CountingWarning } from '@/lib/weighing';
+import { toWholePieces, type CountingWarning } from '@/lib/weighing';
 import type { CountEventDto } from '../../schemas/counts';
+
+// Captures from before the range was kept: exact ones are 0, others U in whole pieces.
+export function wholePieceRangeOf(e: Pick<CountEvent, 'wholePieceRange' | 'exact' | 'expandedUncertainty'>): number {
+  if (e.wholePieceRange != null) return e.wholePieceRange;
+  return e.exact ? 0 : toWholePieces(Number(e.expandedUncertainty));
+}
 
 export function toCountEventDto(e: CountEvent): CountEventDto {
   return {
@@ -25,6 +31,8 @@ export function toCountEventDto(e: CountEvent): CountEventDto {
     expandedUncertainty: Number(e.expandedUncertainty),
     coverageFactor: 2,
     exact: e.exact,
+    probabilityExact: e.probabilityExact == null ? null : Number(e.probabilityExact),
+    wholePieceRange: wholePieceRangeOf(e),
     targetQuantity: e.targetQuantity,
     warnings: e.warnings as CountingWarning[],
     operatorId: e.operatorId,

@@ -5,6 +5,7 @@ import type { WarningCode } from '@/lib/weighing/warnings';
 import { getDb } from '../../db';
 import type { CountLogQuery, CountLogRow } from '../../schemas/counts';
 import { countEventWhere } from './count-event-filter';
+import { wholePieceRangeOf } from './count-event-dto';
 
 export const COUNT_LOG_PAGE_SIZE = 100;
 const EXPORT_LIMIT = 50_000;
@@ -49,6 +50,7 @@ function toRow(e: Loaded): CountLogRow {
     averagePieceWeight: Number(e.apwG),
     count: e.count,
     expandedUncertainty: Number(e.expandedUncertainty),
+    wholePieceRange: wholePieceRangeOf(e),
     exact: e.exact,
     targetQuantity: e.targetQuantity,
     warnings: (e.warnings as { code: WarningCode }[]).map((w) => w.code),
@@ -63,7 +65,7 @@ export async function countLog(query: CountLogQuery): Promise<{ rows: CountLogRo
   return { rows: (rows as Loaded[]).map(toRow), total: count, page, pageSize: COUNT_LOG_PAGE_SIZE };
 }
 
-const HEADER = ['counted_at_utc', 'purpose', 'part_number', 'description', 'scale', 'counted_by', 'order', 'bin', 'net_g', 'sample_pcs', 'apw_g', 'count', 'expanded_uncertainty_pcs_k2', 'exact', 'target', 'warnings'];
+const HEADER = ['counted_at_utc', 'purpose', 'part_number', 'description', 'scale', 'counted_by', 'order', 'bin', 'net_g', 'sample_pcs', 'apw_g', 'count', 'plus_minus_pcs', 'expanded_uncertainty_pcs_k2', 'exact', 'target', 'warnings'];
 
 // The same filters as the page, every page at once (up to 50 000 rows); warnings as their stable codes.
 export async function countLogTable(query: CountLogQuery): Promise<{ header: readonly string[]; rows: unknown[][] }> {
@@ -82,6 +84,7 @@ export async function countLogTable(query: CountLogQuery): Promise<{ header: rea
     r.sampleQuantity,
     r.averagePieceWeight,
     r.count,
+    r.wholePieceRange,
     r.expandedUncertainty,
     r.exact ? 'yes' : 'no',
     r.targetQuantity ?? '',

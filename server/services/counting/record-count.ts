@@ -4,7 +4,7 @@ import { UniqueConstraintError } from 'sequelize';
 import { Container, CountEvent, Part } from '@/models';
 import { binCountFor } from '../bins/bin-count-for';
 import { lineProgress } from '../orders/line-progress';
-import { estimateCount } from '@/lib/weighing';
+import { assessCount } from '@/lib/weighing';
 import { toGrams } from '@/lib/weighing/units';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
@@ -15,6 +15,7 @@ import type { CountEventDto, RecordCountInput } from '../../schemas/counts';
 import { applyBinCount, type BinCountResult } from '../bins/apply-bin-count';
 import { notifyPendingVariance } from '../bins/notify-pending-variance';
 import { applyCountToLine, type LineProgress } from '../orders/apply-count-to-line';
+import { partSpreadBelief } from '../parts/part-spread-belief';
 import { loadUsableScale, scaleNoise } from '../scales/usable-scale';
 import { getSettings } from '../settings/get-settings';
 import { toCountEventDto } from './count-event-dto';
@@ -59,29 +60,29 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
       const scale = await loadUsableScale(input.scaleId, transaction);
       await lockCountTarget(input, transaction);
       const g = (v: number) => toGrams(v, input.unit);
+      const noise = scaleNoise(scale);
       const gross = g(input.gross);
-      const tare = g(input.tare);
+      const tare = acceptedTare(g(input.tare), noise.division);
       const net = gross - tare;
       const sampleNet = g(input.sample.netWeight);
       const capacity = Number(scale.capacityG);
       if (!input.stable) throw new AppError('unstable', 'The reading was still moving; wait until it settles and capture again');
       if (gross > capacity) throw new AppError('over_capacity', `The load is above the scale's capacity (${capacity} g); the reading cannot be used`);
       if (net <= 0) throw new AppError('validation_failed', 'Nothing to count', { fields: { gross: 'gross must be larger than tare' } });
-      const noise = scaleNoise(scale);
       if (input.sampleOnPan && sampleNet > net + noise.division) {
         throw new AppError('validation_failed', 'Some fields need attention', { fields: { 'sample.netWeight': 'the sample cannot weigh more than the whole pan when it stays on it' } });
       }
-      const result = estimateCount(
+      const { result, share } = assessCount(
         {
           unit: 'g',
           scale: { ...noise, max: capacity, min: Number(scale.minLoadG) },
           sample: { quantity: input.sample.quantity, netWeight: sampleNet },
           netWeight: net,
           sampleOnPan: input.sampleOnPan,
-          pieceSpread: part.pieceSpread === null ? undefined : Number(part.pieceSpread),
           targetQuantity: input.targetQuantity ?? undefined,
+          tare,
         },
-        { defaultPieceSpread },
+        { defaultPieceSpread, spread: partSpreadBelief(part) },
       );
       const event = await CountEvent.create(
         {
@@ -98,12 +99,16 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
           sampleNetG: String(sampleNet),
           sampleOnPan: input.sampleOnPan,
           apwG: String(result.averagePieceWeight),
-          pieceSpread: String(part.pieceSpread ?? defaultPieceSpread),
+          pieceSpread: String(result.pieceSpread.value),
           countRaw: String(result.countRaw),
           count: result.count,
           standardUncertainty: String(result.standardUncertainty),
           expandedUncertainty: String(result.expandedUncertainty),
           exact: result.exact,
+          probabilityExact: String(result.probabilityExact),
+          wholePieceRange: result.wholePieceRange,
+          uncertainPieces: String(Math.round(share.uncertainPieces * 1e4) / 1e4),
+          apwRelativeVariance: share.apwRelativeVariance,
           targetQuantity: input.targetQuantity ?? null,
           warnings: result.warnings,
           operatorId: by.id,
@@ -113,7 +118,7 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
         { transaction },
       );
       const line = input.orderLineId
-        ? await applyCountToLine({ orderLineId: input.orderLineId, partId: part.id, count: result.count, standardUncertainty: result.standardUncertainty }, transaction)
+        ? await applyCountToLine({ orderLineId: input.orderLineId, partId: part.id, count: result.count }, transaction)
         : null;
       const binCount = input.binId
         ? await applyBinCount(
@@ -134,6 +139,16 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
   // The count stands whatever happens to the notice; a failed one is in the log and the outbox.
   if (answer.binCount?.status === 'pending') await notifyPendingVariance(answer.binCount, by).catch((err) => log.error({ err }, 'variance notice failed'));
   return answer;
+}
+
+// An empty pan tared a hair below zero (−0.0048 g on a 0.001 g scale) is zero: within one division
+// the tare is rounding and drift, not a container. Further below zero the scale needs zeroing.
+function acceptedTare(tare: number, division: number): number {
+  if (tare >= 0) return tare;
+  if (tare >= -division) return 0;
+  throw new AppError('validation_failed', 'Some fields need attention', {
+    fields: { tare: `The tare is ${Number((-tare).toPrecision(3))} g below zero, more than one division: empty the pan, zero the scale and tare again` },
+  });
 }
 
 async function replay(event: CountEvent, requestHash: string): Promise<CountAnswer> {

@@ -1,8 +1,8 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
-import { BuildOrder, BuildOrderLine } from '@/models';
+import { BuildOrder, BuildOrderLine, CountEvent } from '@/models';
 import { AppError } from '../../errors';
-import { lineUncertainty, lineVerdict } from './line-verdict';
+import { lineTotal, lineUncertainty, lineVerdict } from './line-verdict';
 
 export interface LineProgress {
   id: number;
@@ -10,13 +10,15 @@ export interface LineProgress {
   required: number;
   counted: number;
   expandedUncertainty: number;
+  wholePieceRange: number;
   verdict: string;
 }
 
-// Adds one capture to a build-order line inside the capture's transaction, and moves a
-// released order to in progress. The line row is locked so parallel captures add up.
+// Adds one capture (already written, in this transaction) to a build-order line, and moves a
+// released order to in progress. The line row is locked so parallel captures add up; the line's
+// uncertainty is recomputed from all its captures, so a shared APW is counted once.
 export async function applyCountToLine(
-  opts: { orderLineId: number; partId: number; count: number; standardUncertainty: number },
+  opts: { orderLineId: number; partId: number; count: number },
   transaction: Transaction,
 ): Promise<LineProgress> {
   const line = await BuildOrderLine.findByPk(opts.orderLineId, { transaction, lock: transaction.LOCK.UPDATE });
@@ -32,15 +34,17 @@ export async function applyCountToLine(
       fields: { orderLineId: 'already counted in full' },
     });
   }
-  const varianceSum = Number(line.varianceSum) + opts.standardUncertainty ** 2;
+  const total = lineTotal(await CountEvent.findAll({ where: { orderLineId: line.id }, transaction }));
+  const varianceSum = total.standardUncertainty ** 2;
   line.counted += opts.count;
   line.captures += 1;
   line.varianceSum = String(varianceSum);
-  line.verdict = lineVerdict({ ...line.get(), varianceSum, counted: line.counted, captures: line.captures });
+  line.wholePieceRange = total.wholePieceRange;
+  line.verdict = lineVerdict({ ...line.get(), counted: line.counted, captures: line.captures, wholePieceRange: total.wholePieceRange });
   await line.save({ transaction });
   if (order.status === 'released') {
     order.status = 'in_progress';
     await order.save({ transaction });
   }
-  return { id: line.id, orderId: line.orderId, required: line.required, counted: line.counted, expandedUncertainty: lineUncertainty(varianceSum), verdict: line.verdict };
+  return { id: line.id, orderId: line.orderId, required: line.required, counted: line.counted, expandedUncertainty: lineUncertainty(varianceSum), wholePieceRange: line.wholePieceRange, verdict: line.verdict };
 }

@@ -19,6 +19,7 @@ export interface QueueLine {
   toleranceBelow: number;
   toleranceAbove: number;
   expandedUncertainty: number;
+  wholePieceRange: number;
   verdict: string;
 }
 
@@ -28,7 +29,7 @@ export interface QueueLine {
 export async function kittingQueue(): Promise<QueueLine[]> {
   const rows = await getDb().query<Record<string, unknown>>(
     `SELECT l.id AS order_line_id, o.id AS order_id, o.number, k.code, k.revision, o.due_date, p.id AS part_id, p.part_number, p.description,
-            l.required, l.counted, l.tolerance_below, l.tolerance_above, l.variance_sum, l.verdict
+            l.required, l.counted, l.tolerance_below, l.tolerance_above, l.variance_sum, l.whole_piece_range, l.verdict
        FROM build_order_lines l
        JOIN build_orders o ON o.id = l.order_id
        JOIN kits k ON k.id = o.kit_id
@@ -54,6 +55,7 @@ export async function kittingQueue(): Promise<QueueLine[]> {
     toleranceBelow: Number(r.tolerance_below),
     toleranceAbove: Number(r.tolerance_above),
     expandedUncertainty: lineUncertainty(Number(r.variance_sum)),
+    wholePieceRange: Number(r.whole_piece_range),
     verdict: String(r.verdict),
   }));
 }

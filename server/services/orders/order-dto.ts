@@ -19,6 +19,7 @@ function toLineDto(l: BuildOrderLine & { part?: Part }): OrderLineDto {
     toleranceAbove: l.toleranceAbove,
     counted: l.counted,
     expandedUncertainty: lineUncertainty(Number(l.varianceSum)),
+    wholePieceRange: l.wholePieceRange,
     captures: l.captures,
     verdict: l.verdict,
   };

@@ -1,22 +1,28 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
-import { PieceWeightSample } from '@/models';
-import { spreadFromIncrements, spreadFromSamples, type SpreadEstimate } from '@/lib/weighing';
+import { PieceWeightSample, Scale } from '@/models';
+import { poolSpreads, spreadFromIncrements, spreadFromSamples, type SpreadBelief } from '@/lib/weighing';
+import { scaleNoise } from '../scales/usable-scale';
 
-// How much history the estimate looks at: recent enough to follow lot changes (our choice).
-const RECENT_SAMPLES = 20;
-const MAX_INCREMENTS = 1000;
+// How much history the spread looks at: recent enough to follow lot changes (our choice).
+const RECENT_SAMPLES = 50;
 
-// Piece-by-piece increments measure c directly and win when there are enough of them;
-// otherwise the spread of APWs across recent samples is used. Null when neither has enough.
-export async function learnPieceSpread(partId: number, netWeightUncertainty: number, transaction: Transaction): Promise<SpreadEstimate | null> {
-  const recent = await PieceWeightSample.findAll({ where: { partId }, order: [['id', 'DESC']], limit: RECENT_SAMPLES, transaction });
-  const increments = recent.flatMap((s) => s.incrementsG ?? []).slice(0, MAX_INCREMENTS);
-  const fromIncrements = spreadFromIncrements(increments, netWeightUncertainty);
-  if (fromIncrements.enough) return fromIncrements;
-  const fromSamples = spreadFromSamples(
-    recent.map((s) => ({ quantity: s.quantity, averagePieceWeight: Number(s.apwG) })),
-    netWeightUncertainty,
+// Samples built piece by piece measure c directly; their beliefs pool, degrees of freedom adding
+// up. Without any, the spread of APWs across accepted samples is used. Held or rejected samples
+// teach nothing. Null when there is not yet anything to learn from.
+export async function learnPieceSpread(partId: number, transaction: Transaction): Promise<SpreadBelief | null> {
+  const recent = await PieceWeightSample.findAll({ where: { partId, status: 'accepted' }, order: [['id', 'DESC']], limit: RECENT_SAMPLES, transaction });
+  const scaleIds = [...new Set(recent.map((s) => s.scaleId))];
+  const scales = new Map((await Scale.findAll({ where: { id: scaleIds }, transaction })).map((s) => [s.id, scaleNoise(s)]));
+  const fromIncrements = poolSpreads(
+    recent.flatMap((s) => {
+      const noise = scales.get(s.scaleId);
+      const belief = noise && s.incrementsG ? spreadFromIncrements(s.incrementsG, noise) : null;
+      return belief ? [belief] : [];
+    }),
   );
-  return fromSamples.enough ? fromSamples : null;
+  if (fromIncrements) return fromIncrements;
+  return spreadFromSamples(
+    recent.map((s) => ({ quantity: s.quantity, averagePieceWeight: Number(s.apwG), netVariance: s.netVarianceG2 ?? 0 })),
+  );
 }

@@ -1,8 +1,10 @@
 import 'server-only';
 import type { Part, PieceWeightSample } from '@/models';
 import type { PartDto, SampleDto } from '../../schemas/parts';
+import { partSpreadBelief } from './part-spread-belief';
 
 export function toPartDto(p: Part): PartDto {
+  const belief = partSpreadBelief(p);
   return {
     id: p.id,
     partNumber: p.partNumber,
@@ -14,6 +16,8 @@ export function toPartDto(p: Part): PartDto {
     pieceSpread: p.pieceSpread === null ? null : Number(p.pieceSpread),
     spreadLearned: p.pieceSpread !== null,
     spreadObservations: p.spreadObservations,
+    spreadDegreesOfFreedom: belief?.kind === 'learned' ? belief.degreesOfFreedom : null,
+    spreadBelief: belief,
     hasPhoto: Boolean(p.photoFile),
     version: p.version,
     updatedAt: p.updatedAt.toISOString(),
@@ -30,6 +34,10 @@ export function toSampleDto(s: PieceWeightSample): SampleDto {
     netWeight: Number(s.netWeightG),
     averagePieceWeight: Number(s.apwG),
     pieceByPiece: Array.isArray(s.incrementsG) && s.incrementsG.length > 0,
+    status: s.status,
+    holdReason: s.holdReason,
+    decidedBy: s.decidedBy,
+    decidedAt: s.decidedAt ? s.decidedAt.toISOString() : null,
     createdBy: s.createdBy,
     createdAt: s.createdAt.toISOString(),
   };

@@ -4,8 +4,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { ReadingSource } from '@/lib/scale/reading';
 import { acceptGrowStep } from '@/lib/weighing/grow-sample';
 import { judgeKitLine } from '@/lib/weighing/tolerance';
-import { netWeightUncertainty } from '@/lib/weighing/uncertainty';
-import { DEFAULT_PIECE_SPREAD } from '@/lib/weighing/piece-spread';
+import type { SpreadBelief } from '@/lib/weighing/spread-belief';
 import { describeWarning, type WarningCode } from '@/lib/weighing/warnings';
 import type { ContainerDto } from '@/server/schemas/containers';
 import type { CountEventDto } from '@/server/schemas/counts';
@@ -73,14 +72,16 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
     () => (scale ? { division: scale.division, repeatability: scale.repeatability ?? 0, capacity: scale.capacity, minLoad: scale.minLoad } : null),
     [scale],
   );
-  const spread = part?.spreadLearned ? part.pieceSpread : null;
+  const spread = part?.spreadBelief ?? null;
+  // Until the part has learned its spread, the site's cautious value stands in for it.
+  const spreadOrAssumed: SpreadBelief = spread ?? { kind: 'assumed', pieceSpread: defaultPieceSpread };
   const chosenContainer = containers.find((c) => c.id === (work?.containerId ?? containerChoice)) ?? null;
   const pipelineWork: PipelineWork = {
     tare: work?.tare ?? work?.panZero ?? 0,
     sample: work && work.step !== 'tare' && work.step !== 'sample' ? work.sample : null,
     sampleOnPan: work ? sampleStaysOnPan(work.purpose) : true,
     targetQuantity: work?.targetQuantity ?? null,
-    pieceSpread: spread,
+    spread,
     containerWeight: chosenContainer?.tare ?? null,
   };
   const feedOptions = useMemo(() => ({ windowMs: stabilityWindowMs, defaultPieceSpread }), [stabilityWindowMs, defaultPieceSpread]);
@@ -135,7 +136,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
   }, [flushQueue, queueStore]);
 
   const noise = scale ? { division: scale.division, repeatability: scale.repeatability ?? 0 } : null;
-  const growPlan = work?.step === 'grow' && work.sample && noise ? planNextGrow({ noise, sample: work.sample, pieceSpread: spread ?? defaultPieceSpread }) : null;
+  const growPlan = work?.step === 'grow' && work.sample && noise ? planNextGrow({ noise, sample: work.sample, spread: spreadOrAssumed, upTo: work.targetQuantity != null ? work.targetQuantity + (work.tolerance?.above ?? 0) : undefined }) : null;
 
   const chooseWork = (item: WorkItem) => {
     if (!scale) return;
@@ -146,7 +147,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
       setResult(null);
       setNotice(null);
       const onPan = sampleStaysOnPan(item.purpose);
-      setSampleQty(noise ? suggestSampleQuantity({ noise, averagePieceWeight: p.averagePieceWeight, pieceSpread: p.spreadLearned ? p.pieceSpread : null, targetQuantity: item.targetQuantity ?? null, sampleOnPan: onPan }) : 10);
+      setSampleQty(noise ? suggestSampleQuantity({ noise, averagePieceWeight: p.averagePieceWeight, spread: p.spreadBelief ?? { kind: 'assumed', pieceSpread: defaultPieceSpread }, targetQuantity: item.targetQuantity ?? null, sampleOnPan: onPan }) : 10);
       const { orderLineId, binId, binVersion } = item;
       setWork(startWork({ purpose: item.purpose, partId: p.id, partNumber: p.partNumber, label: item.label, scaleId: scale.id, targetQuantity: item.targetQuantity, tolerance: item.tolerance, orderLineId, binId, binVersion }));
     });
@@ -224,14 +225,14 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
     grow() {
       const f = frameRef.current;
       if (!f || !work?.sample || !noise) return;
-      const state = { sampleQuantity: work.sample.quantity, sampleNet: work.sample.netWeight, pieceSpread: spread ?? defaultPieceSpread, netWeightUncertainty: netWeightUncertainty(noise) };
+      const state = { sampleQuantity: work.sample.quantity, sampleNet: work.sample.netWeight, spread: spreadOrAssumed, noise };
       const r = acceptGrowStep(state, f.mean - (work.tare ?? 0), f.stable);
       if (r.accepted) {
         setWork(growSample(work, { quantity: r.sampleQuantity, netWeight: r.sampleNet }));
         setNotice({ tone: 'ok', text: `Sample grown to ${r.sampleQuantity} pieces.` });
         trace.mark(f.t, 'grow', `grown ${r.sampleQuantity}`);
       } else if (r.reason === 'unstable') setNotice({ tone: 'fault', text: describeWarning('unstable').message, code: 'unstable' });
-      else if (r.reason === 'not_exact') setNotice({ tone: 'fault', text: `Too many pieces were added to count them exactly (${r.count} ± ${Math.ceil(r.expandedUncertainty)}). Take some off, down to the number shown, and accept again.` });
+      else if (r.reason === 'not_exact') setNotice({ tone: 'fault', text: `Too many pieces were added to count them exactly (${r.count} ± ${r.wholePieceRange}). Take some off, down to the number shown, and accept again.` });
       else setNotice({ tone: 'fault', text: 'No pieces were added since the last step.' });
     },
     count() {
@@ -299,7 +300,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
   if (notice?.code && !codes.includes(notice.code)) codes.push(notice.code);
 
   const verdict = work?.targetQuantity != null && frame?.estimate && (work.step === 'count' || work.step === 'captured')
-    ? judgeKitLine({ count: frame.estimate.count, expandedUncertainty: frame.estimate.expandedUncertainty }, { target: work.targetQuantity, below: work.tolerance?.below ?? 0, above: work.tolerance?.above ?? 0 })
+    ? judgeKitLine({ count: frame.estimate.count, wholePieceRange: frame.estimate.wholePieceRange }, { target: work.targetQuantity, below: work.tolerance?.below ?? 0, above: work.tolerance?.above ?? 0 })
     : null;
   const showing = !work || work.step === 'tare' ? 'gross' : work.step === 'sample' ? 'net' : 'count';
   const kind = scale?.connection.kind;

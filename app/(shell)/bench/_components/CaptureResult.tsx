@@ -1,10 +1,9 @@
-import { toWholePieces } from '@/lib/weighing/count';
 import type { CountEventDto } from '@/server/schemas/counts';
 import { formatGrams } from '../../../_components/format';
 
 // What the server recorded, computed by the server from the weights sent.
 export function CaptureResult({ count }: { count: CountEventDto }) {
-  const u = toWholePieces(count.expandedUncertainty);
+  const u = count.wholePieceRange;
   return (
     <section aria-labelledby="result-title" className="card border-2 border-ok" data-testid="capture-result" data-count={count.count} data-exact={String(count.exact)} data-id={count.id}>
       <h2 id="result-title" className="font-bold text-ok">Recorded by the server</h2>

@@ -1,4 +1,3 @@
-import { toWholePieces } from '@/lib/weighing/count';
 import { formatWeight } from '@/lib/weighing/display-decimals';
 import type { ToleranceVerdict } from '@/lib/weighing/tolerance';
 import type { LiveFrame } from '../_lib/reading-pipeline';
@@ -22,7 +21,7 @@ const VERDICT_TEXT: Record<ToleranceVerdict, { text: string; cls: string }> = {
 // The number the operator reads from across the bench: very large mono digits, the unit in words.
 export function CountReadout({ frame, division, showing, targetQuantity, verdict }: Props) {
   const est = frame?.estimate ?? null;
-  const u = est ? toWholePieces(est.expandedUncertainty) : 0;
+  const u = est ? est.wholePieceRange : 0;
   const weight = frame ? (showing === 'gross' ? frame.gross : frame.net) : null;
   return (
     <section aria-label="Live reading" className="rounded-lg bg-ink p-5 text-paper">

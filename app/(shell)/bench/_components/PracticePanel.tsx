@@ -4,7 +4,6 @@ import { useEffect, useRef, useState } from 'react';
 import { createSimulatorSource } from '@/lib/scale/simulator-source';
 import type { SimulatedScale } from '@/lib/scale/simulator';
 import type { ReadingSource } from '@/lib/scale/reading';
-import { DEFAULT_PIECE_SPREAD } from '@/lib/weighing/piece-spread';
 import type { ScaleDto } from '@/server/schemas/scales';
 import { applyPanAction, buildSimulatedScale, containerOnPan, DEMO_PIECE_WEIGHT_G, piecesOnPan, type PanAction, type PracticePan } from '../_lib/practice-pan';
 import { browserStore } from './browser-store';
@@ -35,8 +34,11 @@ function readPan(scaleId: number): SavedPan | null {
   }
 }
 
+// Practice pieces of an unlearned part scatter like typical stamped parts (2 %; common practice).
+const PRACTICE_PIECE_SPREAD = 0.02;
+
 function freshPan(part: Props['part'], seed: number): SavedPan {
-  return { seed, partId: part?.id ?? null, pieceWeight: part?.averagePieceWeight ?? DEMO_PIECE_WEIGHT_G, spread: part?.pieceSpread ?? DEFAULT_PIECE_SPREAD, actions: [] };
+  return { seed, partId: part?.id ?? null, pieceWeight: part?.averagePieceWeight ?? DEMO_PIECE_WEIGHT_G, spread: part?.pieceSpread ?? PRACTICE_PIECE_SPREAD, actions: [] };
 }
 
 // The simulator's practice pan: a scale in the browser with the chosen scale's capacity, division

@@ -8,6 +8,8 @@ const RECIPES: Record<WarningCode, string> = {
   sample_too_small: 'Give a large target, then take a small sample.',
   over_capacity: 'Put on more than the capacity Max.',
   cv_assumed: 'Count a part whose piece spread has not been learned yet.',
+  single_piece_not_resolved: 'Set the practice piece weight to about one and a half divisions d.',
+  not_whole_pieces: 'After sampling, put the container or half a piece’s weight of something else on the pan.',
   unstable: 'Press a step right after putting pieces on, before the weight settles.',
   scale_locked: 'Choose a scale that quality has locked out.',
 };

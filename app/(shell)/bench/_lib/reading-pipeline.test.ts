@@ -3,11 +3,11 @@ import { createReadingPipeline, type PipelineWork } from './reading-pipeline';
 import { TraceBuffer } from './trace-buffer';
 
 const scale = { division: 0.1, repeatability: 0, capacity: 6000, minLoad: 20 };
-const work: PipelineWork = { tare: 100, sample: { quantity: 10, netWeight: 25 }, sampleOnPan: true, targetQuantity: null, pieceSpread: 0.01, containerWeight: 100 };
+const work: PipelineWork = { tare: 100, sample: { quantity: 10, netWeight: 25 }, sampleOnPan: true, targetQuantity: null, spread: { kind: 'known', pieceSpread: 0.01 }, containerWeight: 100 };
 
 function run(values: number[], w: PipelineWork = work) {
   const trace = new TraceBuffer(100);
-  const pipeline = createReadingPipeline(scale, { windowMs: 200, defaultPieceSpread: 0.02, trace });
+  const pipeline = createReadingPipeline(scale, { windowMs: 200, defaultPieceSpread: 0.05, trace });
   const frames = values.map((gross, i) => pipeline.push({ t: i * 50, gross, unit: 'g' }, w));
   return { frames, trace };
 }

@@ -3,7 +3,7 @@
  * live estimate and trace append. No allocation beyond the frame it returns; the estimate is
  * recomputed only when what it depends on changes.
  */
-import { estimateCount, StabilityDetector, type EstimateCountResult } from '@/lib/weighing';
+import { estimateCount, StabilityDetector, type EstimateCountResult, type SpreadBelief } from '@/lib/weighing';
 import type { Reading } from '@/lib/scale/reading';
 import { assessLoad, type LoadAssessment } from './load-cautions';
 import type { TraceBuffer } from './trace-buffer';
@@ -20,7 +20,8 @@ export interface PipelineWork {
   sample: { quantity: number; netWeight: number } | null;
   sampleOnPan: boolean;
   targetQuantity: number | null;
-  pieceSpread: number | null;
+  /** The part's learned spread; null until learned (the site's cautious value is then used). */
+  spread: SpreadBelief | null;
   containerWeight: number | null;
 }
 
@@ -42,6 +43,11 @@ export interface ReadingPipeline {
   reset(): void;
 }
 
+function spreadKey(b: SpreadBelief | null): string {
+  if (!b) return '-';
+  return b.kind === 'learned' ? `${b.scatter}/${b.noise}/${b.degreesOfFreedom}` : `${b.kind}/${b.pieceSpread}`;
+}
+
 export function createReadingPipeline(scale: PipelineScale, options: { windowMs: number; defaultPieceSpread: number; trace: TraceBuffer }): ReadingPipeline {
   const detector = new StabilityDetector({ division: scale.division, windowMs: options.windowMs });
   let lastKey = '';
@@ -52,7 +58,7 @@ export function createReadingPipeline(scale: PipelineScale, options: { windowMs:
     if (!s || s.quantity < 1 || s.netWeight <= 0) return null;
     const netWeight = Math.max(0, net);
     // Readings repeat the same value most of the time: reuse the last answer then.
-    const key = `${netWeight}|${s.quantity}|${s.netWeight}|${work.sampleOnPan}|${work.targetQuantity}|${work.pieceSpread}`;
+    const key = `${netWeight}|${s.quantity}|${s.netWeight}|${work.sampleOnPan}|${work.targetQuantity}|${spreadKey(work.spread)}|${work.containerWeight}`;
     if (key === lastKey) return lastEstimate;
     lastKey = key;
     lastEstimate = estimateCount(
@@ -62,10 +68,10 @@ export function createReadingPipeline(scale: PipelineScale, options: { windowMs:
         sample: s,
         netWeight,
         sampleOnPan: work.sampleOnPan,
-        pieceSpread: work.pieceSpread ?? undefined,
         targetQuantity: work.targetQuantity ?? undefined,
+        tare: work.tare > 0 ? work.tare : undefined,
       },
-      { defaultPieceSpread: options.defaultPieceSpread },
+      { defaultPieceSpread: options.defaultPieceSpread, spread: work.spread },
     );
     return lastEstimate;
   };

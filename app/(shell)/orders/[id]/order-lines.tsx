@@ -28,7 +28,7 @@ export function OrderLines({ lines }: { lines: OrderLineDto[] }) {
               </td>
               <td className="py-2 pr-3 text-right num whitespace-nowrap">
                 {l.captures ? l.counted : '—'}
-                <span className="block text-sm text-ink-faint">{l.captures ? `± ${l.expandedUncertainty}` : 'not counted yet'}</span>
+                <span className="block text-sm text-ink-faint">{l.captures ? (l.wholePieceRange === 0 ? 'exact' : `± ${l.wholePieceRange}`) : 'not counted yet'}</span>
               </td>
               <td className="py-2">
                 <span className={`inline-block rounded px-2 py-1 text-sm whitespace-nowrap ${VERDICT_STYLE[l.verdict]}`}>{VERDICT_WORDS[l.verdict]}</span>

@@ -91,7 +91,7 @@ export function AuditRecount({ initial, scaleNames, operatorNames }: { initial: 
                   <span className="block text-ink-faint">{scaleNames[item.scaleId] ?? `scale ${item.scaleId}`} · {operatorNames[item.operatorId] ?? 'unknown'}</span>
                 </td>
                 <td className="px-3 py-2.5 num text-right whitespace-nowrap">
-                  {item.count} ± {item.expandedUncertainty.toFixed(1)} pcs
+                  {item.exact ? `${item.count} pcs, exact` : `${item.count} ± ${item.wholePieceRange} pcs`}
                   <span className="block font-sans text-ink-faint">{item.exact ? 'flagged exact' : 'not exact'}</span>
                 </td>
                 <td className="px-3 py-2.5">
