@@ -1,5 +1,5 @@
 /**
- * A bare load-cell front end: raw converter counts → grams (COUNTING.md "Raw load-cell input").
+ * A bare load-cell front end: raw converter counts → grams (docs/counting-model.md, "Stability and raw load-cell input").
  * weight = (raw − zero) / slope, zero = mean of empty-pan readings,
  * slope = (raw at a reference mass − zero) / that mass, in counts per gram.
  */

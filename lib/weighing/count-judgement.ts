@@ -7,7 +7,7 @@
  * candidate count, not at N̂ (an undercount cannot borrow the smaller u of a smaller count), and
  * N̂ half-way between two counts can never be more than 50 % sure of either.
  */
-import { countVariance, uncertainPiecesOf, type CountModel } from './count-variance';
+import { countStep, countVariance, uncertainPiecesOf, type CountModel } from './count-variance';
 import { normalDensity, twoSidedTail } from './normal';
 import type { SpreadNode } from './spread-belief';
 
@@ -21,8 +21,6 @@ const COVERAGE = 1 - twoSidedTail(COVERAGE_FACTOR);
 /** A reading further than this from every whole count by chance alone is rare: 3 standard uncertainties (0.27 %). */
 export const WHOLE_PIECE_P_VALUE: number = twoSidedTail(3);
 
-const MAX_WINDOW = 40;
-
 export interface CountJudgement {
   /** round(N̂), from the unrounded N̂. */
   count: number;
@@ -33,7 +31,10 @@ export interface CountJudgement {
   wholePieceRange: number;
   /** u(N̂) at the spread's point estimate (pieces). */
   standardUncertainty: number;
-  /** Half-width of the 95.45 % interval around N̂, over the whole spread belief (pieces). */
+  /**
+   * Half-width of the 95.45 % interval around N̂, over the whole spread belief, plus half the step
+   * N̂ moves in when one reading moves by a division (pieces).
+   */
   expandedUncertainty: number;
   /** Chance of a reading at least this far from `count` if `count` were true (small: not whole pieces). */
   wholePiecePValue: number;
@@ -59,18 +60,36 @@ function mixtureHalfWidth(nodes: readonly SpreadNode[], sds: readonly number[]):
   return hi;
 }
 
+/** Past this U (pieces) no whole count can be 1 % sure, and the chances are those of a smooth curve. */
+const WIDE = 6;
+
 export function judgeCount(model: CountModel, countRaw: number, nodes: readonly SpreadNode[], pointSpread2: number): CountJudgement {
   const count = Math.max(0, Math.round(countRaw));
   const atRaw = sdAt(model, countRaw, nodes);
-  const expandedUncertainty = mixtureHalfWidth(nodes, atRaw);
+  // N̂ moves in steps of a division: a value known only to a step has an interval of half the step
+  // (as GUM F.2.2.1 treats a resolution), which the normal part cannot supply where steps are coarse.
+  const expandedUncertainty = mixtureHalfWidth(nodes, atRaw) + countStep(model, countRaw) / 2;
   const standardUncertainty = Math.sqrt(countVariance(model, Math.max(0, countRaw), pointSpread2));
-  const window = Math.min(MAX_WINDOW, Math.ceil(1.5 * expandedUncertainty) + 2);
+  const offset = Math.abs(countRaw - count);
+  const uncertainPieces = uncertainPiecesOf(model, countRaw);
+  if (expandedUncertainty > WIDE) {
+    // A wide count: the chance of one whole number is the density of N̂'s spread there, times one piece.
+    const density = nodes.reduce((sum, node, j) => sum + (node.weight * normalDensity(offset / atRaw[j])) / atRaw[j], 0);
+    const wholePiecePValue = nodes.reduce((sum, node, j) => sum + node.weight * twoSidedTail(offset / atRaw[j]), 0);
+    return {
+      count, probabilityExact: Math.min(1, density), exact: false, wholePieceRange: Math.floor(expandedUncertainty + 0.5),
+      standardUncertainty, expandedUncertainty, wholePiecePValue, uncertainPieces,
+    };
+  }
+  const window = Math.ceil(1.5 * expandedUncertainty) + 2;
   const lo = Math.max(0, count - window);
   const hi = count + window;
   const likelihood: number[] = [];
   let inWindow = 0;
+  let sdsAtCount = atRaw;
   for (let k = lo; k <= hi; k += 1) {
     const sds = sdAt(model, k, nodes);
+    if (k === count) sdsAtCount = sds;
     const l = nodes.reduce((sum, node, j) => sum + (node.weight * normalDensity((countRaw - k) / sds[j])) / sds[j], 0);
     likelihood.push(l);
     inWindow += l;
@@ -84,8 +103,6 @@ export function judgeCount(model: CountModel, countRaw: number, nodes: readonly 
   const total = inWindow + beyond;
   const chance = (k: number): number => (k < lo || k > hi ? 0 : likelihood[k - lo] / total);
   const probabilityExact = total > 0 ? chance(count) : 0;
-  const sdsAtCount = sdAt(model, count, nodes);
-  const offset = Math.abs(countRaw - count);
   const wholePiecePValue = nodes.reduce((sum, node, j) => sum + node.weight * twoSidedTail(offset / sdsAtCount[j]), 0);
   // A reading that fits no whole count is not exact however the neighbours compare: at N̂ = k + ½
   // with a tiny u, the slightly larger u of k + 1 alone would otherwise make k + 1 "sure".
@@ -98,7 +115,7 @@ export function judgeCount(model: CountModel, countRaw: number, nodes: readonly 
     standardUncertainty,
     expandedUncertainty,
     wholePiecePValue,
-    uncertainPieces: uncertainPiecesOf(model, countRaw),
+    uncertainPieces,
   };
 }
 

@@ -107,3 +107,14 @@ function piecesVariance(model: CountModel, count: number, c2: number): number {
 export function countVariance(model: CountModel, count: number, c2: number): number {
   return piecesVariance(model, count, c2) + weighingVariance(model, count, c2) / model.averagePieceWeight ** 2;
 }
+
+/**
+ * How far N̂ jumps when one reading moves by one division: d/APW for the load, (N̂/n)·d/APW for the
+ * sample (each on its own scale). A count that moves in steps this coarse is known only to the step.
+ */
+export function countStep(model: CountModel, countRaw: number): number {
+  const a = model.averagePieceWeight;
+  const load = (model.bulkScale ?? model.sampleScale).division / a;
+  const sample = (Math.max(0, countRaw) / model.sampleQuantity) * (model.sampleScale.division / a);
+  return Math.max(load, sample);
+}

@@ -24,7 +24,7 @@ export interface EstimateCountInput {
   sample: {
     quantity: number;
     netWeight: number;
-    /** Net weight increases, one per single piece put on while sampling: the spread is learned from them. */
+    /** Net weight changes, one per single piece put on while sampling (0 or below when the reading did not rise): the spread is learned from them. */
     increments?: number[];
   };
   /** Net load being counted: the whole pan when the sample stays on it. */
@@ -89,7 +89,8 @@ export function assertEstimateInput(input: EstimateCountInput): void {
     if (!Array.isArray(increments) || increments.length < 2 || increments.length > MAX_INCREMENTS) {
       fail('sample.increments', `must list 2 to ${MAX_INCREMENTS} single-piece weights`);
     }
-    if (!increments.every((x) => finite(x) && x > 0)) fail('sample.increments', 'must each be a weight above 0');
+    // A piece near the division can leave the reading unchanged or, with noise, lower it: 0 and below are real readings.
+    if (!increments.every((x) => finite(x))) fail('sample.increments', 'must each be a number');
   }
   const c = input.pieceSpread;
   if (c != null && (!finite(c) || c < 0 || c >= 1)) fail('pieceSpread', 'must be at least 0 and below 1');

@@ -6,7 +6,8 @@ import { PLANNED_STANDARD_UNCERTAINTY } from './exact-reach';
 // JCGM 100:2008 5.1.2 and 5.2.2): s_r = d/2 blurs the rounding phase (β = π², the dependent-rounding
 // terms are below 1e-5 of d²), so u(W)² = 2(d²/12 + s_r²) = 6.667e-5 g², M = N̂ − n = 985.93,
 // m = M/n = 39.437: pieces c²(M + M²/n) = 15.947; weighing u(W)²(1 + m + m²)/APW² = 0.3007;
-// u = √16.248 = 4.0309, U = 8.0617.
+// u = √16.248 = 4.0309, U = 2u + half the step one division of the sample moves N̂ by,
+// (N̂/n)·d/APW = 0.6798: 8.0617 + 0.3399 = 8.4016.
 const request: EstimateCountInput = {
   unit: 'g',
   scale: { division: 0.01, repeatability: 0.005, max: 6000, min: 0.2 },
@@ -25,8 +26,8 @@ describe('estimateCount', () => {
       countRaw: 1010.93,
       count: 1011,
       standardUncertainty: 4.04, // 4.0309 rounded up
-      expandedUncertainty: 8.07, // 8.0617 rounded up
-      coverageFactor: 2,
+      expandedUncertainty: 8.41, // 8.4016 rounded up
+      coverageFactor: 2.08,
       exact: false,
       // ≈ φ(0.07/4.03)/4.03 = 0.0990: the chance of one whole count under a normal this wide
       probabilityExact: expect.closeTo(0.099, 3),
@@ -63,7 +64,7 @@ describe('estimateCount', () => {
     expect(r.count).toBe(1011);
     expect(r.countRaw).toBe(1010.93);
     expect(r.averagePieceWeight).toBe(Number((0.5948 / lb).toPrecision(6)));
-    expect(r.expandedUncertainty).toBe(8.07);
+    expect(r.expandedUncertainty).toBe(8.41);
   });
 
   it('defaults to the sample on the pan and no repeatability', () => {

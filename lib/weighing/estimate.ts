@@ -143,7 +143,7 @@ export function assessCount(input: EstimateCountInput, options: EstimateCountOpt
     count: judged.count,
     standardUncertainty: standard,
     expandedUncertainty: expanded,
-    coverageFactor: nodes.length === 1 ? 2 : roundDecimals(judged.expandedUncertainty / judged.standardUncertainty, 2),
+    coverageFactor: roundDecimals(judged.expandedUncertainty / judged.standardUncertainty, 2),
     exact: judged.exact,
     probabilityExact: roundDownDecimals(judged.probabilityExact, 6),
     wholePieceRange: judged.wholePieceRange,

@@ -3,12 +3,14 @@
  * (docs/counting-model.md, "The piece spread and how sure it is").
  *
  * Single-piece increments x_i (one piece put on at a time) scatter with E[s²] = μ²c² + v_noise.
- * With ν = m − 1 degrees of freedom, τ² = E[s²] given the observed s² is taken as ν·s²/χ²_ν
- * (the posterior of a normal variance under the prior 1/τ², as JCGM 101:2008 6.4.9 uses for a
- * Type A evaluation; from memory), and c² = max(0, τ² − v_noise)/μ²: the reading noise is taken off
- * with the rest of the uncertainty, never by a gate. A count then averages over this belief
- * (count-judgement.ts), so a spread learned from 5 pieces widens the count far more than one
- * learned from 50.
+ * With ν = m − 1 degrees of freedom, τ² = E[s²] given the observed s² is taken as ν·s²/X with
+ * X ~ χ²_k: the posterior of a normal variance (JCGM 101:2008 6.4.9 treats a Type A evaluation this
+ * way; from memory). Under the usual prior 1/τ², k = ν; we take a prior flat in τ², k = ν − 2 (at
+ * least 1), which keeps more belief on large spreads: with 5 pieces, a scatter that came out small
+ * by chance must not make counts "exact" for a part that is in truth loose (our choice; a false
+ * exact costs more than a wide interval). c² = (τ² − v_noise)/μ² with τ² cut at the noise: the
+ * reading noise is taken off with the rest of the uncertainty, never by a gate. A count then
+ * averages over this belief (count-judgement.ts).
  */
 import { readingVariance, type ReadingNoise } from './rounding-covariance';
 
@@ -51,30 +53,40 @@ function c2At(belief: Extract<SpreadBelief, { kind: 'learned' }>, x: number): nu
 
 /**
  * The belief as weighted values of c². A known or assumed spread is one node. A learned one is
- * integrated over X ~ χ²_ν on t = ln X, where the density X·p(X) ∝ exp(νt/2 − eᵗ/2) is smooth,
- * with the trapezoid rule (exponentially accurate for such integrands); the range reaches far into
- * the small-X tail, where the large spreads that make a count go wrong live.
+ * integrated over X ~ χ²_k on t = ln X, where the density X·p(X) ∝ exp(kt/2 − eᵗ/2) is smooth,
+ * with the trapezoid rule; the range reaches far into the small-X tail, where the large spreads
+ * that make a count go wrong live. Since τ² = μ²c² + v_noise cannot be below the noise, the
+ * belief is cut there (X ≤ ν·s²/v_noise) and renormalised, rather than piling every τ² below the
+ * noise onto c = 0: scatter that is all noise says "somewhere below what this scale can see",
+ * not "no spread at all".
  */
 export function spreadNodes(belief: SpreadBelief): SpreadNode[] {
   if (belief.kind !== 'learned') return [{ c2: belief.pieceSpread ** 2, weight: 1 }];
   const nu = belief.degreesOfFreedom;
-  // The left tail of ln X falls as exp(ν·t/2): 30/ν + 6/√ν below the mode it is below 1e-6.
-  const lo = Math.log(nu) - (30 / nu + 6 / Math.sqrt(nu));
-  const hi = Math.log(nu + 12 * Math.sqrt(2 * nu) + 30);
-  // A step of about 0.8 standard deviations of ln X (√(2/ν + 4/ν²) roughly) already makes the
-  // trapezoid error far smaller than 1e-6 for a bell this smooth.
-  const step0 = Math.min(1, 0.8 * Math.sqrt(2 / nu + 4 / (nu * nu)));
+  const k = Math.max(1, nu - 2);
+  // Scatter of exactly 0 (identical rounded increments) tells no more than scatter at the noise/ν level.
+  const scatter = Math.max(belief.scatter, belief.noise / nu, Number.MIN_VALUE);
+  const learned = { ...belief, scatter };
+  // The left tail of ln X falls as exp(k·t/2): 30/k + 6/√k below the mode it is below 1e-6.
+  const tail = 30 / k + 6 / Math.sqrt(k);
+  const cut = belief.noise > 0 ? Math.log((nu * scatter) / belief.noise) : Infinity;
+  const hi = Math.min(Math.log(k + 12 * Math.sqrt(2 * k) + 30), cut);
+  const lo = Math.min(Math.log(k) - tail, hi - tail);
+  // A step of about 0.8 standard deviations of ln X (√(2/k + 4/k²) roughly) makes the trapezoid
+  // error far below 1e-6 for a bell this smooth; where the cut ends the range abruptly, the error
+  // is of order step² there, small against the judgement's 1 %.
+  const step0 = Math.min(1, 0.8 * Math.sqrt(2 / k + 4 / (k * k)));
   const count = Math.min(MAX_NODES, Math.ceil((hi - lo) / step0) + 1);
   const step = (hi - lo) / (count - 1);
   const nodes: SpreadNode[] = [];
   let total = 0;
   for (let i = 0; i < count; i += 1) {
     const t = lo + i * step;
-    const logDensity = (nu / 2) * (t - Math.log(nu)) - (Math.exp(t) - nu) / 2;
+    const logDensity = (k / 2) * (t - Math.log(k)) - (Math.exp(t) - k) / 2;
     const weight = Math.exp(logDensity) * (i === 0 || i === count - 1 ? 0.5 : 1);
     total += weight;
-    const c2 = c2At(belief, Math.exp(t));
-    // Nodes at one c² (the cut tail, or c = 0 where the noise outweighs the scatter) are one node.
+    const c2 = c2At(learned, Math.exp(t));
+    // Nodes at one c² (the cut far tail) are one node.
     const last = nodes[nodes.length - 1];
     if (last && last.c2 === c2) last.weight += weight;
     else nodes.push({ c2, weight });

@@ -1,5 +1,5 @@
 /**
- * Motion detection (COUNTING.md "Stability"): stable when every reading of the last
+ * Motion detection (docs/counting-model.md, "Stability and raw load-cell input"): stable when every reading of the last
  * window lies within ±1 d of the window mean, or when the scale flags stability itself.
  * Incremental: running sum plus monotonic min/max queues, O(1) amortised per reading,
  * so a 50 Hz stream costs nothing on the bench.

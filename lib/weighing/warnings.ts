@@ -1,4 +1,4 @@
-/** Counting warnings: stable codes from COUNTING.md with our own plain wording and remedy. */
+/** Counting warnings: stable codes from docs/counting-model.md with our own plain wording and remedy. */
 
 export const WARNING_CODES = [
   'apw_below_resolution',

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { MAX_INCREMENTS } from '@/lib/weighing/estimate-input';
-import { nonNegativeNumber, positiveNumber, unitSchema, wholeCount } from './weights';
+import { nonNegativeNumber, positiveNumber, unitSchema, weightReading, wholeCount } from './weights';
 
 const scaleSchema = (name: string) =>
   z.object(
@@ -25,7 +25,7 @@ export const estimateSchema = z
         netWeight: positiveNumber('Sample net weight'),
         // One net weight increase per single piece put on while sampling: the spread is learned from them.
         increments: z
-          .array(positiveNumber('Each increment'), { error: 'increments must be a list of weights' })
+          .array(weightReading('Each increment'), { error: 'increments must be a list of weights' })
           .min(2, { error: 'Give at least 2 single-piece increments' })
           .max(MAX_INCREMENTS, { error: `At most ${MAX_INCREMENTS} increments` })
           .optional(),

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import type { SpreadBelief } from '@/lib/weighing/spread-belief';
 import { COUNTING_METHODS, type CountingMethod, type SampleStatus } from '@/models/columns';
 import { pagingSchema, recordIdSchema, requiredText, versionSchema } from './common';
-import { positiveNumber, unitSchema, wholeCount } from './weights';
+import { positiveNumber, unitSchema, weightReading, wholeCount } from './weights';
 
 // Part numbers: letters, digits and . _ - / ; stored upper-case so scans match however typed.
 export const partNumberSchema = requiredText('Part number')
@@ -39,7 +39,8 @@ export const recordSampleSchema = z.object({
   quantity: wholeCount('Sample quantity'),
   netWeight: positiveNumber('Sample net weight'),
   // One stable increment per piece when the sample was built piece by piece, in `unit`.
-  increments: z.array(positiveNumber('Each increment'), { error: 'increments must be a list of weights' }).max(10_000).optional(),
+  // A piece near the division may leave the reading unchanged (0) or, with noise, lower it.
+  increments: z.array(weightReading('Each increment'), { error: 'increments must be a list of weights' }).max(10_000).optional(),
 });
 export type RecordSampleInput = z.infer<typeof recordSampleSchema>;
 

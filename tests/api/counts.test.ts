@@ -81,6 +81,30 @@ describe('POST /api/v1/counts', () => {
     expect(await CountEvent.count({ where: { idempotencyKey: key } })).toBe(0);
   });
 
+  it('takes a tare within one division below zero as zero, and names the tare when it is further below', async () => {
+    const { agent } = await signedIn('operator');
+    const part = await createPart({ pieceSpread: 0.01 });
+    const scale = await createScale(); // d = 0.1 g
+    const drifted = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(capture(part.id, scale.id, { gross: 60, tare: -0.048 }));
+    expect(drifted.status).toBe(201);
+    expect(drifted.body.count).toMatchObject({ tare: 0, net: 60, count: 100 });
+    const far = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(capture(part.id, scale.id, { gross: 60, tare: -0.5 }));
+    expect(far.status).toBe(400);
+    expect(far.body.error.fields.tare).toMatch(/below zero.*zero the scale/);
+  });
+
+  it('says how sure the count is, with ± whole pieces that agree with exact', async () => {
+    const { agent } = await signedIn('operator');
+    const part = await createPart({ pieceSpread: 0.01 });
+    const scale = await createScale({ divisionG: 0.01, eG: 0.1, repeatabilityG: 0.005 });
+    const res = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(capture(part.id, scale.id, { gross: 52.3 + 15 + 0.6 * 10 }));
+    expect(res.status).toBe(201);
+    const c = res.body.count;
+    expect(c.count).toBe(35);
+    expect(c.probabilityExact).toBeGreaterThan(0);
+    expect(c.wholePieceRange === 0).toBe(c.exact);
+  });
+
   it.each([
     ['a moving reading', { stable: false }, 422, 'unstable'],
     ['a load above Max', { gross: 6000.5 }, 422, 'over_capacity'],

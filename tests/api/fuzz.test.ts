@@ -14,6 +14,7 @@ import { apiRouteFiles } from '../helpers/route-files';
 import { ROLE_PERMISSIONS, ROLES, type Permission, type Role } from '../../lib/roles';
 import { BOM_CSV_COLUMNS } from '../../server/schemas/kits';
 import { PART_CSV_COLUMNS } from '../../server/schemas/parts';
+import { PieceWeightSample } from '../../models';
 import { createPart, createScale, createTestWeight, createUser, stockPart, TEST_PASSWORD, testDb, unique } from '../helpers/db';
 import { anonymous, signedIn, type Agent } from '../helpers/http';
 import { releasedOrder } from '../helpers/orders';
@@ -170,6 +171,7 @@ const SAMPLES: Record<string, (w: World) => Sample> = {
   'PATCH /api/v1/parts/[id]': (w) => ({ ids: { id: w.sparePart.id }, bodies: [{ description: 'Fuzz spare part', countingMethod: 'hand', version: new Live('parts', w.sparePart.id) }] }),
   'GET /api/v1/parts/[id]/samples': () => ({}),
   'POST /api/v1/parts/[id]/samples': (w) => ({ bodies: [{ scaleId: w.scale.id, unit: 'g', quantity: 4, netWeight: 2, increments: [0.5, 0.5, 0.5, 0.5] }] }),
+  'POST /api/v1/parts/[id]/samples/[sampleId]/decision': () => ({ bodies: [{ decision: 'reject' }] }),
   'GET /api/v1/parts/[id]/photo': () => ({}),
   'PUT /api/v1/parts/[id]/photo': () => ({ file: { name: 'washer.png', type: 'image/png', bytes: PNG } }),
   'GET /api/v1/counts': (w) => ({ query: { partId: String(w.part.id), scaleId: String(w.scale.id), purpose: 'part', from: w.today, to: `${w.today}T23:59:59Z`, page: '1', pageSize: '20' } }),
@@ -765,10 +767,12 @@ beforeAll(async () => {
   expect(binCount?.status).toBe('pending');
   expect(audit?.items.length).toBeGreaterThan(0);
   const binNow = (await clerk.get(`/api/v1/bins?code=${bin.code}`)).body.bins[0];
+  // A sample held for review, for the decision route.
+  const heldSample = await PieceWeightSample.create({ partId: part.id, scaleId: scale.id, quantity: 10, netWeightG: '5.5', apwG: '0.55', incrementsG: null, createdBy: user.id, status: 'held', holdReason: 'fuzz: far from the history' });
 
   world = {
     agents,
-    ids: { users: user.id, scales: scale.id, containers: container.id, parts: part.id, kits: kit.id, orders: order.id, audits: audit.id, items: audit.items[0].id, 'bin-counts': binCount.id, bins: bin.id, 'test-weights': weight.id },
+    ids: { samples: heldSample.id, users: user.id, scales: scale.id, containers: container.id, parts: part.id, kits: kit.id, orders: order.id, audits: audit.id, items: audit.items[0].id, 'bin-counts': binCount.id, bins: bin.id, 'test-weights': weight.id },
     part,
     scale,
     spareScale,

@@ -61,6 +61,7 @@ describe('parts and samples', () => {
     const mean = net / 10;
     const sd = Math.sqrt(increments.reduce((a, x) => a + (x - mean) ** 2, 0) / 9);
     expect(res.body.part.pieceSpread).toBeCloseTo(sd / mean, 3);
+    expect(res.body.part.spreadDegreesOfFreedom).toBe(9);
     const list = await agent.get(`/api/v1/parts/${part.id}/samples`);
     expect(list.body.samples[0]).toMatchObject({ quantity: 10, pieceByPiece: true });
   });
@@ -68,7 +69,7 @@ describe('parts and samples', () => {
   it('refuses increments that do not belong to the sample, samples of hand-counted parts, and locked scales', async () => {
     const { agent } = await signedIn('operator');
     const part = await createPart();
-    const scale = await createScale();
+    const scale = await createScale({ eG: 0.01 });
     const wrongCount = await agent.post(`/api/v1/parts/${part.id}/samples`).send({ scaleId: scale.id, quantity: 3, netWeight: 3, increments: [1, 1] });
     expect(wrongCount.status).toBe(400);
     expect(wrongCount.body.error.fields.increments).toMatch(/expected 3/);

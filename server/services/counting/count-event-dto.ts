@@ -29,7 +29,7 @@ export function toCountEventDto(e: CountEvent): CountEventDto {
     count: e.count,
     standardUncertainty: Number(e.standardUncertainty),
     expandedUncertainty: Number(e.expandedUncertainty),
-    coverageFactor: 2,
+    coverageFactor: Number(e.standardUncertainty) > 0 ? Math.round((Number(e.expandedUncertainty) / Number(e.standardUncertainty)) * 100) / 100 : 2,
     exact: e.exact,
     probabilityExact: e.probabilityExact == null ? null : Number(e.probabilityExact),
     wholePieceRange: wholePieceRangeOf(e),

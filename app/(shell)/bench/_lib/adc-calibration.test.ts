@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { calibrate, effectiveDivisionOf, parseCalibration, zeroFrom } from './adc-calibration';
 
 describe('raw ADC calibration', () => {
-  it('takes zero and slope from an empty pan and a reference mass (COUNTING.md "Raw load-cell input")', () => {
+  it('takes zero and slope from an empty pan and a reference mass (docs/counting-model.md, "Stability and raw load-cell input")', () => {
     const setup = { reversedExcitation: false, averaging: 1 };
     const zero = zeroFrom([1000, 1002, 998], setup);
     const cal = calibrate(zero, [6000, 6000], 500, setup);
