@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # npm run bench: the figures behind the speed goals, written to bench-results/ (git-ignored).
-#   1. the bench page's per-reading pipeline and first-load JavaScript, and label rendering
-#      (no database; builds if needed);
+#   1. the bench page's per-reading pipeline and first-load JavaScript, label rendering, and the
+#      counting grid against an independent simulator (no database; builds if needed);
 #   2. every scripts/bench/db-*.ts against a throwaway database on its own MariaDB (.data/bench,
 #      port TF_BENCH_DB_PORT or 3329); each appends to bench-results/<name>.json. db-load.ts starts
 #      its own `next start` on the build.
@@ -19,6 +19,8 @@ log "bench: scale pipeline and page weight"
 "$ROOT/node_modules/.bin/tsx" scripts/bench/run-bench.ts
 log "bench: 1 000 bin labels against the encode-only and text-only floors"
 $TSX scripts/bench/labels.ts
+log "bench: the counting grid (24 000 regimes against an independent simulator)"
+"$ROOT/node_modules/.bin/tsx" scripts/bench/counting-grid.ts
 
 ensure_mariadb
 export DB_NAME="tallyforge_bench_$$"

@@ -63,7 +63,14 @@ function mixtureHalfWidth(nodes: readonly SpreadNode[], sds: readonly number[]):
 /** Past this U (pieces) no whole count can be 1 % sure, and the chances are those of a smooth curve. */
 const WIDE = 6;
 
-export function judgeCount(model: CountModel, countRaw: number, nodes: readonly SpreadNode[], pointSpread2: number): CountJudgement {
+/**
+ * `cautiousSpread2` is c² at the belief's upper percentile: the chance a count is reported with is
+ * the lower of the belief's average and the chance at that spread. The average alone is right on
+ * average over spreads; for a part whose true spread sits high in the belief (a learned spread that
+ * came out small by chance), a reading that lands on a whole number would otherwise look surer than
+ * it is.
+ */
+export function judgeCount(model: CountModel, countRaw: number, nodes: readonly SpreadNode[], pointSpread2: number, cautiousSpread2: number = pointSpread2): CountJudgement {
   const count = Math.max(0, Math.round(countRaw));
   const atRaw = sdAt(model, countRaw, nodes);
   // N̂ moves in steps of a division: a value known only to a step has an interval of half the step
@@ -82,27 +89,12 @@ export function judgeCount(model: CountModel, countRaw: number, nodes: readonly 
     };
   }
   const window = Math.ceil(1.5 * expandedUncertainty) + 2;
-  const lo = Math.max(0, count - window);
-  const hi = count + window;
-  const likelihood: number[] = [];
-  let inWindow = 0;
-  let sdsAtCount = atRaw;
-  for (let k = lo; k <= hi; k += 1) {
-    const sds = sdAt(model, k, nodes);
-    if (k === count) sdsAtCount = sds;
-    const l = nodes.reduce((sum, node, j) => sum + (node.weight * normalDensity((countRaw - k) / sds[j])) / sds[j], 0);
-    likelihood.push(l);
-    inWindow += l;
-  }
-  // Counts beyond the window: their likelihood, summed, is about the continuous mass out there.
-  const beyond = nodes.reduce((sum, node, j) => {
-    const below = lo === 0 ? 0 : twoSidedTail((countRaw - (lo - 0.5)) / atRaw[j]) / 2;
-    const above = twoSidedTail((hi + 0.5 - countRaw) / atRaw[j]) / 2;
-    return sum + node.weight * (below + above);
-  }, 0);
-  const total = inWindow + beyond;
-  const chance = (k: number): number => (k < lo || k > hi ? 0 : likelihood[k - lo] / total);
-  const probabilityExact = total > 0 ? chance(count) : 0;
+  const chance = chancesOverCounts(model, countRaw, count, window, nodes, atRaw);
+  const cautious = nodes.length === 1 && nodes[0].c2 === cautiousSpread2
+    ? chance
+    : chancesOverCounts(model, countRaw, count, window, [{ c2: cautiousSpread2, weight: 1 }], sdAt(model, countRaw, [{ c2: cautiousSpread2, weight: 1 }]));
+  const probabilityExact = Math.min(chance(count), cautious(count));
+  const sdsAtCount = sdAt(model, count, nodes);
   const wholePiecePValue = nodes.reduce((sum, node, j) => sum + node.weight * twoSidedTail(offset / sdsAtCount[j]), 0);
   // A reading that fits no whole count is not exact however the neighbours compare: at N̂ = k + ½
   // with a tiny u, the slightly larger u of k + 1 alone would otherwise make k + 1 "sure".
@@ -117,6 +109,28 @@ export function judgeCount(model: CountModel, countRaw: number, nodes: readonly 
     wholePiecePValue,
     uncertainPieces,
   };
+}
+
+/** P(true count = k | N̂) over whole counts near `count`, for one belief (0 outside the window). */
+function chancesOverCounts(model: CountModel, countRaw: number, count: number, window: number, nodes: readonly SpreadNode[], atRaw: readonly number[]): (k: number) => number {
+  const lo = Math.max(0, count - window);
+  const hi = count + window;
+  const likelihood: number[] = [];
+  let inWindow = 0;
+  for (let k = lo; k <= hi; k += 1) {
+    const sds = sdAt(model, k, nodes);
+    const l = nodes.reduce((sum, node, j) => sum + (node.weight * normalDensity((countRaw - k) / sds[j])) / sds[j], 0);
+    likelihood.push(l);
+    inWindow += l;
+  }
+  // Counts beyond the window: their likelihood, summed, is about the continuous mass out there.
+  const beyond = nodes.reduce((sum, node, j) => {
+    const below = lo === 0 ? 0 : twoSidedTail((countRaw - (lo - 0.5)) / atRaw[j]) / 2;
+    const above = twoSidedTail((hi + 0.5 - countRaw) / atRaw[j]) / 2;
+    return sum + node.weight * (below + above);
+  }, 0);
+  const total = inWindow + beyond;
+  return (k) => (total > 0 && k >= lo && k <= hi ? likelihood[k - lo] / total : 0);
 }
 
 /** Smallest h ≥ 1 with P(|N − count| ≤ h) ≥ 95.45 %; past the window, U in whole pieces. */

@@ -109,8 +109,8 @@ export function assessCount(input: EstimateCountInput, options: EstimateCountOpt
   const model: CountModel = { sampleQuantity: n, averagePieceWeight: apw, sampleScale, bulkScale, sampleOnPan: onPan };
   const { belief, source } = spreadBeliefOf(input, sampleScale, options);
   const nodes = spreadNodes(belief);
-  const judged = judgeCount(model, countRaw, nodes, spreadEstimate(belief) ** 2);
   const planC2 = planningSpread(nodes);
+  const judged = judgeCount(model, countRaw, nodes, spreadEstimate(belief) ** 2, planC2);
   const reach = exactReach(model, planC2);
   const target = input.targetQuantity;
   // On the pan a target at or below the sample is already on it: no sample to advise.

@@ -53,7 +53,8 @@ export function planGrowStep(state: GrowState, upTo?: number): GrowPlan {
  */
 export function acceptGrowStep(state: GrowState, panNet: number, stable: boolean): GrowStepResult {
   const model = modelOf(state);
-  const judged = judgeCount(model, panNet / model.averagePieceWeight, spreadNodes(state.spread), spreadEstimate(state.spread) ** 2);
+  const nodes = spreadNodes(state.spread);
+  const judged = judgeCount(model, panNet / model.averagePieceWeight, nodes, spreadEstimate(state.spread) ** 2, planningSpread(nodes));
   const rejected = { count: judged.count, wholePieceRange: judged.wholePieceRange };
   if (!stable) return { accepted: false, reason: 'unstable', ...rejected };
   if (!judged.exact) return { accepted: false, reason: 'not_exact', ...rejected };

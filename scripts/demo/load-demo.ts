@@ -47,6 +47,7 @@ export async function loadDemo(people: People): Promise<void> {
     await demoSamples(dto.id, p, scales.get('Bench 1 · fine')!, p.apw < 0.2 ? scales.get('Bench 1 · fine')! : scales.get('Bench 2 · kitting')!, people.operator);
   }
   for (const h of DEMO_HAND_PARTS) await createPart({ input: { ...h, countingMethod: 'hand' } });
+  await demoHeldSample(parts, scales.get('Bench 1 · fine')!, people.operator);
 
   const kits = [];
   for (const k of DEMO_KITS) {
@@ -105,8 +106,8 @@ async function calibrateAll(scales: Map<string, Scale>, quality: SessionUser): P
   }
 }
 
-// Ten pieces added one at a time on the fine scale (teaches the spread), then a sample of 25
-// on the bench that counts the part (sets the APW).
+// Ten pieces added one at a time on the fine scale (teaches the spread), then a sample of at least
+// 25 on the bench that counts the part (sets the APW), enough pieces to clear that scale's Min.
 async function demoSamples(partId: number, spec: { apw: number; spread: number }, fine: Scale, bench: Scale, by: SessionUser): Promise<void> {
   const { apw, spread } = spec;
   const d = Number(fine.divisionG);
@@ -119,9 +120,17 @@ async function demoSamples(partId: number, spec: { apw: number; spread: number }
     return Number(inc.toFixed(6));
   });
   await recordSample({ partId, input: { scaleId: fine.id, unit: 'g', quantity: 10, netWeight: Number(shown.toFixed(6)), increments }, by });
-  const n = 25;
+  const n = Math.max(25, Math.ceil((1.2 * Number(bench.minLoadG)) / apw));
   const net = roundTo(Array.from({ length: n }, () => apw * (1 + spread * random.normal())).reduce((a, b) => a + b, 0), Number(bench.divisionG));
   await recordSample({ partId, input: { scaleId: bench.id, unit: 'g', quantity: n, netWeight: Number(net.toFixed(6)) }, by });
+}
+
+// A tray of the next O-ring size up weighed as the 6 × 1: 43 % heavier than its history, so the
+// sample is held for a planner or quality engineer and teaches the part nothing meanwhile.
+async function demoHeldSample(parts: Map<string, Part>, fine: Scale, by: SessionUser): Promise<void> {
+  const n = 30;
+  const net = roundTo(n * 0.09, Number(fine.divisionG));
+  await recordSample({ partId: parts.get('CMW-ORG-6X1')!.id, input: { scaleId: fine.id, unit: 'g', quantity: n, netWeight: Number(net.toFixed(6)) }, by });
 }
 
 // The screws and standoffs of the released end-cap order counted at Bench 2, so the queue and

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Audit, AuditItem, BinCount, BuildOrder, CountEvent, MailMessage, Scale, User } from '../../models';
+import { Audit, AuditItem, BinCount, BuildOrder, CountEvent, MailMessage, Part, PieceWeightSample, Scale, User } from '../../models';
 import { migrateUp } from '../../models/migrate';
 import { seedDemoData } from '../../scripts/demo/seed-demo-data';
 import { getDb } from '../../server/db';
@@ -29,6 +29,14 @@ describe('the demo (Corvel Motion Works)', () => {
   it('has one person per role, and loads only into an empty database', async () => {
     expect((await User.findAll()).map((u) => u.role).sort()).toEqual(['admin', 'clerk', 'operator', 'planner', 'quality']);
     expect(await seedDemoData('demo-test-password')).toBe('skipped');
+  });
+
+  it('holds one sample for review: an O-ring of the wrong size that teaches its part nothing', async () => {
+    const held = await PieceWeightSample.findAll({ where: { status: 'held' } });
+    expect(held).toHaveLength(1);
+    const part = (await Part.findByPk(held[0].partId))!;
+    expect(part.partNumber).toBe('CMW-ORG-6X1');
+    expect(Number(part.apwG)).toBeLessThan(0.07);
   });
 
   it('shows an order being kitted, one waiting, and one held back by a shortage', async () => {

@@ -275,6 +275,42 @@ export function wilsonInterval(successes: number, n: number, z: number): { lower
   return { lower: Math.max(0, centre - half), upper: Math.min(1, centre + half) };
 }
 
+/** ln C(n, k) by summing logs: exact enough for the binomial tails below (n of a few thousand). */
+function logChoose(n: number, k: number): number {
+  let sum = 0;
+  for (let i = 1; i <= k; i += 1) sum += Math.log((n - k + i) / i);
+  return sum;
+}
+
+/** P(X ≤ k) for X ~ Binomial(n, p). */
+function binomialCdf(k: number, n: number, p: number): number {
+  if (p <= 0) return 1;
+  if (p >= 1) return k >= n ? 1 : 0;
+  let sum = 0;
+  for (let i = 0; i <= k; i += 1) sum += Math.exp(logChoose(n, i) + i * Math.log(p) + (n - i) * Math.log(1 - p));
+  return Math.min(1, sum);
+}
+
+/**
+ * Clopper–Pearson upper bound (Clopper and Pearson 1934, Biometrika 26:404; from memory): the p at
+ * which seeing `successes` or fewer of n has chance α. Exact for any n, so one wrong count among a
+ * handful of flagged ones does not fail a regime that chance alone explains (the Wilson bound does).
+ */
+export function clopperPearsonUpper(successes: number, n: number, alpha: number): number {
+  if (n === 0 || successes >= n) return 1;
+  let lo = successes / n;
+  let hi = 1;
+  for (let i = 0; i < 60; i += 1) {
+    const mid = (lo + hi) / 2;
+    if (binomialCdf(successes, n, mid) > alpha) lo = mid;
+    else hi = mid;
+  }
+  return hi;
+}
+
+/** One-sided tail of a standard normal at z = 3 (0.135 %), the same allowance as the Wilson bounds. */
+const ALPHA_AT_Z3 = 0.00135;
+
 /** Limits (the product's goals as briefed) and the allowance for chance. */
 export const LIMITS = { exactRight: 0.99, minCoverage: 0.93, maxCoverage: 0.995 };
 /**
@@ -323,7 +359,8 @@ export interface Judgement {
 }
 
 /**
- * (a) Exact-right ≥ 99 % among flagged-exact trials: fails when the Wilson upper bound is below.
+ * (a) Exact-right ≥ 99 % among flagged-exact trials: fails when the Clopper–Pearson upper bound
+ *     (one-sided 0.135 %, as z = 3) is below.
  * (b) Resolved regimes (isResolved): interval coverage ≥ 93 %: fails when the upper bound is below.
  * (c) Resolved regimes with the spread known whose count does not move in steps (movesInSteps):
  *     coverage ≤ 99.5 % (an interval needlessly wide): fails when the Wilson lower bound is above.
@@ -338,7 +375,7 @@ export function judgeRegime(regime: Regime, t: Tally, z: number = ALLOWANCE_Z): 
   const pct = (x: number | null): string => (x == null ? '–' : `${(100 * x).toFixed(2)} %`);
   let exactRightUpper: number | null = null;
   if (t.flaggedExact > 0) {
-    exactRightUpper = wilsonInterval(t.exactRight, t.flaggedExact, z).upper;
+    exactRightUpper = z === ALLOWANCE_Z ? clopperPearsonUpper(t.exactRight, t.flaggedExact, ALPHA_AT_Z3) : wilsonInterval(t.exactRight, t.flaggedExact, z).upper;
     if (exactRightUpper < LIMITS.exactRight) {
       failures.push(`exact-right ${t.exactRight}/${t.flaggedExact} = ${pct(rates.exactRightRate)} (upper ${pct(exactRightUpper)} < 99 %)`);
     }

@@ -286,3 +286,15 @@ describe('grid and judgement', () => {
     expect(thrown.firstError).toBe('RangeError: nope');
   });
 });
+
+describe('clopperPearsonUpper', () => {
+  // Exact binomial bounds (Clopper and Pearson 1934): with no failure in n trials the upper bound on
+  // the failure-free rate is 1; with 0 of 1 right it is 1 − α; with k of n it solves P(X ≤ k) = α.
+  it('gives the exact binomial bound', async () => {
+    const { clopperPearsonUpper } = await import('./grid');
+    expect(clopperPearsonUpper(5, 5, 0.00135)).toBe(1);
+    expect(clopperPearsonUpper(0, 1, 0.00135)).toBeCloseTo(1 - 0.00135, 6);
+    // 1 of 2: P(X ≤ 1) = 1 − p² = α → p = √(1 − α)
+    expect(clopperPearsonUpper(1, 2, 0.00135)).toBeCloseTo(Math.sqrt(1 - 0.00135), 6);
+  });
+});

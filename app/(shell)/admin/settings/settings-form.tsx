@@ -11,7 +11,7 @@ import { FormField, FormMessage } from '../../../_components/form-field';
 const schema = yup.object({
   siteName: yup.string().trim().max(120).required('Site name is required'),
   displayUnit: yup.string().oneOf([...WEIGHT_UNITS]).required(),
-  defaultPieceSpread: yup.number().typeError('A number, e.g. 0.02').moreThan(0, 'Must be above 0').max(0.5, 'At most 0.5').required(),
+  defaultPieceSpread: yup.number().typeError('A number, e.g. 0.05').moreThan(0, 'Must be above 0').max(0.5, 'At most 0.5').required(),
   stabilityWindowMs: yup.number().typeError('A whole number of ms').integer().min(200, 'At least 200 ms').max(10000, 'At most 10 s').required(),
   varianceThresholdPct: yup.number().typeError('A number').min(0).max(100).required(),
   varianceThresholdPcs: yup.number().typeError('A whole number').integer().min(0).required(),
@@ -49,7 +49,7 @@ export function SettingsForm({ initial }: { initial: SettingsDto }) {
               {WEIGHT_UNITS.map((u) => <option key={u} value={u}>{u}</option>)}
             </Field>
           </div>
-          <FormField name="defaultPieceSpread" label="Default piece-weight spread (coefficient of variation)" inputMode="decimal" hint="Used until a part has learned its own; 0.02 means pieces typically differ by 2 % (common practice for stamped and machined fasteners)." />
+          <FormField name="defaultPieceSpread" label="Assumed piece-weight spread (coefficient of variation)" inputMode="decimal" hint="Used until a part has learned its own, as a cautious upper value: counts of unlearned parts stay right for parts that vary up to this much. 0.05 (5 %) covers springs, moulded plastic and wire forms (common practice); a lower value makes unlearned counts look surer than they may be." />
           <FormField name="stabilityWindowMs" label="Stability window (ms)" inputMode="numeric" hint="A reading counts as steady when it stays within one division for this long." />
           <div className="grid gap-4 sm:grid-cols-2">
             <FormField name="varianceThresholdPct" label="Variance needing approval (%)" inputMode="decimal" />

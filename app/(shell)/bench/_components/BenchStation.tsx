@@ -19,6 +19,7 @@ import { createCaptureQueue, type QueuedCapture, type SendOutcome } from '../_li
 import { buildCaptureBody } from '../_lib/capture-request';
 import type { PipelineWork } from '../_lib/reading-pipeline';
 import { planNextGrow, suggestSampleQuantity } from '../_lib/sample-advice';
+import { describeSpread } from '../_lib/spread-note';
 import { shortcutFor, type ShortcutAction } from '../_lib/shortcuts';
 import { sampleStaysOnPan, type WorkItem } from '../_lib/work-item';
 import { browserStore, newCaptureKey } from './browser-store';
@@ -302,6 +303,9 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
   const verdict = work?.targetQuantity != null && frame?.estimate && (work.step === 'count' || work.step === 'captured')
     ? judgeKitLine({ count: frame.estimate.count, wholePieceRange: frame.estimate.wholePieceRange }, { target: work.targetQuantity, below: work.tolerance?.below ?? 0, above: work.tolerance?.above ?? 0 })
     : null;
+  const spreadNote = work && part && noise
+    ? describeSpread({ belief: spreadOrAssumed, noise, averagePieceWeight: work.sample ? work.sample.netWeight / work.sample.quantity : part.averagePieceWeight, sampleQuantity: work.sample?.quantity ?? sampleQty, sampleOnPan: sampleStaysOnPan(work.purpose) })
+    : null;
   const showing = !work || work.step === 'tare' ? 'gross' : work.step === 'sample' ? 'net' : 'count';
   const kind = scale?.connection.kind;
 
@@ -324,6 +328,11 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
             <p role="status" data-testid="notice" className={`rounded-md px-4 py-3 text-lg ${notice.tone === 'fault' ? 'bg-fault-light text-fault' : notice.tone === 'ok' ? 'bg-ok-light text-ok' : 'bg-forge-light text-forge-dark'}`}>{notice.text}</p>
           ) : null}
           <WarningList codes={codes} />
+          {spreadNote ? (
+            <p data-testid="spread-note" className="rounded-md bg-paper-deep px-4 py-2 text-sm">
+              {spreadNote.headline}.{spreadNote.more ? ` ${spreadNote.more}` : ''}
+            </p>
+          ) : null}
           {scale ? <LoadNotes capacity={scale.capacity} load={frame?.load ?? null} /> : null}
           {work ? (
             <StepPanel
