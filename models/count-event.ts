@@ -9,6 +9,8 @@ export class CountEvent extends Model<InferAttributes<CountEvent>, InferCreation
   declare purpose: CountPurpose;
   declare partId: number;
   declare scaleId: number;
+  /** The scale the load was weighed on, when not the sample's. */
+  declare bulkScaleId: CreationOptional<number | null>;
   declare containerId: number | null;
   declare grossG: string;
   declare tareG: string;
@@ -46,6 +48,7 @@ export class CountEvent extends Model<InferAttributes<CountEvent>, InferCreation
         purpose: { type: DataTypes.ENUM(...COUNT_PURPOSES), allowNull: false },
         partId: { type: DataTypes.INTEGER, allowNull: false },
         scaleId: { type: DataTypes.INTEGER, allowNull: false },
+        bulkScaleId: { type: DataTypes.INTEGER, allowNull: true },
         containerId: { type: DataTypes.INTEGER, allowNull: true },
         grossG: { type: grams(), allowNull: false },
         tareG: { type: grams(), allowNull: false },

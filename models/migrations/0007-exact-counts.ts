@@ -15,6 +15,7 @@ export async function up({ context: q }: { context: QueryInterface }): Promise<v
   await q.addColumn('piece_weight_samples', 'decided_at', { type: DataTypes.DATE, allowNull: true });
   await q.addIndex('piece_weight_samples', ['status']);
 
+  await q.addColumn('count_events', 'bulk_scale_id', { type: DataTypes.INTEGER, allowNull: true, references: { model: 'scales', key: 'id' } });
   await q.addColumn('count_events', 'probability_exact', { type: DataTypes.DECIMAL(8, 6), allowNull: true });
   await q.addColumn('count_events', 'whole_piece_range', { type: DataTypes.INTEGER, allowNull: true });
   await q.addColumn('count_events', 'uncertain_pieces', { type: DataTypes.DECIMAL(14, 4), allowNull: true });
@@ -29,7 +30,7 @@ export async function up({ context: q }: { context: QueryInterface }): Promise<v
 
 export async function down({ context: q }: { context: QueryInterface }): Promise<void> {
   await q.removeColumn('build_order_lines', 'whole_piece_range');
-  for (const c of ['apw_relative_variance', 'uncertain_pieces', 'whole_piece_range', 'probability_exact']) await q.removeColumn('count_events', c);
+  for (const c of ['apw_relative_variance', 'uncertain_pieces', 'whole_piece_range', 'probability_exact', 'bulk_scale_id']) await q.removeColumn('count_events', c);
   await q.removeIndex('piece_weight_samples', ['status']);
   for (const c of ['decided_at', 'decided_by', 'net_variance_g2', 'hold_reason', 'status']) await q.removeColumn('piece_weight_samples', c);
   for (const c of ['spread_dof', 'spread_noise', 'spread_scatter']) await q.removeColumn('parts', c);

@@ -16,6 +16,9 @@ export const recordCountSchema = z.object({
   purpose: purposeSchema,
   partId: wholeCount('Part'),
   scaleId: wholeCount('Scale'),
+  // The load weighed on another scale than the sample (a platform for the bulk): gross and tare are
+  // that scale's readings, and the sample stays apart.
+  bulkScaleId: wholeCount('Bulk scale').nullish(),
   containerId: wholeCount('Container').nullish(),
   unit: unitSchema.default('g'),
   gross: nonNegativeNumber('Gross weight'),
@@ -85,6 +88,8 @@ export interface CountEventDto {
   purpose: CountPurpose;
   partId: number;
   scaleId: number;
+  /** The scale the load was weighed on, when not the sample's. */
+  bulkScaleId: number | null;
   containerId: number | null;
   unit: 'g';
   gross: number;

@@ -105,6 +105,23 @@ describe('POST /api/v1/counts', () => {
     expect(c.wholePieceRange === 0).toBe(c.exact);
   });
 
+  it('counts a bulk weighed on a platform from a sample weighed on a fine scale, with both scales\' calibration', async () => {
+    const { agent } = await signedIn('clerk');
+    const part = await createPart({ pieceSpread: 0.005 });
+    const fine = await createScale({ divisionG: 0.001, eG: 0.01, capacityG: 600, repeatabilityG: 0.0005 });
+    const platform = await createScale({ divisionG: 1, eG: 10, capacityG: 60000, repeatabilityG: 0.5 });
+    const body = capture(part.id, fine.id, { bulkScaleId: platform.id, sampleOnPan: false, gross: 6450, tare: 450, sample: { quantity: 50, netWeight: 30.012 } });
+    const res = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(body);
+    expect(res.status).toBe(201);
+    expect(res.body.count).toMatchObject({ scaleId: fine.id, bulkScaleId: platform.id, count: 9996, exact: false });
+    const onePlatform = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send({ ...body, bulkScaleId: fine.id });
+    expect(onePlatform.status).toBe(400);
+    expect(onePlatform.body.error.fields.bulkScaleId).toBeTruthy();
+    const onPan = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send({ ...body, sampleOnPan: true });
+    expect(onPan.status).toBe(400);
+    expect(onPan.body.error.fields.sampleOnPan).toBeTruthy();
+  });
+
   it.each([
     ['a moving reading', { stable: false }, 422, 'unstable'],
     ['a load above Max', { gross: 6000.5 }, 422, 'over_capacity'],

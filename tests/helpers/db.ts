@@ -72,6 +72,8 @@ export async function createPart(overrides: Partial<{ partNumber: string; pieceS
     apwG: overrides.apwG === undefined ? null : String(overrides.apwG),
     apwSampleSize: overrides.apwG === undefined ? null : 10,
     pieceSpread: overrides.pieceSpread === undefined || overrides.pieceSpread === null ? null : String(overrides.pieceSpread),
+    // A spread given here stands for one learned well: from 100 pieces put on one at a time.
+    ...(overrides.pieceSpread == null ? {} : { spreadScatter: overrides.pieceSpread ** 2, spreadNoise: 0, spreadDof: 99, spreadObservations: 100 }),
     photoFile: null,
   });
 }

@@ -15,6 +15,7 @@ export function toCountEventDto(e: CountEvent): CountEventDto {
     purpose: e.purpose,
     partId: e.partId,
     scaleId: e.scaleId,
+    bulkScaleId: e.bulkScaleId ?? null,
     containerId: e.containerId,
     unit: 'g',
     gross: Number(e.grossG),

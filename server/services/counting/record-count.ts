@@ -1,7 +1,7 @@
 import 'server-only';
 import { createHash } from 'node:crypto';
-import { UniqueConstraintError } from 'sequelize';
-import { Container, CountEvent, Part } from '@/models';
+import { UniqueConstraintError, type Transaction } from 'sequelize';
+import { Container, CountEvent, Part, type Scale } from '@/models';
 import { binCountFor } from '../bins/bin-count-for';
 import { lineProgress } from '../orders/line-progress';
 import { assessCount } from '@/lib/weighing';
@@ -16,7 +16,7 @@ import { applyBinCount, type BinCountResult } from '../bins/apply-bin-count';
 import { notifyPendingVariance } from '../bins/notify-pending-variance';
 import { applyCountToLine, type LineProgress } from '../orders/apply-count-to-line';
 import { partSpreadBelief } from '../parts/part-spread-belief';
-import { loadUsableScale, scaleNoise } from '../scales/usable-scale';
+import { loadUsableScale, scaleNoise, scaleWeighingAt } from '../scales/usable-scale';
 import { getSettings } from '../settings/get-settings';
 import { toCountEventDto } from './count-event-dto';
 import { lockCountTarget } from './lock-count-target';
@@ -58,24 +58,28 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
         throw new AppError('not_found', 'Container was not found', { fields: { containerId: 'no such container' } });
       }
       const scale = await loadUsableScale(input.scaleId, transaction);
+      const bulkScale = input.bulkScaleId ? await loadBulkScale(input, transaction) : null;
+      const loadScale = bulkScale ?? scale;
       await lockCountTarget(input, transaction);
       const g = (v: number) => toGrams(v, input.unit);
-      const noise = scaleNoise(scale);
+      const noise = scaleNoise(loadScale);
       const gross = g(input.gross);
       const tare = acceptedTare(g(input.tare), noise.division);
       const net = gross - tare;
       const sampleNet = g(input.sample.netWeight);
-      const capacity = Number(scale.capacityG);
+      const capacity = Number(loadScale.capacityG);
       if (!input.stable) throw new AppError('unstable', 'The reading was still moving; wait until it settles and capture again');
       if (gross > capacity) throw new AppError('over_capacity', `The load is above the scale's capacity (${capacity} g); the reading cannot be used`);
       if (net <= 0) throw new AppError('validation_failed', 'Nothing to count', { fields: { gross: 'gross must be larger than tare' } });
       if (input.sampleOnPan && sampleNet > net + noise.division) {
         throw new AppError('validation_failed', 'Some fields need attention', { fields: { 'sample.netWeight': 'the sample cannot weigh more than the whole pan when it stays on it' } });
       }
+      const sampleScale = bulkScale ? scaleWeighingAt(scale, sampleNet) : scaleNoise(scale);
       const { result, share } = assessCount(
         {
           unit: 'g',
-          scale: { ...noise, max: capacity, min: Number(scale.minLoadG) },
+          scale: { ...sampleScale, max: Number(scale.capacityG), min: Number(scale.minLoadG) },
+          ...(bulkScale ? { bulkScale: { ...scaleWeighingAt(bulkScale, net), max: capacity, min: Number(bulkScale.minLoadG) } } : {}),
           sample: { quantity: input.sample.quantity, netWeight: sampleNet },
           netWeight: net,
           sampleOnPan: input.sampleOnPan,
@@ -91,6 +95,7 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
           purpose: input.purpose,
           partId: part.id,
           scaleId: scale.id,
+          bulkScaleId: bulkScale?.id ?? null,
           containerId: input.containerId ?? null,
           grossG: String(gross),
           tareG: String(tare),
@@ -139,6 +144,17 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
   // The count stands whatever happens to the notice; a failed one is in the log and the outbox.
   if (answer.binCount?.status === 'pending') await notifyPendingVariance(answer.binCount, by).catch((err) => log.error({ err }, 'variance notice failed'));
   return answer;
+}
+
+// The bulk's own scale: another scale than the sample's, usable, and the sample set apart.
+async function loadBulkScale(input: RecordCountInput, transaction: Transaction): Promise<Scale> {
+  if (input.bulkScaleId === input.scaleId) {
+    throw new AppError('validation_failed', 'Some fields need attention', { fields: { bulkScaleId: 'the bulk scale must be another scale than the sample\'s' } });
+  }
+  if (input.sampleOnPan) {
+    throw new AppError('validation_failed', 'Some fields need attention', { fields: { sampleOnPan: 'with the bulk on another scale the sample is weighed apart: sampleOnPan must be false' } });
+  }
+  return loadUsableScale(input.bulkScaleId!, transaction);
 }
 
 // An empty pan tared a hair below zero (−0.0048 g on a 0.001 g scale) is zero: within one division

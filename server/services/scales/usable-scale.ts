@@ -1,6 +1,8 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
 import { Scale } from '@/models';
+import { mpeAt } from '@/lib/metrology/mpe';
+import { rectangularUncertainty, type WeighingScale } from '@/lib/weighing';
 import { AppError } from '../../errors';
 
 // Loads a scale for a capture inside the caller's transaction. The shared row lock makes a
@@ -18,3 +20,11 @@ export function scaleNoise(scale: Scale): { division: number; repeatability: num
   return { division: Number(scale.divisionG), repeatability: scale.repeatabilityG === null ? 0 : Number(scale.repeatabilityG) };
 }
 
+
+// The scale as a count weighs with it at one load, when sample and bulk are on different scales:
+// its calibration is known to its in-service MPE there (OIML R 76-1 Table 6, twice in service),
+// taken as rectangular (GUM 4.3.7: u = MPE/√3).
+export function scaleWeighingAt(scale: Scale, load: number): WeighingScale {
+  const mpe = mpeAt(scale.accuracyClass, Number(scale.verificationIntervalG), load, 'in_service');
+  return { ...scaleNoise(scale), calibrationUncertainty: rectangularUncertainty(mpe) };
+}
