@@ -36,4 +36,10 @@ describe('displayDecimals', () => {
     expect(formatWeight(0, 0.001)).toBe('0.000');
     expect(formatWeight(1234.4, 2)).toBe('1234');
   });
+
+  it('never shows a negative zero', () => {
+    expect(formatWeight(-0.0004, 0.001)).toBe('0.000');
+    expect(formatWeight(-0, 1)).toBe('0');
+    expect(formatWeight(-0.0006, 0.001)).toBe('-0.001');
+  });
 });

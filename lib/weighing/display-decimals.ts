@@ -13,7 +13,8 @@ export function displayDecimals(division: number): number {
   return 9;
 }
 
-/** A weight rounded to the division's decimals, as text. */
+/** A weight rounded to the division's decimals, as text; never "−0.000" (a zero below zero is zero). */
 export function formatWeight(value: number, division: number): string {
-  return value.toFixed(displayDecimals(division));
+  const text = value.toFixed(displayDecimals(division));
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
 }

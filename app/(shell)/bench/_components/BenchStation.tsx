@@ -213,14 +213,19 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
       const next = finishPieceSample(work);
       setWork(next);
       if (frameRef.current) trace.mark(frameRef.current.t, 'sample', `sample ${next.sample?.quantity}`);
-      void apiFetch<{ part: PartDto }>(`/api/v1/parts/${work.partId}/samples`, {
+      void apiFetch<{ part: PartDto; held: boolean }>(`/api/v1/parts/${work.partId}/samples`, {
         method: 'POST',
         body: { scaleId: scale.id, unit: 'g', quantity: increments.length, netWeight: Number(next.sample!.netWeight.toFixed(6)), increments: increments.map((x) => Number(x.toFixed(6))) },
       }).then((r) => {
-        if (r.ok) {
+        if (r.ok && r.data.held) {
+          setNotice({ tone: 'info', text: `Sample of ${increments.length} recorded, but held for review: it is far from what this part has weighed before, so the part keeps its piece weight until a planner or quality engineer accepts it. Check that this is the right part.` });
+        } else if (r.ok) {
           setPart(r.data.part);
-          setNotice({ tone: 'ok', text: `Sample of ${increments.length} recorded piece by piece${r.data.part.spreadLearned ? '; this part’s spread is now learned' : ''}.` });
-        } else setNotice({ tone: 'fault', text: `The sample was not recorded: ${r.message}` });
+          setNotice({ tone: 'ok', text: `Sample of ${increments.length} recorded piece by piece${r.data.part.spreadLearned ? `; this part’s spread is now learned from ${r.data.part.spreadObservations} pieces` : ''}.` });
+        } else {
+          const why = Object.values(r.fields ?? {})[0];
+          setNotice({ tone: 'fault', text: `The sample was not recorded: ${r.message}${why ? ` — ${why}` : ''}.` });
+        }
       });
     },
     grow() {
