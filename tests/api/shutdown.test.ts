@@ -1,4 +1,5 @@
 import { once } from 'node:events';
+import http from 'node:http';
 import { describe, expect, it } from 'vitest';
 import { PartStock } from '../../models';
 import { startAnotherApp } from '../helpers/app-process';
@@ -6,6 +7,16 @@ import { holdRowLocks, waitForLockWaits } from '../helpers/database-faults';
 import { testDb } from '../helpers/db';
 import { signedIn } from '../helpers/http';
 import { releasedOrder } from '../helpers/orders';
+
+function probeNewConnection(url: string): Promise<'answered' | 'refused'> {
+  return new Promise((resolve) => {
+    const req = http.get(url, { agent: false }, (res) => {
+      res.resume();
+      resolve('answered');
+    });
+    req.on('error', () => resolve('refused'));
+  });
+}
 
 describe('graceful shutdown', () => {
   it('on SIGTERM stops taking new requests, finishes the release in flight, and exits', { timeout: 60_000 }, async () => {
@@ -23,8 +34,9 @@ describe('graceful shutdown', () => {
       await waitForLockWaits(1);
       const exited = once(app.child, 'exit');
       app.child.kill('SIGTERM');
-      // A new connection is refused once the listener has closed.
-      await expect.poll(() => fetch(`${app.url}/api/v1/health`).then(() => 'answered', () => 'refused'), { timeout: 10_000 }).toBe('refused');
+      // A new connection is refused once the listener has closed. Each probe opens its own connection:
+      // fetch would reuse a kept-alive one from an earlier probe, which the closing server still serves.
+      await expect.poll(() => probeNewConnection(`${app.url}/api/v1/health`), { timeout: 10_000 }).toBe('refused');
       expect(app.child.exitCode).toBeNull();
 
       await locks.release();

@@ -2,6 +2,7 @@
 
 import type { ContainerDto } from '@/server/schemas/containers';
 import type { GrowPlan } from '@/lib/weighing/grow-sample';
+import { allows, type BenchAction } from '../_lib/bench-machine';
 import type { BenchWork } from '../_lib/bench-work';
 import { SHORTCUTS } from '../_lib/shortcuts';
 import { KeyButton } from './KeyButton';
@@ -56,6 +57,8 @@ function ContainerSelect({ containers, value, onChange, label }: { containers: C
 // One step at a time, with the next action as the big button and its key shown on it.
 export function StepPanel(p: Props) {
   const { work, actions } = p;
+  // The buttons read the same list as the keys: what the machine allows at this step.
+  const off = (action: BenchAction, busy = false): boolean => !allows(work, action) || busy;
   const bin = work.purpose === 'bin';
   const pieceByPiece = work.pieceReadings.length > 1;
   const steps = STEP_NAMES.filter(([s]) => !(bin && s === 'grow'));
@@ -74,8 +77,8 @@ export function StepPanel(p: Props) {
           <h2 id="step-title" className="text-xl font-bold">{bin ? 'Empty the pan and zero it' : 'Put the empty container on the pan'}</h2>
           {!bin ? <ContainerSelect containers={p.containers} value={p.containerChoice} onChange={p.onContainerChoice} label="Container (for its preset tare)" /> : null}
           <div className="flex flex-wrap gap-2">
-            <KeyButton shortcut={SHORTCUTS.tare} onClick={actions.tare} disabled={p.busy}>{bin ? 'Zero the empty pan' : 'Tare now'}</KeyButton>
-            {!bin ? <KeyButton tone="quiet" shortcut={SHORTCUTS.presetTare} onClick={actions.presetTare} disabled={p.containerChoice === null}>Use preset tare</KeyButton> : null}
+            <KeyButton shortcut={SHORTCUTS.tare} onClick={actions.tare} disabled={off('tare', p.busy)}>{bin ? 'Zero the empty pan' : 'Tare now'}</KeyButton>
+            {!bin ? <KeyButton tone="quiet" shortcut={SHORTCUTS.presetTare} onClick={actions.presetTare} disabled={off('presetTare', p.containerChoice === null)}>Use preset tare</KeyButton> : null}
           </div>
         </div>
       ) : null}
@@ -89,9 +92,9 @@ export function StepPanel(p: Props) {
             </div>
           ) : null}
           <div className="flex flex-wrap gap-2">
-            {!pieceByPiece ? <KeyButton shortcut={SHORTCUTS.sample} onClick={actions.sample} disabled={p.busy}>Sample of {p.sampleQty} is on</KeyButton> : null}
-            <KeyButton tone={pieceByPiece ? 'primary' : 'quiet'} shortcut={SHORTCUTS.piece} onClick={actions.piece} disabled={p.busy}>One more piece is on</KeyButton>
-            {pieceByPiece ? <KeyButton tone="quiet" shortcut={SHORTCUTS.finishPieces} onClick={actions.finishPieces} disabled={p.busy}>Sample complete</KeyButton> : null}
+            {!pieceByPiece ? <KeyButton shortcut={SHORTCUTS.sample} onClick={actions.sample} disabled={off('sample', p.busy)}>Sample of {p.sampleQty} is on</KeyButton> : null}
+            <KeyButton tone={pieceByPiece ? 'primary' : 'quiet'} shortcut={SHORTCUTS.piece} onClick={actions.piece} disabled={off('piece', p.busy)}>One more piece is on</KeyButton>
+            {pieceByPiece ? <KeyButton tone="quiet" shortcut={SHORTCUTS.finishPieces} onClick={actions.finishPieces} disabled={off('finishPieces', p.busy)}>Sample complete</KeyButton> : null}
           </div>
           <p className="text-sm text-ink-soft">Building it piece by piece records each piece’s weight, which teaches Tallyforge how much this part varies.</p>
         </div>
@@ -107,8 +110,8 @@ export function StepPanel(p: Props) {
             </p>
           )}
           <div className="flex flex-wrap gap-2">
-            <KeyButton shortcut={SHORTCUTS.grow} onClick={actions.grow} disabled={p.busy}>Accept grown sample</KeyButton>
-            <KeyButton tone="quiet" shortcut={SHORTCUTS.count} onClick={actions.count}>Count to target</KeyButton>
+            <KeyButton shortcut={SHORTCUTS.grow} onClick={actions.grow} disabled={off('grow', p.busy)}>Accept grown sample</KeyButton>
+            <KeyButton tone="quiet" shortcut={SHORTCUTS.count} onClick={actions.count} disabled={off('count')}>Count to target</KeyButton>
           </div>
         </div>
       ) : null}
@@ -116,7 +119,7 @@ export function StepPanel(p: Props) {
         <div className="space-y-3">
           <h2 id="step-title" className="text-xl font-bold">{bin ? 'Put the bin on the pan' : 'Add pieces up to the target'}</h2>
           {bin ? <ContainerSelect containers={p.containers} value={work.containerId} onChange={p.onContainerChoice} label="The bin’s container (its tare comes off)" /> : null}
-          <KeyButton shortcut={SHORTCUTS.capture} onClick={actions.capture} disabled={p.busy || p.captureBlocked !== null} className="w-full">Capture this count</KeyButton>
+          <KeyButton shortcut={SHORTCUTS.capture} onClick={actions.capture} disabled={off('capture', p.busy || p.captureBlocked !== null)} className="w-full">Capture this count</KeyButton>
           {p.captureBlocked ? <p className="font-bold text-fault" data-testid="capture-blocked">{p.captureBlocked}</p> : null}
           <p className="text-sm text-ink-soft">Counts used to sell or bill by quantity need a scale verified for legal trade; this count alone does not make it so.</p>
         </div>
@@ -124,7 +127,7 @@ export function StepPanel(p: Props) {
       {work.step === 'captured' ? (
         <div className="space-y-3">
           <h2 id="step-title" className="text-xl font-bold">Captured</h2>
-          <KeyButton shortcut={SHORTCUTS.next} onClick={actions.next}>Next count of this part</KeyButton>
+          <KeyButton shortcut={SHORTCUTS.next} onClick={actions.next} disabled={off('next')}>Next count of this part</KeyButton>
         </div>
       ) : null}
     </section>

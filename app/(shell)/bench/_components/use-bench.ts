@@ -1,0 +1,323 @@
+/**
+ * The bench's one owner of side effects: it keeps the count in progress (moved only through the
+ * state machine in _lib/bench-machine.ts), restores and saves it, sends captures or queues them
+ * offline, records pieces-by-piece samples, marks the trace and reads the keys. BenchStation only
+ * lays out what this returns.
+ */
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import type { ReadingSource } from '@/lib/scale/reading';
+import { acceptGrowStep } from '@/lib/weighing/grow-sample';
+import type { SpreadBelief } from '@/lib/weighing/spread-belief';
+import { judgeKitLine } from '@/lib/weighing/tolerance';
+import { describeWarning, type WarningCode } from '@/lib/weighing/warnings';
+import type { ContainerDto } from '@/server/schemas/containers';
+import type { CountEventDto } from '@/server/schemas/counts';
+import type { PartDto } from '@/server/schemas/parts';
+import type { ScaleDto } from '@/server/schemas/scales';
+import { apiFetch } from '@/app/_components/api-client';
+import { allows, captureDone, move, type BenchEvent } from '../_lib/bench-machine';
+import { chooseBinContainer, parseSavedWork, pieceIncrements, startWork, type BenchWork } from '../_lib/bench-work';
+import { createCaptureQueue, type QueuedCapture, type SendOutcome } from '../_lib/capture-queue';
+import { buildCaptureBody } from '../_lib/capture-request';
+import type { PipelineWork } from '../_lib/reading-pipeline';
+import { planNextGrow, suggestSampleQuantity } from '../_lib/sample-advice';
+import { shortcutFor } from '../_lib/shortcuts';
+import { describeSpread } from '../_lib/spread-note';
+import { sampleStaysOnPan, type WorkItem } from '../_lib/work-item';
+import { browserStore, newCaptureKey } from './browser-store';
+import type { StepActions } from './StepPanel';
+import { useReadingFeed } from './use-reading-feed';
+
+export interface BenchOptions {
+  scales: ScaleDto[];
+  containers: ContainerDto[];
+  stabilityWindowMs: number;
+  defaultPieceSpread: number;
+}
+
+const WORK_KEY = 'tallyforge.bench.work';
+const SCALE_KEY = 'tallyforge.bench.scale';
+
+export type Notice = { tone: 'fault' | 'ok' | 'info'; text: string; code?: WarningCode } | null;
+
+// One capture request, whether sent at once or replayed from the offline queue; the key makes a retry safe.
+function postCapture(key: string, body: unknown) {
+  return apiFetch<{ count: CountEventDto }>('/api/v1/counts', { method: 'POST', body, headers: { 'Idempotency-Key': key } });
+}
+
+export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSpread }: BenchOptions) {
+
+  const [work, setWork] = useState<BenchWork | null>(null);
+  const [part, setPart] = useState<PartDto | null>(null);
+  const [scaleId, setScaleId] = useState<number | null>(scales[0]?.id ?? null);
+  const [source, setSource] = useState<ReadingSource | null>(null);
+  const [typed, setTyped] = useState(false);
+  const [notice, setNotice] = useState<Notice>(null);
+  const [result, setResult] = useState<CountEventDto | null>(null);
+  const [queue, setQueue] = useState<QueuedCapture[]>([]);
+  const [containerChoice, setContainerChoice] = useState<number | null>(null);
+  const [sampleQty, setSampleQty] = useState(10);
+  const [busy, setBusy] = useState(false);
+  const [restored, setRestored] = useState(false);
+  const queueStore = useMemo(() => (typeof window === 'undefined' ? null : createCaptureQueue(browserStore)), []);
+
+  const scale = scales.find((s) => s.id === scaleId) ?? null;
+  const pipelineScale = useMemo(
+    () => (scale ? { division: scale.division, repeatability: scale.repeatability ?? 0, capacity: scale.capacity, minLoad: scale.minLoad } : null),
+    [scale],
+  );
+  const spread = part?.spreadBelief ?? null;
+  // Until the part has learned its spread, the site's cautious value stands in for it.
+  const spreadOrAssumed: SpreadBelief = spread ?? { kind: 'assumed', pieceSpread: defaultPieceSpread };
+  const chosenContainer = containers.find((c) => c.id === (work?.containerId ?? containerChoice)) ?? null;
+  const pipelineWork: PipelineWork = {
+    tare: work?.tare ?? work?.panZero ?? 0,
+    sample: work && work.step !== 'tare' && work.step !== 'sample' ? work.sample : null,
+    sampleOnPan: work ? sampleStaysOnPan(work.purpose) : true,
+    targetQuantity: work?.targetQuantity ?? null,
+    spread,
+    containerWeight: chosenContainer?.tare ?? null,
+  };
+  const feedOptions = useMemo(() => ({ windowMs: stabilityWindowMs, defaultPieceSpread }), [stabilityWindowMs, defaultPieceSpread]);
+  const { frame, frameRef, trace } = useReadingFeed(source, pipelineScale, pipelineWork, feedOptions);
+
+  // Resume a count in progress after a reload.
+  useEffect(() => {
+    const saved = parseSavedWork(browserStore.getItem(WORK_KEY));
+    const savedScale = Number(browserStore.getItem(SCALE_KEY));
+    if (saved && scales.some((s) => s.id === saved.scaleId)) {
+      setWork(saved);
+      setScaleId(saved.scaleId);
+      setSampleQty(saved.sample?.quantity ?? 10);
+      void apiFetch<{ part: PartDto }>(`/api/v1/parts/${saved.partId}`).then((r) => r.ok && setPart(r.data.part));
+    } else if (scales.some((s) => s.id === savedScale)) {
+      setScaleId(savedScale);
+    }
+    setQueue(queueStore?.list() ?? []);
+    setRestored(true);
+  }, []); // eslint-disable-line react-hooks/exhaustive-deps
+
+  useEffect(() => {
+    if (!restored) return;
+    if (work) browserStore.setItem(WORK_KEY, JSON.stringify(work));
+    else browserStore.removeItem(WORK_KEY);
+    if (scaleId !== null) browserStore.setItem(SCALE_KEY, String(scaleId));
+  }, [work, scaleId, restored]);
+
+  const sendCapture = useCallback(async (item: QueuedCapture): Promise<SendOutcome> => {
+    const res = await postCapture(item.key, item.body);
+    if (res.ok) return { kind: 'sent' };
+    if (res.status === 0 || res.status >= 500) return { kind: 'offline' };
+    return { kind: 'refused', message: res.message };
+  }, []);
+
+  const flushQueue = useCallback(async () => {
+    if (!queueStore) return;
+    await queueStore.flush(sendCapture);
+    setQueue(queueStore.list());
+  }, [queueStore, sendCapture]);
+
+  // Waiting captures go out when the network is back, and every little while in case no event comes.
+  useEffect(() => {
+    const onOnline = () => void flushQueue();
+    window.addEventListener('online', onOnline);
+    const timer = setInterval(() => queueStore && queueStore.list().length > 0 && void flushQueue(), 5000);
+    void flushQueue();
+    return () => {
+      window.removeEventListener('online', onOnline);
+      clearInterval(timer);
+    };
+  }, [flushQueue, queueStore]);
+
+  const noise = scale ? { division: scale.division, repeatability: scale.repeatability ?? 0 } : null;
+  const growPlan = work?.step === 'grow' && work.sample && noise ? planNextGrow({ noise, sample: work.sample, spread: spreadOrAssumed, upTo: work.targetQuantity != null ? work.targetQuantity + (work.tolerance?.above ?? 0) : undefined }) : null;
+
+  const chooseWork = (item: WorkItem) => {
+    if (!scale) return;
+    void apiFetch<{ part: PartDto }>(`/api/v1/parts/${item.partId}`).then((r) => {
+      if (!r.ok) return setNotice({ tone: 'fault', text: r.message });
+      const p = r.data.part;
+      setPart(p);
+      setResult(null);
+      setNotice(null);
+      const onPan = sampleStaysOnPan(item.purpose);
+      setSampleQty(noise ? suggestSampleQuantity({ noise, averagePieceWeight: p.averagePieceWeight, spread: p.spreadBelief ?? { kind: 'assumed', pieceSpread: defaultPieceSpread }, targetQuantity: item.targetQuantity ?? null, sampleOnPan: onPan }) : 10);
+      const { orderLineId, binId, binVersion } = item;
+      setWork(startWork({ purpose: item.purpose, partId: p.id, partNumber: p.partNumber, label: item.label, scaleId: scale.id, targetQuantity: item.targetQuantity, tolerance: item.tolerance, orderLineId, binId, binVersion }));
+    });
+  };
+
+  /** The latest frame when it is settled; otherwise say why nothing happened. */
+  const settled = () => {
+    const f = frameRef.current;
+    if (!f) {
+      setNotice({ tone: 'fault', text: 'No readings from the scale yet. Connect it first.' });
+      return null;
+    }
+    if (!f.stable) {
+      setNotice({ tone: 'fault', text: describeWarning('unstable').message, code: 'unstable' });
+      return null;
+    }
+    // Above Max the indication means nothing (the load cell may be past its linear range): no step takes it.
+    if (f.load.level === 'over') {
+      setNotice({ tone: 'fault', text: `${describeWarning('over_capacity').message} ${describeWarning('over_capacity').remedy}`, code: 'over_capacity' });
+      return null;
+    }
+    setNotice(null);
+    return f;
+  };
+
+  const locked = scale?.status === 'locked';
+  const captureBlocked = locked
+    ? `This scale is locked${scale?.statusReason ? `: ${scale.statusReason}` : ''}. ${describeWarning('scale_locked').remedy}`
+    : null;
+
+  /** Takes a move of the machine: the new work, or the reason it was refused as the notice. */
+  const apply = (event: BenchEvent): BenchWork | null => {
+    if (!work) return null;
+    const m = move(work, event);
+    if (!m.ok) {
+      setNotice({ tone: 'fault', text: m.reason });
+      return null;
+    }
+    setWork(m.work);
+    return m.work;
+  };
+
+  const actions: StepActions = {
+    tare() {
+      const f = settled();
+      if (f && apply({ action: 'tare', stableGross: f.mean, containerId: containerChoice })) trace.mark(f.t, 'tare', 'tare');
+    },
+    presetTare() {
+      const c = containers.find((x) => x.id === containerChoice);
+      if (!c) return setNotice({ tone: 'fault', text: 'Choose the container first.' });
+      if (apply({ action: 'presetTare', containerId: c.id, containerTare: c.tare }) && frameRef.current) trace.mark(frameRef.current.t, 'tare', 'preset tare');
+    },
+    sample() {
+      const f = settled();
+      if (f && apply({ action: 'sample', quantity: sampleQty, stableGross: f.mean })) trace.mark(f.t, 'sample', `sample ${sampleQty}`);
+    },
+    piece() {
+      const f = settled();
+      if (f && scale) apply({ action: 'piece', stableGross: f.mean, division: scale.division });
+    },
+    finishPieces() {
+      if (!work || !scale) return;
+      const increments = pieceIncrements(work);
+      const next = apply({ action: 'finishPieces' });
+      if (!next) return;
+      if (frameRef.current) trace.mark(frameRef.current.t, 'sample', `sample ${next.sample?.quantity}`);
+      void apiFetch<{ part: PartDto; held: boolean }>(`/api/v1/parts/${work.partId}/samples`, {
+        method: 'POST',
+        body: { scaleId: scale.id, unit: 'g', quantity: increments.length, netWeight: Number(next.sample!.netWeight.toFixed(6)), increments: increments.map((x) => Number(x.toFixed(6))) },
+      }).then((r) => {
+        if (r.ok && r.data.held) {
+          setNotice({ tone: 'info', text: `Sample of ${increments.length} recorded, but held for review: it is far from what this part has weighed before, so the part keeps its piece weight until a planner or quality engineer accepts it. Check that this is the right part.` });
+        } else if (r.ok) {
+          setPart(r.data.part);
+          setNotice({ tone: 'ok', text: `Sample of ${increments.length} recorded piece by piece${r.data.part.spreadLearned ? `; this part’s spread is now learned from ${r.data.part.spreadObservations} pieces` : ''}.` });
+        } else {
+          const why = Object.values(r.fields ?? {})[0];
+          setNotice({ tone: 'fault', text: `The sample was not recorded: ${r.message}${why ? ` — ${why}` : ''}.` });
+        }
+      });
+    },
+    grow() {
+      const f = frameRef.current;
+      if (!f || !work?.sample || !noise) return;
+      const state = { sampleQuantity: work.sample.quantity, sampleNet: work.sample.netWeight, spread: spreadOrAssumed, noise };
+      const r = acceptGrowStep(state, f.mean - (work.tare ?? 0), f.stable);
+      if (r.accepted) {
+        if (!apply({ action: 'grow', sample: { quantity: r.sampleQuantity, netWeight: r.sampleNet } })) return;
+        setNotice({ tone: 'ok', text: `Sample grown to ${r.sampleQuantity} pieces.` });
+        trace.mark(f.t, 'grow', `grown ${r.sampleQuantity}`);
+      } else if (r.reason === 'unstable') setNotice({ tone: 'fault', text: describeWarning('unstable').message, code: 'unstable' });
+      else if (r.reason === 'not_exact') setNotice({ tone: 'fault', text: `Too many pieces were added to count them exactly (${r.count} ± ${r.wholePieceRange}). Take some off, down to the number shown, and accept again.` });
+      else setNotice({ tone: 'fault', text: 'No pieces were added since the last step.' });
+    },
+    count() {
+      apply({ action: 'count' });
+    },
+    async capture() {
+      if (!work || captureBlocked || busy) return;
+      const f = settled();
+      if (!f) return;
+      const keyed = apply({ action: 'capture', makeKey: newCaptureKey });
+      if (!keyed) return;
+      const body = buildCaptureBody(keyed, f.mean);
+      setBusy(true);
+      const res = await postCapture(keyed.captureKey!, body);
+      setBusy(false);
+      trace.mark(f.t, 'capture', 'capture');
+      if (res.ok) {
+        setResult(res.data.count);
+        setWork(captureDone(keyed));
+      } else if (res.status === 0 || res.status >= 500) {
+        queueStore?.add({ key: keyed.captureKey!, body, label: `${keyed.partNumber} · ${frameRef.current?.estimate?.count ?? '?'} pcs`, queuedAt: new Date().toISOString() });
+        setQueue(queueStore?.list() ?? []);
+        setWork(captureDone(keyed));
+        setNotice({ tone: 'info', text: 'The server cannot be reached. The capture is saved on this tablet and will be sent once the connection is back.' });
+      } else {
+        setNotice({ tone: 'fault', text: res.message, code: res.code === 'scale_locked' || res.code === 'unstable' || res.code === 'over_capacity' ? res.code : undefined });
+      }
+    },
+    next() {
+      if (!apply({ action: 'next' })) return;
+      setResult(null);
+      setNotice(null);
+    },
+  };
+  const actionsRef = useRef(actions);
+  actionsRef.current = actions;
+
+  // Keys act on whatever the machine allows now (the same list the step panel shows).
+  const workRef = useRef<BenchWork | null>(null);
+  workRef.current = work;
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      const action = shortcutFor(e);
+      if (!action || action === 'scan' || !allows(workRef.current, action)) return;
+      e.preventDefault();
+      void actionsRef.current[action]();
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, []);
+
+  const codes: WarningCode[] = [];
+  for (const w of frame?.estimate?.warnings ?? []) codes.push(w.code);
+  if (frame?.load.level === 'over' && !codes.includes('over_capacity')) codes.push('over_capacity');
+  if (locked) codes.push('scale_locked');
+  if (notice?.code && !codes.includes(notice.code)) codes.push(notice.code);
+
+  const verdict = work?.targetQuantity != null && frame?.estimate && (work.step === 'count' || work.step === 'captured')
+    ? judgeKitLine({ count: frame.estimate.count, wholePieceRange: frame.estimate.wholePieceRange }, { target: work.targetQuantity, below: work.tolerance?.below ?? 0, above: work.tolerance?.above ?? 0 })
+    : null;
+  const spreadNote = work && part && noise
+    ? describeSpread({ belief: spreadOrAssumed, noise, averagePieceWeight: work.sample ? work.sample.netWeight / work.sample.quantity : part.averagePieceWeight, sampleQuantity: work.sample?.quantity ?? sampleQty, sampleOnPan: sampleStaysOnPan(work.purpose) })
+    : null;
+  const showing: 'gross' | 'net' | 'count' = !work || work.step === 'tare' ? 'gross' : work.step === 'sample' ? 'net' : 'count';
+  const kind = scale?.connection.kind;
+
+  const chooseContainer = (id: number | null) => {
+    if (work?.purpose === 'bin' && work.step === 'count') setWork(chooseBinContainer(work, id, containers.find((c) => c.id === id)?.tare ?? 0));
+    else setContainerChoice(id);
+  };
+  const stop = () => {
+    setWork(null);
+    setResult(null);
+    setNotice(null);
+  };
+  const dropQueued = (key: string) => {
+    queueStore?.remove(key);
+    setQueue(queueStore?.list() ?? []);
+  };
+
+  return {
+    work, part, scale, scaleId, setScaleId, source, setSource, typed, setTyped, kind,
+    frame, frameRef, trace, notice, codes, spreadNote, verdict, showing,
+    actions, chooseWork, chooseContainer, containerChoice, chosenContainer, sampleQty, setSampleQty, growPlan,
+    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued,
+  };
+}
