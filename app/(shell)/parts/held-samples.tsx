@@ -12,7 +12,7 @@ export function HeldSamples({ samples }: { samples: HeldSample[] }) {
   const router = useRouter();
   const [asking, setAsking] = useState<{ id: number; decision: 'accept' | 'reject' } | null>(null);
   const [message, setMessage] = useState<string | null>(null);
-  if (samples.length === 0) return null;
+  if (samples.length === 0 && !message) return null;
   const decide = async (s: HeldSample, decision: 'accept' | 'reject') => {
     const res = await apiFetch(`/api/v1/parts/${s.partId}/samples/${s.id}/decision`, { method: 'POST', body: { decision } });
     setAsking(null);

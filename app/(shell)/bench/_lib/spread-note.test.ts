@@ -15,8 +15,9 @@ describe('describeSpread', () => {
     expect(note.headline).toMatch(/not learned yet: 5\.0 % is assumed/);
   });
 
-  it('offers nothing more for a spread learned from many pieces already', () => {
-    const note = describeSpread({ belief: { kind: 'learned', scatter: 0.002 ** 2, noise: 1e-8, degreesOfFreedom: 2000, observations: 2001 }, noise, averagePieceWeight: 0.6, sampleQuantity: 10, sampleOnPan: true });
+  it('offers nothing more when ten pieces would add less than a tenth to the reach', () => {
+    const note = describeSpread({ belief: { kind: 'learned', scatter: 0.01 ** 2, noise: 1e-8, degreesOfFreedom: 99, observations: 100 }, noise: { division: 0.1, repeatability: 0.02 }, averagePieceWeight: 2.5, sampleQuantity: 10, sampleOnPan: true });
+    expect(note.headline).toBe('Piece spread 1.0 % from 100 pieces');
     expect(note.more).toBeNull();
   });
 });

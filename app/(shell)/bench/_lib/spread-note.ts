@@ -3,6 +3,7 @@ import { exactReach, planningSpread, spreadEstimate, spreadNodes, type SpreadBel
 
 /** Pieces an operator can put on one at a time without it becoming a chore (our choice). */
 export const MORE_PIECES = 10;
+const WORTHWHILE_GAIN = 1.1;
 
 export interface SpreadNote {
   /** e.g. "Piece spread 1.8 % from 24 pieces one at a time". */
@@ -11,7 +12,7 @@ export interface SpreadNote {
   more: string | null;
 }
 
-const percent = (c: number): string => `${(c * 100).toFixed(c < 0.01 ? 2 : 1)} %`;
+const percent = (c: number): string => `${(c * 100).toFixed(c < 0.00995 ? 2 : 1)} %`;
 
 export function describeSpread(input: {
   belief: SpreadBelief;
@@ -35,7 +36,8 @@ export function describeSpread(input: {
   const nu = belief.kind === 'learned' ? belief.degreesOfFreedom : 0;
   const better: SpreadBelief = { kind: 'learned', scatter: c2, noise, degreesOfFreedom: nu + MORE_PIECES, observations: observations + MORE_PIECES };
   const then = exactReach(model, planningSpread(spreadNodes(better)));
-  if (then.maxQuantity <= now.maxQuantity) return { headline, more: null };
+  // Only a gain worth the operator's minute is offered: a tenth more reach at least (our choice).
+  if (then.maxQuantity < Math.max(now.maxQuantity + 1, now.maxQuantity * WORTHWHILE_GAIN)) return { headline, more: null };
   const reach = (q: number): string => (q === 0 ? 'nothing' : `up to ${q}`);
   return {
     headline,
