@@ -1,6 +1,8 @@
 'use client';
 
 import { useEffect, useMemo, useRef, useState } from 'react';
+import { isTypingTarget } from '../_lib/shortcuts';
+import { afterScan, createWedgeDetector } from '../_lib/wedge-scan';
 import type { ToleranceBand, WorkItem, WorkPurpose } from '../_lib/work-item';
 import { binWorkSource } from './bin-work-source';
 import { partWorkSource } from './part-work-source';
@@ -43,15 +45,30 @@ export function WorkChooser({ onChoose, disabled, initialBin }: Props) {
     };
   }, [query, source]);
 
+  // A scanner works wherever focus is: a fast burst ending in Enter is a scan, read into the scan
+  // field in place of what it held. `/` puts the cursor there with its text selected.
+  const scanAs = useRef<(code: string) => void>(() => undefined);
   useEffect(() => {
-    const focusScan = (e: KeyboardEvent) => {
-      if (e.key === '/' && document.activeElement?.tagName !== 'INPUT') {
+    const wedge = createWedgeDetector();
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key === '/' && !isTypingTarget(e.target)) {
         e.preventDefault();
         scanRef.current?.focus();
+        scanRef.current?.select();
+        return;
+      }
+      const code = wedge.key(e.key, e.timeStamp);
+      if (!code) return;
+      if (e.target === scanRef.current) {
+        e.preventDefault();
+        scanAs.current(afterScan(scanRef.current!.value, code));
+      } else if (!isTypingTarget(e.target)) {
+        e.preventDefault();
+        scanAs.current(code);
       }
     };
-    window.addEventListener('keydown', focusScan);
-    return () => window.removeEventListener('keydown', focusScan);
+    window.addEventListener('keydown', onKey, true);
+    return () => window.removeEventListener('keydown', onKey, true);
   }, []);
 
   const choose = (item: WorkItem) => {
@@ -64,11 +81,15 @@ export function WorkChooser({ onChoose, disabled, initialBin }: Props) {
     onChoose({ ...item, targetQuantity: t ?? undefined, tolerance });
   };
 
-  const scan = async () => {
-    if (!query.trim()) return;
-    const hit = await source.resolveScan(query);
+  const scan = async (text: string = query) => {
+    if (!text.trim()) return;
+    const hit = await source.resolveScan(text);
     if (hit) choose(hit);
-    else setMessage(`Nothing to count matches ${query.trim().toUpperCase()} here.`);
+    else setMessage(`Nothing to count matches ${text.trim().toUpperCase()} here.`);
+  };
+  scanAs.current = (code) => {
+    setQuery(code);
+    void scan(code);
   };
 
   return (
@@ -112,7 +133,8 @@ export function WorkChooser({ onChoose, disabled, initialBin }: Props) {
           disabled={disabled}
           onChange={(e) => setQuery(e.target.value)}
           onKeyDown={(e) => {
-            if (e.key === 'Enter') {
+            // A scan's Enter was taken already (the window listener runs first and prevents it).
+            if (e.key === 'Enter' && !e.defaultPrevented) {
               e.preventDefault();
               void scan();
             }
