@@ -12,13 +12,24 @@ function feed(detector: StabilityDetector, from: number, to: number, value: (t: 
 }
 
 describe('isWindowStable', () => {
-  it('accepts readings all within one division of their mean', () => {
-    expect(isWindowStable([10.0, 10.01, 10.02, 10.01], d)).toBe(true);
+  const quiet = { division: d };
+  it('accepts readings all within one division of their mean on a quiet scale', () => {
+    expect(isWindowStable([10.0, 10.01, 10.02, 10.01], quiet)).toBe(true);
   });
 
-  it('refuses a window with one reading more than a division from the mean', () => {
-    expect(isWindowStable([10.0, 10.0, 10.0, 10.05], d)).toBe(false);
-    expect(isWindowStable([], d)).toBe(false);
+  it('refuses a window with one reading well away from the mean', () => {
+    expect(isWindowStable([10.0, 10.0, 10.0, 10.05], quiet)).toBe(false);
+    expect(isWindowStable([], quiet)).toBe(false);
+  });
+
+  it('allows a noisy scale its own noise, and more once settled (hysteresis)', () => {
+    const noisy = { division: d, repeatability: d / 2 }; // σ = 0.577 d: settle within ±1.73 d, stay within ±2.89 d
+    const wander = [10.0, 10.01, 9.99, 10.01, 10.0, 9.99, 10.01, 10.0];
+    expect(isWindowStable([...wander, 10.02], quiet)).toBe(false);
+    expect(isWindowStable([...wander, 10.015], noisy)).toBe(true);
+    const further = [...wander, 10.025];
+    expect(isWindowStable(further, noisy)).toBe(false);
+    expect(isWindowStable(further, noisy, true)).toBe(true);
   });
 });
 
@@ -65,6 +76,7 @@ describe('StabilityDetector', () => {
     const detector = new StabilityDetector({ division: d, windowMs: 500 });
     const history: { t: number; v: number }[] = [];
     let level = 100;
+    let settled = false;
     for (let i = 0; i < 6000; i += 1) {
       const t = i * period;
       if (random.next() < 0.01) level += (random.next() - 0.5) * 0.2;
@@ -75,8 +87,30 @@ describe('StabilityDetector', () => {
       const full = t >= 500;
       const mean = inWindow.reduce((a, b) => a + b, 0) / inWindow.length;
       expect(state.mean).toBeCloseTo(mean, 9);
-      expect(state.stable).toBe(full && isWindowStable(inWindow, d));
+      expect(state.stable).toBe(full && isWindowStable(inWindow, { division: d }, settled));
+      settled = state.stable;
       if (history.length > 40) history.shift();
     }
+  });
+
+  // The simulator's still pan with noise up to ±1 d (s_r = d/2): before, a ±1 d window flickered.
+  it('keeps an idle noisy pan settled for 15 s, and catches a piece put on at once', () => {
+    const random = createRandom(4242);
+    const detector = new StabilityDetector({ division: d, repeatability: d / 2, windowMs: 1000 });
+    const read = (level: number) => Math.round((level + random.normal() * (d / 2)) / d) * d;
+    let flips = 0;
+    let unsettled = 0;
+    let last = false;
+    for (let t = 0; t <= 16_000; t += period) {
+      const state = detector.push({ t, gross: read(150) });
+      if (t >= 1000) {
+        if (state.stable !== last) flips += 1;
+        if (!state.stable) unsettled += 1;
+      }
+      last = state.stable;
+    }
+    expect(unsettled).toBe(0);
+    expect(flips).toBeLessThanOrEqual(1); // the first settling
+    expect(detector.push({ t: 16_020, gross: read(152.5) }).stable).toBe(false);
   });
 });

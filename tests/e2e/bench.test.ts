@@ -69,6 +69,87 @@ describe('the bench (browser, simulated scale)', () => {
     expect(Number(await result.getAttribute('data-id'))).toBe(events[0].id);
   });
 
+  it('acts on steps pressed while the reading still moves, once it is steady, and keeps an idle tared pan settled for 15 s', { timeout: 90_000 }, async () => {
+    // s_r = d/2: the readings of a still pan wander by about ±1 d.
+    const scale = await benchScale({ repeatabilityG: 0.05 });
+    const part = await createPart({ pieceSpread: 0.01 });
+    const page = await portrait.newPage();
+    await signInThroughPage(page, 'operator');
+    await openBench(page, scale.id);
+    await page.getByLabel('Scan or type a part number').fill(part.partNumber);
+    await page.getByLabel('Scan or type a part number').press('Enter');
+    await expect.poll(() => page.getByRole('heading', { name: 'Put the empty container on the pan' }).isVisible()).toBe(true);
+
+    // Each key is pressed once the pan has started to move, while it settles: the press waits, then acts.
+    const moving = () => expect.poll(() => page.getByTestId('stability').textContent(), { timeout: 5000 }).not.toBe('Settled');
+    await panButton(page, /Place container/);
+    await moving();
+    await page.keyboard.press('t');
+    await expect.poll(() => page.getByTestId('waiting').isVisible(), { timeout: 2000 }).toBe(true);
+    await screenshot(page, 'bench-waiting-steady');
+    await expect.poll(headingShown(page, /Count \d+ pieces onto the pan/)).toBe(true);
+
+    const seen: string[] = [];
+    for (let t = 0; t < 15_000; t += 250) {
+      seen.push((await page.getByTestId('stability').textContent()) ?? '');
+      await page.waitForTimeout(250);
+    }
+    expect(seen.filter((x) => x !== 'Settled')).toEqual([]);
+
+    await page.getByLabel('Pieces in the sample').fill('10');
+    await page.getByLabel('Pieces', { exact: true }).fill('10');
+    await panButton(page, 'Put on 10');
+    await moving();
+    await page.keyboard.press('s');
+    await expect.poll(headingShown(page, 'Grow the sample (now 10 pcs)')).toBe(true);
+    await page.getByLabel('Pieces', { exact: true }).fill('20');
+    await panButton(page, 'Put on 20');
+    await moving();
+    await page.keyboard.press('g');
+    await expect.poll(headingShown(page, 'Grow the sample (now 30 pcs)')).toBe(true);
+    await page.keyboard.press('n');
+    await page.getByLabel('Pieces', { exact: true }).fill('70');
+    await panButton(page, 'Put on 70');
+    await moving();
+    await page.keyboard.press('c');
+    await expect.poll(() => page.getByTestId('capture-result').count(), { timeout: CAPTURE_WAIT_MS }).toBe(1);
+    expect(await page.getByTestId('capture-result').getAttribute('data-count')).toBe('100');
+  });
+
+  it('takes a wedge scan wherever focus is, and a second scan replaces the first', async () => {
+    const scale = await benchScale();
+    const part = await createPart({ pieceSpread: 0.01 });
+    const first = await stockPart(part.id, 120);
+    const second = await stockPart(part.id, 80);
+    const page = await landscape.newPage();
+    await signInThroughPage(page, 'clerk');
+    await openBench(page, scale.id, 12);
+    await page.getByText('Bin count — bin weighed apart').click();
+    const field = page.getByLabel('Scan a bin label or type a part number');
+    // Someone typed into the field, then scanned a label into it: the scan replaces the typing.
+    await field.fill('wrong');
+    await field.focus();
+    await page.keyboard.type(second.code, { delay: 5 });
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.getByRole('heading', { name: 'Empty the pan and zero it' }).isVisible()).toBe(true);
+    await expect.poll(() => page.locator('header').textContent()).toContain(second.code);
+    // Stopping once the count has started asks first, saying what would be lost.
+    await whenSettled(page, () => page.getByRole('button', { name: /Zero the empty pan/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
+    await page.getByRole('button', { name: 'Stop this count and choose other work' }).click();
+    const ask = page.getByRole('alertdialog', { name: 'Stop this count?' });
+    await expect.poll(() => ask.textContent()).toContain('will not be recorded');
+    await ask.getByRole('button', { name: 'Keep counting' }).click();
+    await expect.poll(headingShown(page, /Count \d+ pieces onto the pan/)).toBe(true);
+    await page.getByRole('button', { name: 'Stop this count and choose other work' }).click();
+    await ask.getByRole('button', { name: 'Yes, stop and choose other work' }).click();
+    // Focus on nothing in particular (a button): the scan still lands.
+    await page.getByText('Bin count — bin weighed apart').click();
+    await page.getByRole('heading', { name: 'What are you counting?' }).click();
+    await page.keyboard.type(first.code, { delay: 5 });
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.locator('header').textContent()).toContain(first.code);
+  });
+
   it('counts a kitting-queue line: the target comes from the order, and the capture fills the line', async () => {
     const scale = await benchScale();
     const part = await createPart({ pieceSpread: 0.01 });

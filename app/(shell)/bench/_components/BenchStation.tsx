@@ -1,7 +1,9 @@
 'use client';
 
+import { useState } from 'react';
 import type { ContainerDto } from '@/server/schemas/containers';
 import type { ScaleDto } from '@/server/schemas/scales';
+import type { BenchWork } from '../_lib/bench-work';
 import { CaptureResult } from './CaptureResult';
 import { CountReadout } from './CountReadout';
 import { KeyedEntry } from './KeyedEntry';
@@ -15,7 +17,7 @@ import { SerialConnect } from './SerialConnect';
 import { StepPanel } from './StepPanel';
 import { WarningList } from './WarningList';
 import { WorkChooser } from './WorkChooser';
-import { useBench } from './use-bench';
+import { STEADY_ACTION_WORDS, useBench } from './use-bench';
 
 interface Props {
   scales: ScaleDto[];
@@ -28,13 +30,32 @@ interface Props {
 /** Container put on the practice pan when none is chosen (our demo tray). */
 const PRACTICE_TRAY_G = 150;
 
+/** Stopping throws the count in progress away: where there is something to lose, it asks first, saying what. */
+function StopCount({ work, onStop }: { work: BenchWork; onStop(): void }) {
+  const [asking, setAsking] = useState(false);
+  const atStake = work.step !== 'tare' && work.step !== 'captured';
+  if (!asking) {
+    return <button type="button" className="btn-quiet" onClick={() => (atStake ? setAsking(true) : onStop())}>Stop this count and choose other work</button>;
+  }
+  const lost = work.sample ? `the sample of ${work.sample.quantity} pieces and whatever is counted on the pan` : 'the tare taken for it';
+  return (
+    <div role="alertdialog" aria-label="Stop this count?" className="card space-y-3 border-2 border-caution">
+      <p className="font-bold">Stop this count? {lost[0].toUpperCase() + lost.slice(1)} will not be recorded.</p>
+      <div className="flex flex-wrap gap-2">
+        <button type="button" className="btn-danger" onClick={onStop}>Yes, stop and choose other work</button>
+        <button type="button" className="btn-quiet" onClick={() => setAsking(false)}>Keep counting</button>
+      </div>
+    </div>
+  );
+}
+
 // The bench's layout; what it shows and does comes from useBench.
 export function BenchStation({ scales, containers, stabilityWindowMs, defaultPieceSpread, initialBin }: Props) {
   const {
     work, part, scale, scaleId, setScaleId, setSource, typed, setTyped, kind,
     frame, frameRef, trace, notice, codes, spreadNote, verdict, showing,
     actions, chooseWork, chooseContainer, containerChoice, chosenContainer, sampleQty, setSampleQty, growPlan,
-    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued,
+    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued, waiting, cancelWaiting,
   } = useBench({ scales, containers, stabilityWindowMs, defaultPieceSpread });
 
   return (
@@ -52,6 +73,12 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
       <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="min-w-0 space-y-4">
           <CountReadout frame={frame} division={scale?.division ?? 1} showing={showing} targetQuantity={work?.targetQuantity ?? null} verdict={verdict} />
+          {waiting ? (
+            <p role="status" data-testid="waiting" className="flex flex-wrap items-center justify-between gap-2 rounded-md bg-forge-light px-4 py-3 text-lg text-forge-dark">
+              <span>Waiting for a steady reading to {STEADY_ACTION_WORDS[waiting]}… keep hands off the pan.</span>
+              <button type="button" className="btn-quiet" onClick={cancelWaiting}>Cancel</button>
+            </p>
+          ) : null}
           {notice && !notice.code ? (
             <p role="status" data-testid="notice" className={`rounded-md px-4 py-3 text-lg ${notice.tone === 'fault' ? 'bg-fault-light text-fault' : notice.tone === 'ok' ? 'bg-ok-light text-ok' : 'bg-forge-light text-forge-dark'}`}>{notice.text}</p>
           ) : null}
@@ -77,9 +104,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
             />
           ) : null}
           {result ? <CaptureResult count={result} /> : null}
-          {work ? (
-            <button type="button" className="btn-quiet" onClick={stop}>Stop this count and choose other work</button>
-          ) : null}
+          {work ? <StopCount work={work} onStop={stop} /> : null}
           {scale ? <LiveTrace trace={trace} frameRef={frameRef} division={scale.division} windowMs={stabilityWindowMs} /> : null}
         </div>
         <aside className="min-w-0 space-y-4">

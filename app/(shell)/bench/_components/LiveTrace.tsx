@@ -118,7 +118,7 @@ export function LiveTrace({ trace, frameRef, division, windowMs }: Props) {
     <section aria-labelledby="trace-title" className="card space-y-2">
       <div className="flex items-center justify-between">
         <h2 id="trace-title" className="font-bold">Weight over time</h2>
-        <span className="text-xs text-ink-faint">green band: settled within ±1 d</span>
+        <span className="text-xs text-ink-faint">green band: settled (drawn ±1 d wide)</span>
       </div>
       <div ref={box} data-testid="trace" />
       <label className="flex items-center gap-3 text-sm">

@@ -45,6 +45,17 @@ function postCapture(key: string, body: unknown) {
   return apiFetch<{ count: CountEventDto }>('/api/v1/counts', { method: 'POST', body, headers: { 'Idempotency-Key': key } });
 }
 
+/** The steps that take a steady reading. */
+export type SteadyAction = 'tare' | 'sample' | 'piece' | 'grow' | 'capture';
+
+export const STEADY_ACTION_WORDS: Readonly<Record<SteadyAction, string>> = {
+  tare: 'tare',
+  sample: 'take the sample',
+  piece: 'take the piece',
+  grow: 'accept the grown sample',
+  capture: 'capture the count',
+};
+
 export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSpread }: BenchOptions) {
 
   const [work, setWork] = useState<BenchWork | null>(null);
@@ -59,6 +70,8 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   const [sampleQty, setSampleQty] = useState(10);
   const [busy, setBusy] = useState(false);
   const [restored, setRestored] = useState(false);
+  /** A step pressed while the reading still moved: it acts on the first steady reading. */
+  const [waiting, setWaiting] = useState<SteadyAction | null>(null);
   const queueStore = useMemo(() => (typeof window === 'undefined' ? null : createCaptureQueue(browserStore)), []);
 
   const scale = scales.find((s) => s.id === scaleId) ?? null;
@@ -148,14 +161,19 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   };
 
   /** The latest frame when it is settled; otherwise say why nothing happened. */
-  const settled = () => {
+  /**
+   * The latest frame when it is settled. A press while the reading still moves is not refused: it
+   * waits, visibly and cancellably, and acts on the first steady reading.
+   */
+  const settled = (action: SteadyAction) => {
     const f = frameRef.current;
     if (!f) {
       setNotice({ tone: 'fault', text: 'No readings from the scale yet. Connect it first.' });
       return null;
     }
     if (!f.stable) {
-      setNotice({ tone: 'fault', text: describeWarning('unstable').message, code: 'unstable' });
+      setWaiting(action);
+      setNotice(null);
       return null;
     }
     // Above Max the indication means nothing (the load cell may be past its linear range): no step takes it.
@@ -186,7 +204,7 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
 
   const actions: StepActions = {
     tare() {
-      const f = settled();
+      const f = settled('tare');
       if (f && apply({ action: 'tare', stableGross: f.mean, containerId: containerChoice })) trace.mark(f.t, 'tare', 'tare');
     },
     presetTare() {
@@ -195,11 +213,11 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
       if (apply({ action: 'presetTare', containerId: c.id, containerTare: c.tare }) && frameRef.current) trace.mark(frameRef.current.t, 'tare', 'preset tare');
     },
     sample() {
-      const f = settled();
+      const f = settled('sample');
       if (f && apply({ action: 'sample', quantity: sampleQty, stableGross: f.mean })) trace.mark(f.t, 'sample', `sample ${sampleQty}`);
     },
     piece() {
-      const f = settled();
+      const f = settled('piece');
       if (f && scale) apply({ action: 'piece', stableGross: f.mean, division: scale.division });
     },
     finishPieces() {
@@ -224,7 +242,7 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
       });
     },
     grow() {
-      const f = frameRef.current;
+      const f = settled('grow');
       if (!f || !work?.sample || !noise) return;
       const state = { sampleQuantity: work.sample.quantity, sampleNet: work.sample.netWeight, spread: spreadOrAssumed, noise };
       const r = acceptGrowStep(state, f.mean - (work.tare ?? 0), f.stable);
@@ -241,7 +259,7 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     },
     async capture() {
       if (!work || captureBlocked || busy) return;
-      const f = settled();
+      const f = settled('capture');
       if (!f) return;
       const keyed = apply({ action: 'capture', makeKey: newCaptureKey });
       if (!keyed) return;
@@ -300,6 +318,15 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   const showing: 'gross' | 'net' | 'count' = !work || work.step === 'tare' ? 'gross' : work.step === 'sample' ? 'net' : 'count';
   const kind = scale?.connection.kind;
 
+  useEffect(() => {
+    if (!waiting || !frame?.stable) return;
+    setWaiting(null);
+    void actionsRef.current[waiting]();
+  }, [waiting, frame?.stable]);
+  // A waiting press belongs to the step it was made in.
+  useEffect(() => setWaiting(null), [work?.step, work?.partId]);
+  const cancelWaiting = () => setWaiting(null);
+
   const chooseContainer = (id: number | null) => {
     if (work?.purpose === 'bin' && work.step === 'count') setWork(chooseBinContainer(work, id, containers.find((c) => c.id === id)?.tare ?? 0));
     else setContainerChoice(id);
@@ -318,6 +345,6 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     work, part, scale, scaleId, setScaleId, source, setSource, typed, setTyped, kind,
     frame, frameRef, trace, notice, codes, spreadNote, verdict, showing,
     actions, chooseWork, chooseContainer, containerChoice, chosenContainer, sampleQty, setSampleQty, growPlan,
-    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued,
+    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued, waiting, cancelWaiting,
   };
 }

@@ -49,7 +49,7 @@ function spreadKey(b: SpreadBelief | null): string {
 }
 
 export function createReadingPipeline(scale: PipelineScale, options: { windowMs: number; defaultPieceSpread: number; trace: TraceBuffer }): ReadingPipeline {
-  const detector = new StabilityDetector({ division: scale.division, windowMs: options.windowMs });
+  const detector = new StabilityDetector({ division: scale.division, repeatability: scale.repeatability, windowMs: options.windowMs });
   let lastKey = '';
   let lastEstimate: EstimateCountResult | null = null;
 
