@@ -212,6 +212,8 @@ describe('the bench (browser, simulated scale)', () => {
     const result = page.getByTestId('capture-result');
     await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await result.count()) === 1, CAPTURE_WAIT_MS);
     await screenshot(page, 'bench-bin-3-captured');
+    // The clerk is told what became of the bin, with the count's own range.
+    expect(await page.getByTestId('bin-outcome').textContent()).toMatch(/^(Booked|Held for a decision|Nothing to change)/);
     const [event] = await CountEvent.findAll({ where: { partId: part.id } });
     expect(event).toMatchObject({ purpose: 'bin', sampleOnPan: false, sampleQuantity: 20, containerId: bin.id, binId: stockBin.id });
     const binCount = await BinCount.findOne({ where: { countEventId: event.id } });
@@ -260,6 +262,20 @@ describe('the bench (browser, simulated scale)', () => {
     await page.getByRole('button', { name: /Count to target/ }).click();
     expect(await page.getByRole('button', { name: /Capture this count/ }).isDisabled()).toBe(true);
     expect(await page.getByTestId('capture-blocked').textContent()).toContain('locked');
+  });
+
+  it('shows a lock made elsewhere at the open bench within 5 s, with its reason, without restarting the feed', async () => {
+    const scale = await benchScale();
+    const page = await landscape.newPage();
+    await signInThroughPage(page, 'operator');
+    await openBench(page, scale.id, 6);
+    expect(await page.getByTestId('scale-status').getAttribute('data-status')).toBe('in_service');
+    const { agent: quality } = await signedIn('quality');
+    const locked = await quality.post(`/api/v1/scales/${scale.id}/lock`).send({ reason: 'dropped on the floor' });
+    expect(locked.status).toBe(200);
+    await expect.poll(() => page.getByTestId('scale-status').getAttribute('data-status'), { timeout: 5000 }).toBe('locked');
+    expect(await page.getByTestId('scale-status').textContent()).toContain('dropped on the floor');
+    expect(await page.getByTestId('stability').textContent()).toBe('Settled'); // the feed carried on
   });
 
   it('restores a count in progress after a reload, pieces on the practice pan included', async () => {

@@ -55,7 +55,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
     work, part, scale, scaleId, setScaleId, setSource, typed, setTyped, kind,
     frame, frameRef, trace, notice, codes, spreadNote, verdict, showing,
     actions, chooseWork, chooseContainer, containerChoice, chosenContainer, sampleQty, setSampleQty, growPlan,
-    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued, waiting, cancelWaiting,
+    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued, waiting, cancelWaiting, scales: scalesNow,
   } = useBench({ scales, containers, stabilityWindowMs, defaultPieceSpread });
 
   return (
@@ -103,14 +103,14 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
               captureBlocked={captureBlocked}
             />
           ) : null}
-          {result ? <CaptureResult count={result} /> : null}
+          {result ? <CaptureResult answer={result} /> : null}
           {work ? <StopCount work={work} onStop={stop} /> : null}
           {scale ? <LiveTrace trace={trace} frameRef={frameRef} division={scale.division} windowMs={stabilityWindowMs} /> : null}
         </div>
         <aside className="min-w-0 space-y-4">
           <QueuePanel items={queue} onSend={() => void flushQueue()} onDrop={dropQueued} />
           {!work ? <WorkChooser onChoose={chooseWork} disabled={!scale} initialBin={initialBin} /> : null}
-          <ScalePicker scales={scales} scaleId={scaleId} locked={work !== null} onPick={setScaleId} />
+          <ScalePicker scales={scalesNow} scaleId={scaleId} locked={work !== null} onPick={setScaleId} />
           {scale ? (
             <label className="flex min-h-11 items-center gap-3">
               <input type="checkbox" className="h-5 w-5" checked={typed || kind === 'keyed'} disabled={kind === 'keyed'} onChange={(e) => setTyped(e.target.checked)} />

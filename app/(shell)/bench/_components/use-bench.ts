@@ -36,13 +36,21 @@ export interface BenchOptions {
 }
 
 const WORK_KEY = 'tallyforge.bench.work';
+/** How often the bench asks for its scale's status (a lock-out shows within this). */
+const SCALE_STATUS_POLL_MS = 3000;
 const SCALE_KEY = 'tallyforge.bench.scale';
 
 export type Notice = { tone: 'fault' | 'ok' | 'info'; text: string; code?: WarningCode } | null;
 
 // One capture request, whether sent at once or replayed from the offline queue; the key makes a retry safe.
 function postCapture(key: string, body: unknown) {
-  return apiFetch<{ count: CountEventDto }>('/api/v1/counts', { method: 'POST', body, headers: { 'Idempotency-Key': key } });
+  return apiFetch<CaptureAnswer>('/api/v1/counts', { method: 'POST', body, headers: { 'Idempotency-Key': key } });
+}
+
+/** What the server answers a capture: the count, and for a bin count what became of the bin. */
+export interface CaptureAnswer {
+  count: CountEventDto;
+  binCount: { bookQuantity: number; counted: number; variance: number; status: string } | null;
 }
 
 /** The steps that take a steady reading. */
@@ -64,7 +72,7 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   const [source, setSource] = useState<ReadingSource | null>(null);
   const [typed, setTyped] = useState(false);
   const [notice, setNotice] = useState<Notice>(null);
-  const [result, setResult] = useState<CountEventDto | null>(null);
+  const [result, setResult] = useState<CaptureAnswer | null>(null);
   const [queue, setQueue] = useState<QueuedCapture[]>([]);
   const [containerChoice, setContainerChoice] = useState<number | null>(null);
   const [sampleQty, setSampleQty] = useState(10);
@@ -74,10 +82,32 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   const [waiting, setWaiting] = useState<SteadyAction | null>(null);
   const queueStore = useMemo(() => (typeof window === 'undefined' ? null : createCaptureQueue(browserStore)), []);
 
-  const scale = scales.find((s) => s.id === scaleId) ?? null;
+  // The chosen scale's status as the server has it now: a lock-out (or its lifting) made elsewhere
+  // reaches an open bench within a few seconds.
+  const [live, setLive] = useState<Pick<ScaleDto, 'id' | 'status' | 'statusReason'> | null>(null);
+  useEffect(() => {
+    if (scaleId === null) return;
+    let on = true;
+    const poll = async () => {
+      const r = await apiFetch<{ scale: ScaleDto }>(`/api/v1/scales/${scaleId}`);
+      if (on && r.ok) setLive((prev) => (prev && prev.id === r.data.scale.id && prev.status === r.data.scale.status && prev.statusReason === r.data.scale.statusReason ? prev : r.data.scale));
+    };
+    void poll();
+    const timer = setInterval(() => void poll(), SCALE_STATUS_POLL_MS);
+    return () => {
+      on = false;
+      clearInterval(timer);
+    };
+  }, [scaleId]);
+  const scalesNow = useMemo(
+    () => scales.map((s) => (live && s.id === live.id && (s.status !== live.status || s.statusReason !== live.statusReason) ? { ...s, status: live.status, statusReason: live.statusReason } : s)),
+    [scales, live],
+  );
+  const scale = scalesNow.find((s) => s.id === scaleId) ?? null;
+  // The feed restarts only when what it computes with changes, not when the status does.
   const pipelineScale = useMemo(
     () => (scale ? { division: scale.division, repeatability: scale.repeatability ?? 0, capacity: scale.capacity, minLoad: scale.minLoad } : null),
-    [scale],
+    [scale?.division, scale?.repeatability, scale?.capacity, scale?.minLoad], // eslint-disable-line react-hooks/exhaustive-deps
   );
   const spread = part?.spreadBelief ?? null;
   // Until the part has learned its spread, the site's cautious value stands in for it.
@@ -267,17 +297,21 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
       setBusy(true);
       const res = await postCapture(keyed.captureKey!, body);
       setBusy(false);
-      trace.mark(f.t, 'capture', 'capture');
       if (res.ok) {
-        setResult(res.data.count);
+        // Only a capture the server took (or the queue holds) is marked on the trace.
+        trace.mark(f.t, 'capture', 'capture');
+        setResult(res.data);
         setWork(captureDone(keyed));
       } else if (res.status === 0 || res.status >= 500) {
+        trace.mark(f.t, 'capture', 'queued');
         queueStore?.add({ key: keyed.captureKey!, body, label: `${keyed.partNumber} · ${frameRef.current?.estimate?.count ?? '?'} pcs`, queuedAt: new Date().toISOString() });
         setQueue(queueStore?.list() ?? []);
         setWork(captureDone(keyed));
         setNotice({ tone: 'info', text: 'The server cannot be reached. The capture is saved on this tablet and will be sent once the connection is back.' });
       } else {
-        setNotice({ tone: 'fault', text: res.message, code: res.code === 'scale_locked' || res.code === 'unstable' || res.code === 'over_capacity' ? res.code : undefined });
+        // The server's own reason, with the field it names, in the operator's words.
+        const why = Object.values(res.fields ?? {})[0];
+        setNotice({ tone: 'fault', text: why ? `${res.message}: ${why}.` : res.message, code: res.code === 'scale_locked' || res.code === 'unstable' || res.code === 'over_capacity' ? res.code : undefined });
       }
     },
     next() {
@@ -345,6 +379,6 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     work, part, scale, scaleId, setScaleId, source, setSource, typed, setTyped, kind,
     frame, frameRef, trace, notice, codes, spreadNote, verdict, showing,
     actions, chooseWork, chooseContainer, containerChoice, chosenContainer, sampleQty, setSampleQty, growPlan,
-    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued, waiting, cancelWaiting,
+    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued, waiting, cancelWaiting, scales: scalesNow,
   };
 }
