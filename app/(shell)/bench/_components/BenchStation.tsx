@@ -14,6 +14,7 @@ import { QueuePanel } from './QueuePanel';
 import { RawAdcWizard } from './RawAdcWizard';
 import { ScalePicker } from './ScalePicker';
 import { SerialConnect } from './SerialConnect';
+import { ScaleAdviceNote } from './ScaleAdviceNote';
 import { StepPanel } from './StepPanel';
 import { WarningList } from './WarningList';
 import { WorkChooser } from './WorkChooser';
@@ -55,7 +56,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
     work, part, scale, scaleId, setScaleId, setSource, typed, setTyped, kind,
     frame, frameRef, trace, notice, codes, spreadNote, verdict, showing,
     actions, chooseWork, chooseContainer, containerChoice, chosenContainer, sampleQty, setSampleQty, growPlan,
-    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued, waiting, cancelWaiting, scales: scalesNow,
+    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued, waiting, cancelWaiting, scales: scalesNow, advice,
   } = useBench({ scales, containers, stabilityWindowMs, defaultPieceSpread });
 
   return (
@@ -83,6 +84,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
             <p role="status" data-testid="notice" className={`rounded-md px-4 py-3 text-lg ${notice.tone === 'fault' ? 'bg-fault-light text-fault' : notice.tone === 'ok' ? 'bg-ok-light text-ok' : 'bg-forge-light text-forge-dark'}`}>{notice.text}</p>
           ) : null}
           <WarningList codes={codes} />
+          {advice ? <ScaleAdviceNote advice={advice} target={work?.targetQuantity ?? null} /> : null}
           {spreadNote ? (
             <p data-testid="spread-note" className="rounded-md bg-paper-deep px-4 py-2 text-sm">
               {spreadNote.headline}.{spreadNote.more ? ` ${spreadNote.more}` : ''}

@@ -20,7 +20,8 @@ import { chooseBinContainer, parseSavedWork, pieceIncrements, startWork, type Be
 import { createCaptureQueue, type QueuedCapture, type SendOutcome } from '../_lib/capture-queue';
 import { buildCaptureBody } from '../_lib/capture-request';
 import type { PipelineWork } from '../_lib/reading-pipeline';
-import { planNextGrow, suggestSampleQuantity } from '../_lib/sample-advice';
+import { DEFAULT_SAMPLE_QUANTITY, planNextGrow } from '../_lib/sample-advice';
+import { adviseScales, judgeScale, type AdvisedScale } from '../_lib/scale-advice';
 import { shortcutFor } from '../_lib/shortcuts';
 import { describeSpread } from '../_lib/spread-note';
 import { sampleStaysOnPan, type WorkItem } from '../_lib/work-item';
@@ -45,6 +46,10 @@ export type Notice = { tone: 'fault' | 'ok' | 'info'; text: string; code?: Warni
 // One capture request, whether sent at once or replayed from the offline queue; the key makes a retry safe.
 function postCapture(key: string, body: unknown) {
   return apiFetch<CaptureAnswer>('/api/v1/counts', { method: 'POST', body, headers: { 'Idempotency-Key': key } });
+}
+
+function advisedScale(s: ScaleDto): AdvisedScale {
+  return { id: s.id, name: s.name, division: s.division, repeatability: s.repeatability ?? 0, capacity: s.capacity, minLoad: s.minLoad, locked: s.status === 'locked' };
 }
 
 /** What the server answers a capture: the count, and for a bin count what became of the bin. */
@@ -184,7 +189,8 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
       setResult(null);
       setNotice(null);
       const onPan = sampleStaysOnPan(item.purpose);
-      setSampleQty(noise ? suggestSampleQuantity({ noise, averagePieceWeight: p.averagePieceWeight, spread: p.spreadBelief ?? { kind: 'assumed', pieceSpread: defaultPieceSpread }, targetQuantity: item.targetQuantity ?? null, sampleOnPan: onPan }) : 10);
+      const spreadOf = p.spreadBelief ?? { kind: 'assumed' as const, pieceSpread: defaultPieceSpread };
+      setSampleQty(p.averagePieceWeight ? judgeScale(advisedScale(scale), { averagePieceWeight: p.averagePieceWeight, spread: spreadOf }, item.targetQuantity ?? null, onPan).sample : DEFAULT_SAMPLE_QUANTITY);
       const { orderLineId, binId, binVersion } = item;
       setWork(startWork({ purpose: item.purpose, partId: p.id, partNumber: p.partNumber, label: item.label, scaleId: scale.id, targetQuantity: item.targetQuantity, tolerance: item.tolerance, orderLineId, binId, binVersion }));
     });
@@ -349,6 +355,11 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   const spreadNote = work && part && noise
     ? describeSpread({ belief: spreadOrAssumed, noise, averagePieceWeight: work.sample ? work.sample.netWeight / work.sample.quantity : part.averagePieceWeight, sampleQuantity: work.sample?.quantity ?? sampleQty, sampleOnPan: sampleStaysOnPan(work.purpose) })
     : null;
+  // Before the count: can this scale count this part, and would another of the bench serve better?
+  const apwKnown = work?.sample ? work.sample.netWeight / work.sample.quantity : part?.averagePieceWeight ?? null;
+  const advice = work && scale && apwKnown && (work.step === 'tare' || work.step === 'sample')
+    ? adviseScales(scalesNow.map(advisedScale), scale.id, { averagePieceWeight: apwKnown, spread: spreadOrAssumed }, work.targetQuantity, sampleStaysOnPan(work.purpose), chosenContainer?.tare ?? 0)
+    : null;
   const showing: 'gross' | 'net' | 'count' = !work || work.step === 'tare' ? 'gross' : work.step === 'sample' ? 'net' : 'count';
   const kind = scale?.connection.kind;
 
@@ -379,6 +390,6 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     work, part, scale, scaleId, setScaleId, source, setSource, typed, setTyped, kind,
     frame, frameRef, trace, notice, codes, spreadNote, verdict, showing,
     actions, chooseWork, chooseContainer, containerChoice, chosenContainer, sampleQty, setSampleQty, growPlan,
-    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued, waiting, cancelWaiting, scales: scalesNow,
+    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued, waiting, cancelWaiting, scales: scalesNow, advice,
   };
 }
