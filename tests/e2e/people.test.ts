@@ -46,5 +46,20 @@ describe('people (browser)', () => {
     await tab.waitForURL((url) => url.pathname === '/');
     expect(await tab.getByText('Stockroom clerk').first().isVisible()).toBe(true);
     await screenshot(tab, 'today-clerk-tablet');
+
+    // Switching someone off asks first, saying what it does; keeping it as it is changes nothing.
+    // (The page is loaded again: setting her password changed her record since the list was read.)
+    await page.reload();
+    await page.getByLabel('Find').fill(email);
+    await expect.poll(() => page.getByRole('gridcell', { name: email }).count()).toBe(1);
+    await page.getByRole('button', { name: 'Switch off' }).click();
+    const ask = page.getByRole('alertdialog', { name: 'Please confirm' });
+    await expect.poll(() => ask.textContent()).toContain('Switch off Rosa Lindqvist? They can no longer sign in');
+    await ask.getByRole('button', { name: 'Keep it as it is' }).click();
+    expect(await ask.count()).toBe(0);
+    await page.getByRole('button', { name: 'Switch off' }).click();
+    await ask.getByRole('button', { name: 'Yes, switch off' }).click();
+    await expect.poll(() => page.getByTestId('people-notice').textContent()).toBe('Rosa Lindqvist: saved.');
+    await expect.poll(() => page.getByRole('gridcell', { name: 'inactive' }).count()).toBe(1);
   });
 });

@@ -169,6 +169,10 @@ describe('quality pages (browser)', () => {
     const decide = qualityPage.getByTestId(`variance-${bin.code}`);
     await decide.getByLabel('Note (optional)').fill('found a torn bag');
     await decide.getByRole('button', { name: 'Approve' }).click();
+    // Asked once more, with what approving does to the book.
+    const ask = decide.getByRole('alertdialog', { name: 'Please confirm' });
+    await expect.poll(() => ask.textContent()).toContain(`Approve -100 pcs on ${bin.code}? Its book quantity becomes 900 (from 1000).`);
+    await ask.getByRole('button', { name: 'Yes, approve' }).click();
     await expect.poll(() => qualityPage.getByTestId('variance-notice').textContent(), SAVED).toBe(`${bin.code}: approved, book quantity now 900.`);
     expect(await qualityPage.getByTestId(`variance-${bin.code}`).count()).toBe(0);
 

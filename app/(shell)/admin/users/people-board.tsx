@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { ROLE_LABELS, ROLES, type Role } from '@/lib/roles';
 import type { UserDto } from '@/server/schemas/users';
 import { apiFetch } from '../../../_components/api-client';
+import { ConfirmBar, type PendingConfirm } from '../../../_components/confirm-bar';
 import { DataGrid } from '../../../_components/data-grid';
 import { InviteForm } from './invite-form';
 
@@ -18,6 +19,7 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
   const [users, setUsers] = useState(initialUsers);
   const [filter, setFilter] = useState('');
   const [notice, setNotice] = useState<string | null>(null);
+  const [pending, setPending] = useState<PendingConfirm | null>(null);
 
   const replace = (u: UserDto) => setUsers((list) => list.map((x) => (x.id === u.id ? u : x)));
 
@@ -34,6 +36,12 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
     setNotice(res.ok ? `A new invitation went to ${user.email} (${res.data.mail}).` : res.message);
   }
 
+  // Making someone an administrator gives them every permission: asked first. Other roles change at once.
+  function changeRole(user: UserDto, role: Role) {
+    if (role !== 'admin') return void patch(user, { role });
+    setPending({ question: `Make ${user.name} an administrator? They will manage people, scales and site settings, and can act as any role.`, yes: 'Yes, make administrator', onConfirm: () => patch(user, { role }) });
+  }
+
   const columns: ColDef<UserDto>[] = [
     { field: 'name', headerName: 'Name', minWidth: 160 },
     { field: 'email', headerName: 'E-mail', minWidth: 220 },
@@ -43,7 +51,7 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
       minWidth: 200,
       cellRenderer: (p: ICellRendererParams<UserDto>) =>
         p.data && p.data.id !== meId ? (
-          <select aria-label={`Role of ${p.data.name}`} className="field min-h-9 py-0" value={p.data.role} onChange={(e) => patch(p.data!, { role: e.target.value as Role })}>
+          <select aria-label={`Role of ${p.data.name}`} className="field min-h-9 py-0" value={p.data.role} onChange={(e) => changeRole(p.data!, e.target.value as Role)}>
             {ROLES.map((r) => (
               <option key={r} value={r}>{ROLE_LABELS[r]}</option>
             ))}
@@ -69,7 +77,7 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
         return (
           <span className="flex gap-2 items-center h-full">
             {u.active ? (
-              <button type="button" className="text-fault hover:underline" onClick={() => patch(u, { active: false })}>Switch off</button>
+              <button type="button" className="text-fault hover:underline" onClick={() => setPending({ question: `Switch off ${u.name}? They can no longer sign in until someone switches them on again; what they recorded stays.`, yes: 'Yes, switch off', onConfirm: () => patch(u, { active: false }) })}>Switch off</button>
             ) : (
               <button type="button" className="text-forge hover:underline" onClick={() => patch(u, { active: true })}>Switch on</button>
             )}
@@ -90,6 +98,7 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
           setNotice(mail === 'sent' ? `Invitation sent to ${user.email}.` : `${user.name} was added, but the e-mail failed; send the link again.`);
         }}
       />
+      <ConfirmBar pending={pending} onDone={() => setPending(null)} />
       <p role="status" aria-live="polite" className="min-h-6 text-sm text-ink-soft" data-testid="people-notice">{notice}</p>
       <div className="flex items-center gap-3">
         <label htmlFor="people-filter" className="text-sm text-ink-soft">Find</label>

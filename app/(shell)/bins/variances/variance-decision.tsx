@@ -5,6 +5,7 @@ import { useRef, useState } from 'react';
 import * as yup from 'yup';
 import type { PendingVariance } from '@/server/services/bins/pending-variances';
 import { apiFetch } from '../../../_components/api-client';
+import { ConfirmBar, type PendingConfirm } from '../../../_components/confirm-bar';
 import { toFormikErrors } from '../../../_components/field-errors';
 import { FormField, FormMessage } from '../../../_components/form-field';
 
@@ -15,6 +16,15 @@ export function VarianceDecision({ variance, onDecided }: { variance: PendingVar
   const [message, setMessage] = useState<string | null>(null);
   // A ref, not state: it is set by the click and read by the submit that the same click starts.
   const decision = useRef<'approve' | 'reject'>('approve');
+  const [pending, setPending] = useState<PendingConfirm | null>(null);
+  // Each way out says what it does to the book before it is taken.
+  const ask = (d: 'approve' | 'reject', submit: () => Promise<void>) => {
+    decision.current = d;
+    const v = variance.variance > 0 ? `+${variance.variance}` : `${variance.variance}`;
+    setPending(d === 'approve'
+      ? { question: `Approve ${v} pcs on ${variance.binCode}? Its book quantity becomes ${variance.counted} (from ${variance.bookQuantity}).`, yes: 'Yes, approve', onConfirm: submit }
+      : { question: `Reject the count of ${variance.binCode}? The book stays at ${variance.bookQuantity} and the bin should be counted again.`, yes: 'Yes, reject', onConfirm: submit });
+  };
   return (
     <Formik
       initialValues={{ note: '' }}
@@ -31,14 +41,15 @@ export function VarianceDecision({ variance, onDecided }: { variance: PendingVar
         onDecided(decision.current === 'approve' ? `${b.binCode}: approved, book quantity now ${b.bookQuantity}.` : `${b.binCode}: rejected, the book stays at ${b.bookQuantity}; count the bin again.`);
       }}
     >
-      {({ isSubmitting }) => (
+      {({ isSubmitting, submitForm }) => (
         <Form noValidate className="space-y-2" aria-label={`Decide on ${variance.binCode}`}>
           <FormField name="note" id={`note-${variance.id}`} label="Note (optional)" autoComplete="off" placeholder="e.g. found a torn bag" />
           <FormMessage message={message} />
           <div className="flex flex-wrap gap-2">
-            <button type="submit" className="btn-primary" disabled={isSubmitting} onClick={() => (decision.current = 'approve')}>Approve</button>
-            <button type="submit" className="btn-danger" disabled={isSubmitting} onClick={() => (decision.current = 'reject')}>Reject</button>
+            <button type="button" className="btn-primary" disabled={isSubmitting || pending !== null} onClick={() => ask('approve', submitForm)}>Approve</button>
+            <button type="button" className="btn-danger" disabled={isSubmitting || pending !== null} onClick={() => ask('reject', submitForm)}>Reject</button>
           </div>
+          <ConfirmBar pending={pending} onDone={() => setPending(null)} tone={decision.current === 'approve' ? 'primary' : 'danger'} />
         </Form>
       )}
     </Formik>

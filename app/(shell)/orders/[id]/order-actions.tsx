@@ -5,6 +5,7 @@ import { useState } from 'react';
 import * as yup from 'yup';
 import type { OrderDto } from '@/server/schemas/orders';
 import { apiFetch } from '../../../_components/api-client';
+import { ConfirmBar, type PendingConfirm } from '../../../_components/confirm-bar';
 
 const reason = yup.string().trim().min(10, 'Say in a sentence why the order is complete anyway').max(500, 'At most 500 characters');
 const optionalReason = yup.object({ overrideReason: reason });
@@ -14,6 +15,7 @@ const neededReason = yup.object({ overrideReason: reason.required('Needed while 
 export function OrderActions({ order, onChanged }: { order: OrderDto; onChanged: (o: OrderDto) => void }) {
   const [message, setMessage] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
+  const [pending, setPending] = useState<PendingConfirm | null>(null);
   const notIn = order.lines.filter((l) => l.verdict !== 'in').length;
 
   async function act(action: 'release' | 'cancel' | 'complete', extra: Record<string, unknown> = {}): Promise<Record<string, string>> {
@@ -36,8 +38,22 @@ export function OrderActions({ order, onChanged }: { order: OrderDto; onChanged:
       <h2 id="actions-title" className="font-bold">What next</h2>
       <div className="flex flex-wrap gap-3 items-center">
         {order.status === 'draft' ? <button type="button" className="btn-primary" disabled={busy} onClick={() => act('release')}>Release to the bench</button> : null}
-        <button type="button" className="btn-danger" disabled={busy} onClick={() => act('cancel')}>{order.status === 'draft' ? 'Cancel draft' : 'Cancel order and free its stock'}</button>
+        <button
+          type="button"
+          className="btn-danger"
+          disabled={busy}
+          onClick={() => setPending({
+            question: order.status === 'draft'
+              ? `Cancel draft ${order.number}? It will not be released or built.`
+              : `Cancel ${order.number}? Its reserved stock goes back to free stock; captures already made stay on record, and the kits are not built.`,
+            yes: order.status === 'draft' ? 'Yes, cancel the draft' : 'Yes, cancel and free the stock',
+            onConfirm: () => void act('cancel'),
+          })}
+        >
+          {order.status === 'draft' ? 'Cancel draft' : 'Cancel order and free its stock'}
+        </button>
       </div>
+      <ConfirmBar pending={pending} onDone={() => setPending(null)} />
       {open ? (
         <Formik
           initialValues={{ overrideReason: '' }}
