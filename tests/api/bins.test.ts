@@ -73,6 +73,27 @@ describe('bins and cycle counts', () => {
     expect(twice.status).toBe(422);
   });
 
+  it('puts a bin whose variance was rejected first on the count plan again, and tells the clerks why', async () => {
+    const clerk = await signedIn('clerk');
+    const planner = await signedIn('planner');
+    const part = await createPart({ pieceSpread: 0.001 });
+    const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
+    const bin = await newBin(clerk.agent, part.id, 1000);
+    const large = await clerk.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, bin, 900));
+    expect(large.body.binCount.status).toBe('pending');
+    testDb();
+    expect((await Bin.findByPk(bin.id))!.lastCountedAt).not.toBeNull();
+    const rejected = await planner.agent.post(`/api/v1/bin-counts/${large.body.binCount.id}/decision`).send({ decision: 'reject', note: 'the tote was half on the pan' });
+    expect(rejected.status).toBe(200);
+    expect(rejected.body.binCount).toMatchObject({ status: 'rejected', bookQuantity: 1000 });
+    expect((await Bin.findByPk(bin.id))!.lastCountedAt).toBeNull();
+    const due = await clerk.agent.get('/api/v1/bins/due');
+    expect(due.body.bins.map((b: { code: string }) => b.code)).toContain(bin.code);
+    const [mail] = await waitForMail(clerk.email);
+    expect(mail.subject).toBe(`Count bin ${bin.code} again: its count of 900 was rejected`);
+    expect(mail.text).toContain('the tote was half on the pan');
+  });
+
   it('lets one of two clerks counting the same bin win; the other gets 409 and recounts, and nothing is lost', async () => {
     const a = await signedIn('clerk');
     const b = await signedIn('clerk');

@@ -4,13 +4,16 @@ import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
 import { retryOnDeadlock } from '../../retry-deadlock';
+import { log } from '../../log';
 import { adjustBin } from '../stock/adjust-bin';
+import { notifyRejectedVariance } from './notify-rejected-variance';
 
 // Approving books the variance as counted (the difference, so stock that moved since stays right);
-// rejecting leaves the book as it was and asks for a recount.
+// rejecting leaves the book as it was, puts the bin first on the cycle-count plan again (as if never
+// counted) and mails the clerks after the commit.
 export async function decideVariance({ binCountId, approve, note, by }: { binCountId: number; approve: boolean; note?: string | null; by: SessionUser }) {
   const db = getDb();
-  return retryOnDeadlock(() =>
+  const decided = await retryOnDeadlock(() =>
     db.transaction(async (transaction) => {
       const row = await BinCount.findByPk(binCountId, { transaction, lock: transaction.LOCK.UPDATE });
       if (!row) throw notFound('Bin count');
@@ -19,7 +22,14 @@ export async function decideVariance({ binCountId, approve, note, by }: { binCou
       row.set({ status: approve ? 'approved' : 'rejected', decidedBy: by.id, decidedAt: new Date(), note: note ?? null });
       await row.save({ transaction });
       if (approve) await adjustBin(bin, row.variance, { type: 'bin_count', id: row.id, note: `variance approved by ${by.name}${note ? `: ${note}` : ''}`.slice(0, 300), by: by.id }, transaction);
-      return { id: row.id, binId: row.binId, binCode: bin.code, status: row.status, variance: row.variance, bookQuantity: bin.bookQuantity };
+      else {
+        bin.lastCountedAt = null;
+        await bin.save({ transaction });
+      }
+      return { id: row.id, binId: row.binId, binCode: bin.code, status: row.status, variance: row.variance, bookQuantity: bin.bookQuantity, counted: row.counted };
     }),
   );
+  if (!approve) await notifyRejectedVariance({ ...decided, note: note ?? null }, by).catch((err) => log.error({ err }, 'rejected-variance notice failed'));
+  const { counted: _counted, ...answer } = decided;
+  return answer;
 }
