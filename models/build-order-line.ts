@@ -14,6 +14,8 @@ export class BuildOrderLine extends Model<InferAttributes<BuildOrderLine>, Infer
   declare varianceSum: CreationOptional<string>;
   /** ± whole pieces at 95 %; 0 when every capture was exact. */
   declare wholePieceRange: CreationOptional<number>;
+  /** Sent back for a recount: only captures after this event count for the line. */
+  declare recountAfterEventId: CreationOptional<number | null>;
   declare captures: CreationOptional<number>;
   declare verdict: CreationOptional<LineVerdict>;
   declare createdAt: CreationOptional<Date>;
@@ -32,6 +34,7 @@ export class BuildOrderLine extends Model<InferAttributes<BuildOrderLine>, Infer
         counted: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         varianceSum: { type: DataTypes.DECIMAL(16, 6), allowNull: false, defaultValue: 0 },
         wholePieceRange: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        recountAfterEventId: { type: DataTypes.INTEGER, allowNull: true },
         captures: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         verdict: { type: DataTypes.ENUM(...LINE_VERDICTS), allowNull: false, defaultValue: 'open' },
         createdAt: { type: DataTypes.DATE, allowNull: false },

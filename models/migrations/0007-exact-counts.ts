@@ -22,6 +22,8 @@ export async function up({ context: q }: { context: QueryInterface }): Promise<v
   await q.addColumn('count_events', 'apw_relative_variance', { type: DataTypes.DOUBLE, allowNull: true });
 
   await q.addColumn('build_order_lines', 'whole_piece_range', { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 });
+  // A line sent back for a recount counts only the captures made after this one.
+  await q.addColumn('build_order_lines', 'recount_after_event_id', { type: DataTypes.INTEGER, allowNull: true });
 
   // 2 % was the old value for an unknown spread; it let loose parts (5 %) read exact when they
   // were not. A site still on it moves to the cautious 5 %; a site that chose its own keeps it.
@@ -29,6 +31,7 @@ export async function up({ context: q }: { context: QueryInterface }): Promise<v
 }
 
 export async function down({ context: q }: { context: QueryInterface }): Promise<void> {
+  await q.removeColumn('build_order_lines', 'recount_after_event_id');
   await q.removeColumn('build_order_lines', 'whole_piece_range');
   for (const c of ['apw_relative_variance', 'uncertain_pieces', 'whole_piece_range', 'probability_exact', 'bulk_scale_id']) await q.removeColumn('count_events', c);
   await q.removeIndex('piece_weight_samples', ['status']);

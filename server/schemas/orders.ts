@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { LineVerdict, OrderStatus } from '@/models/columns';
-import { versionSchema } from './common';
+import { recordIdSchema, versionSchema } from './common';
 import { wholeCount } from './weights';
 
 export const createOrderSchema = z.object({
@@ -11,6 +11,7 @@ export const createOrderSchema = z.object({
 export type CreateOrderInput = z.infer<typeof createOrderSchema>;
 
 export const orderActionSchema = z.object({ version: versionSchema });
+export const lineParamsSchema = z.object({ id: recordIdSchema, lineId: recordIdSchema });
 
 export const completeOrderSchema = z.object({
   version: versionSchema,

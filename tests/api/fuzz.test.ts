@@ -201,6 +201,8 @@ const SAMPLES: Record<string, (w: World) => Sample> = {
   'GET /api/v1/orders/[id]/availability': () => ({}),
   'POST /api/v1/orders/[id]/release': (w) => ({ ids: { id: w.drafts[0].id }, bodies: [{ version: new Live('build_orders', w.drafts[0].id) }] }),
   'POST /api/v1/orders/[id]/cancel': (w) => ({ ids: { id: w.drafts[1].id }, bodies: [{ version: new Live('build_orders', w.drafts[1].id) }] }),
+  // The world's released order has no uncertain line: the answer is a 422 the fuzzer checks writes nothing.
+  'POST /api/v1/orders/[id]/lines/[lineId]/recount': (w) => ({ ids: { id: w.order.id, lineId: w.order.lines[0].id }, bodies: [{ version: new Live('build_orders', w.order.id) }] }),
   'POST /api/v1/orders/[id]/complete': (w) => ({ bodies: [{ version: new Live('build_orders', w.order.id), overrideReason: 'fuzzing the complete action' }] }),
   'GET /api/v1/bins': (w) => ({ query: { code: w.bin.code, partId: String(w.part.id) } }),
   'POST /api/v1/bins': (w) => ({ bodies: [{ code: fresh('bin code', (n) => `${RUN.replace(/[^A-Z]/g, '').padEnd(2, 'Q').slice(0, 2)}-${String(1 + (n % 99)).padStart(2, '0')}-${1 + (Math.floor(n / 99) % 9)}-${String(1 + (Math.floor(n / 891) % 99)).padStart(2, '0')}`), partId: w.part.id, containerId: w.container.id, bookQuantity: 10, abcClass: 'B' }] }),

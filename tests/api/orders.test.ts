@@ -1,9 +1,10 @@
 import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
-import { Bin, BuildOrderLine, CountEvent, PartStock, StockMovement, StockReservation } from '../../models';
+import { Bin, BuildOrderLine, CountEvent, Part, PartStock, StockMovement, StockReservation } from '../../models';
 import { createPart, createScale, stockPart, testDb, unique } from '../helpers/db';
 import { signedIn, type Agent } from '../helpers/http';
 import { waitForMail } from '../helpers/mail';
+import { releasedOrder } from '../helpers/orders';
 import { decodePdf } from '../helpers/decode-pdf';
 import { printedJobs } from '../helpers/printer';
 
@@ -177,5 +178,37 @@ describe('kits and build orders', () => {
     const res = await agent.post('/api/v1/orders').send({ kitId: 'x', quantity: 0, dueDate: '31/12/2026' });
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields).sort()).toEqual(['dueDate', 'kitId', 'quantity']);
+  });
+});
+
+describe('sending a kit line back for a recount', () => {
+  it('lets a planner send an out-of-tolerance line back to the queue; only new captures count for it, the old stay on record', async () => {
+    const planner = await signedIn('planner');
+    const operator = await signedIn('operator');
+    const { order } = await releasedOrder(planner.agent, { quantity: 1 });
+    const line = order.lines[0];
+    const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
+    testDb();
+    await Part.update({ pieceSpread: '0.001', spreadScatter: 1e-6, spreadNoise: 0, spreadDof: 99, spreadObservations: 100 }, { where: { id: line.partId } });
+    // 0.5 g pieces: 10 on the pan for a line of 4 (−0/+0) is out of tolerance.
+    const capture = (pieces: number) => operator.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID())
+      .send({ purpose: 'kit_line', orderLineId: line.id, partId: line.partId, scaleId: scale.id, gross: pieces * 0.5, tare: 0, sample: { quantity: 2, netWeight: 1 }, sampleOnPan: true, targetQuantity: 4, stable: true });
+    expect((await capture(10)).body.line).toMatchObject({ counted: 10, verdict: 'out' });
+    const now = (await planner.agent.get(`/api/v1/orders/${order.id}`)).body.order;
+
+    expect((await operator.agent.post(`/api/v1/orders/${order.id}/lines/${line.id}/recount`).send({ version: now.version })).status).toBe(403);
+    const sent = await planner.agent.post(`/api/v1/orders/${order.id}/lines/${line.id}/recount`).send({ version: now.version });
+    expect(sent.status).toBe(200);
+    expect(sent.body.order.lines[0]).toMatchObject({ counted: 0, captures: 0, verdict: 'open' });
+    expect(sent.body.order.version).toBeGreaterThan(now.version);
+    const queue = await operator.agent.get('/api/v1/kitting-queue');
+    expect(queue.body.lines.map((l: { orderLineId: number }) => l.orderLineId)).toContain(line.id);
+
+    expect((await capture(4)).body.line).toMatchObject({ counted: 4, verdict: 'in' });
+    testDb();
+    expect(await CountEvent.count({ where: { orderLineId: line.id } })).toBe(2);
+    const again = await planner.agent.post(`/api/v1/orders/${order.id}/lines/${line.id}/recount`).send({ version: sent.body.order.version });
+    expect(again.status).toBe(422);
+    expect(again.body.error.message).toMatch(/in tolerance/);
   });
 });

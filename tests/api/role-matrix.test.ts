@@ -71,6 +71,7 @@ const MATRIX: Entry[] = [
   { method: 'GET', route: '/api/v1/orders/[id]/availability', allowed: everyone, path: '/api/v1/orders/999999/availability' },
   { method: 'POST', route: '/api/v1/orders/[id]/release', allowed: planners, path: '/api/v1/orders/999999/release', body: {} },
   { method: 'POST', route: '/api/v1/orders/[id]/cancel', allowed: planners, path: '/api/v1/orders/999999/cancel', body: {} },
+  { method: 'POST', route: '/api/v1/orders/[id]/lines/[lineId]/recount', allowed: planners, path: '/api/v1/orders/999999/lines/999999/recount', body: {} },
   { method: 'POST', route: '/api/v1/orders/[id]/complete', allowed: planners, path: '/api/v1/orders/999999/complete', body: {} },
   { method: 'GET', route: '/api/v1/kitting-queue', allowed: everyone },
   { method: 'GET', route: '/api/v1/bins', allowed: everyone },

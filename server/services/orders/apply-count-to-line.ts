@@ -1,5 +1,5 @@
 import 'server-only';
-import type { Transaction } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { BuildOrder, BuildOrderLine, CountEvent } from '@/models';
 import { AppError } from '../../errors';
 import { lineTotal, lineUncertainty, lineVerdict } from './line-verdict';
@@ -34,7 +34,8 @@ export async function applyCountToLine(
       fields: { orderLineId: 'already counted in full' },
     });
   }
-  const total = lineTotal(await CountEvent.findAll({ where: { orderLineId: line.id }, transaction }));
+  const since = line.recountAfterEventId == null ? {} : { id: { [Op.gt]: line.recountAfterEventId } };
+  const total = lineTotal(await CountEvent.findAll({ where: { orderLineId: line.id, ...since }, transaction }));
   const varianceSum = total.standardUncertainty ** 2;
   line.counted += opts.count;
   line.captures += 1;

@@ -1,10 +1,37 @@
-import { VERDICT_STYLE, VERDICT_WORDS } from '@/lib/order-words';
-import type { OrderLineDto } from '@/server/schemas/orders';
+'use client';
 
-// U is the expanded uncertainty (95 %) of the counted quantity, summed over the line's captures.
-export function OrderLines({ lines }: { lines: OrderLineDto[] }) {
+import { useState } from 'react';
+import { VERDICT_STYLE, VERDICT_WORDS } from '@/lib/order-words';
+import type { OrderDto, OrderLineDto } from '@/server/schemas/orders';
+import { apiFetch } from '../../../_components/api-client';
+import { ConfirmBar, type PendingConfirm } from '../../../_components/confirm-bar';
+
+interface Props {
+  lines: OrderLineDto[];
+  /** Set when the viewer may send lines of this open order back for a recount. */
+  recount?: { orderId: number; orderNumber: string; version: number; onChanged(o: OrderDto): void };
+}
+
+// The counted quantity is shown with its ± whole pieces (95 %), the captures' shared APW counted once.
+export function OrderLines({ lines, recount }: Props) {
+  const [pending, setPending] = useState<PendingConfirm | null>(null);
+  const [message, setMessage] = useState<string | null>(null);
+  const ask = (l: OrderLineDto) => {
+    if (!recount) return;
+    setPending({
+      question: `Send ${l.partNumber} of ${recount.orderNumber} back for a recount? Its ${l.counted} counted pieces no longer count for the line (the captures stay on record); empty the bag and count the line again.`,
+      yes: 'Yes, count it again',
+      onConfirm: async () => {
+        const res = await apiFetch<{ order: OrderDto }>(`/api/v1/orders/${recount.orderId}/lines/${l.id}/recount`, { method: 'POST', body: { version: recount.version } });
+        if (res.ok) recount.onChanged(res.data.order);
+        setMessage(res.ok ? `${l.partNumber} is back in the kitting queue.` : res.message);
+      },
+    });
+  };
   return (
-    <div className="overflow-x-auto">
+    <div className="space-y-2 overflow-x-auto">
+      <ConfirmBar pending={pending} onDone={() => setPending(null)} />
+      {message ? <p role="status" className="text-sm" data-testid="recount-notice">{message}</p> : null}
       <table className="w-full text-sm md:text-base" data-testid="order-lines">
         <caption className="sr-only">Lines of the order</caption>
         <thead>
@@ -32,6 +59,9 @@ export function OrderLines({ lines }: { lines: OrderLineDto[] }) {
               </td>
               <td className="py-2">
                 <span className={`inline-block rounded px-2 py-1 text-sm whitespace-nowrap ${VERDICT_STYLE[l.verdict]}`}>{VERDICT_WORDS[l.verdict]}</span>
+                {recount && (l.verdict === 'uncertain' || l.verdict === 'out') ? (
+                  <button type="button" className="btn-quiet ml-2 min-h-11" onClick={() => ask(l)}>Count again…</button>
+                ) : null}
               </td>
             </tr>
           ))}

@@ -53,7 +53,10 @@ export function OrderView({ initial, initialAvailability, canManage }: Props) {
       {order.status === 'draft' && canManage ? <OrderActions order={order} onChanged={replace} /> : null}
       <section className="card space-y-3" aria-labelledby="lines-title">
         <h2 id="lines-title" className="font-bold">Lines</h2>
-        <OrderLines lines={order.lines} />
+        <OrderLines
+          lines={order.lines}
+          recount={canManage && (order.status === 'released' || order.status === 'in_progress') ? { orderId: order.id, orderNumber: order.number, version: order.version, onChanged: replace } : undefined}
+        />
         <p className="text-sm text-ink-faint">Counts that sell, bill or ship by quantity need a scale verified for legal trade; the ± U figures do not replace that.</p>
       </section>
 
