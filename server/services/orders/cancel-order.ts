@@ -1,19 +1,17 @@
 import 'server-only';
-import { BuildOrder } from '@/models';
 import { getDb } from '../../db';
-import { AppError, notFound } from '../../errors';
+import { AppError } from '../../errors';
 import { retryOnDeadlock } from '../../retry-deadlock';
 import type { OrderDto } from '../../schemas/orders';
 import { getOrder } from './get-order';
+import { lockOrder } from './lock-order';
 
 // Cancelling gives back whatever the order still holds.
 export async function cancelOrder({ orderId, version }: { orderId: number; version: number }): Promise<OrderDto> {
   const db = getDb();
   await retryOnDeadlock(() =>
     db.transaction(async (transaction) => {
-      const order = await BuildOrder.findByPk(orderId, { transaction, lock: transaction.LOCK.UPDATE });
-      if (!order) throw notFound('Build order');
-      if (order.version !== version) throw new AppError('stale_version', 'Someone else changed this order; reload and try again');
+      const order = await lockOrder(orderId, version, transaction);
       if (order.status === 'complete' || order.status === 'cancelled') throw new AppError('rule_violated', `${order.number} is already ${order.status}`);
       const replacements = { orderId };
       await db.query(

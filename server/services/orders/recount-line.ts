@@ -1,10 +1,11 @@
 import 'server-only';
-import { BuildOrder, BuildOrderLine, CountEvent } from '@/models';
+import { BuildOrderLine, CountEvent } from '@/models';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
 import { retryOnDeadlock } from '../../retry-deadlock';
 import type { OrderDto } from '../../schemas/orders';
 import { getOrder } from './get-order';
+import { lockOrder } from './lock-order';
 
 // A line whose count came out uncertain or out of tolerance goes back to the kitting queue: its
 // captures stay on record, but the line starts again from nothing and counts only new ones.
@@ -12,9 +13,7 @@ export async function recountLine({ orderId, lineId, version }: { orderId: numbe
   const db = getDb();
   await retryOnDeadlock(() =>
     db.transaction(async (transaction) => {
-      const order = await BuildOrder.findByPk(orderId, { transaction, lock: transaction.LOCK.UPDATE });
-      if (!order) throw notFound('Build order');
-      if (order.version !== version) throw new AppError('stale_version', 'Someone else changed this order; reload and try again');
+      const order = await lockOrder(orderId, version, transaction);
       if (order.status !== 'released' && order.status !== 'in_progress') throw new AppError('rule_violated', `${order.number} is ${order.status}: only an open order's lines are counted again`);
       const line = await BuildOrderLine.findOne({ where: { id: lineId, orderId }, transaction, lock: transaction.LOCK.UPDATE });
       if (!line) throw notFound('Order line');
