@@ -9,6 +9,8 @@ export class SiteSettings extends Model<InferAttributes<SiteSettings>, InferCrea
   declare stabilityWindowMs: number;
   declare varianceThresholdPct: string;
   declare varianceThresholdPcs: number;
+  /** The bench hides a bin's book quantity from its counter until the count is in. */
+  declare blindCycleCounts: CreationOptional<boolean>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -23,6 +25,7 @@ export class SiteSettings extends Model<InferAttributes<SiteSettings>, InferCrea
         stabilityWindowMs: { type: DataTypes.INTEGER, allowNull: false },
         varianceThresholdPct: { type: DataTypes.DECIMAL(6, 2), allowNull: false },
         varianceThresholdPcs: { type: DataTypes.INTEGER, allowNull: false },
+        blindCycleCounts: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: { type: DataTypes.DATE, allowNull: false },
         updatedAt: { type: DataTypes.DATE, allowNull: false },

@@ -25,12 +25,16 @@ export async function up({ context: q }: { context: QueryInterface }): Promise<v
   // A line sent back for a recount counts only the captures made after this one.
   await q.addColumn('build_order_lines', 'recount_after_event_id', { type: DataTypes.INTEGER, allowNull: true });
 
+  // Cycle counts blind by default: the counter does not see the book quantity until the count is in.
+  await q.addColumn('site_settings', 'blind_cycle_counts', { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true });
+
   // 2 % was the old value for an unknown spread; it let loose parts (5 %) read exact when they
   // were not. A site still on it moves to the cautious 5 %; a site that chose its own keeps it.
   await q.sequelize.query('UPDATE site_settings SET default_piece_spread = 0.05 WHERE default_piece_spread = 0.02');
 }
 
 export async function down({ context: q }: { context: QueryInterface }): Promise<void> {
+  await q.removeColumn('site_settings', 'blind_cycle_counts');
   await q.removeColumn('build_order_lines', 'recount_after_event_id');
   await q.removeColumn('build_order_lines', 'whole_piece_range');
   for (const c of ['apw_relative_variance', 'uncertain_pieces', 'whole_piece_range', 'probability_exact', 'bulk_scale_id']) await q.removeColumn('count_events', c);

@@ -9,6 +9,7 @@ export const updateSettingsSchema = z.object({
   stabilityWindowMs: z.number().int().min(200, { error: 'At least 200 ms' }).max(10_000, { error: 'At most 10 s' }).optional(),
   varianceThresholdPct: z.number().min(0).max(100).optional(),
   varianceThresholdPcs: z.number().int().min(0).max(1_000_000).optional(),
+  blindCycleCounts: z.boolean({ error: 'blindCycleCounts must be true or false' }).optional(),
   version: versionSchema,
 });
 export type UpdateSettingsInput = z.infer<typeof updateSettingsSchema>;
@@ -20,5 +21,6 @@ export interface SettingsDto {
   stabilityWindowMs: number;
   varianceThresholdPct: number;
   varianceThresholdPcs: number;
+  blindCycleCounts: boolean;
   version: number;
 }

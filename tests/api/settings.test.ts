@@ -14,6 +14,18 @@ describe('site settings', () => {
     await agent.patch('/api/v1/settings').send({ defaultPieceSpread: settings.defaultPieceSpread, version: settings.version + 1 });
   });
 
+  it('counts bins blind by default and unknown spreads at a cautious 5 %, and lets an admin switch blind counts off', async () => {
+    const { agent } = await signedIn('admin');
+    const { settings } = (await agent.get('/api/v1/settings')).body;
+    expect(settings).toMatchObject({ blindCycleCounts: true, defaultPieceSpread: 0.05 });
+    const off = await agent.patch('/api/v1/settings').send({ blindCycleCounts: false, version: settings.version });
+    expect(off.body.settings.blindCycleCounts).toBe(false);
+    const bad = await agent.patch('/api/v1/settings').send({ blindCycleCounts: 'yes', version: off.body.settings.version });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.blindCycleCounts).toBeTruthy();
+    await agent.patch('/api/v1/settings').send({ blindCycleCounts: true, version: off.body.settings.version });
+  });
+
   it('rejects out-of-range values with field messages', async () => {
     const { agent } = await signedIn('admin');
     const res = await agent.patch('/api/v1/settings').send({ defaultPieceSpread: -1, stabilityWindowMs: 5, displayUnit: 'stone', version: 0 });

@@ -18,6 +18,7 @@ export default async function BenchPage({ searchParams }: { searchParams: Promis
         containers={containers}
         stabilityWindowMs={settings.stabilityWindowMs}
         defaultPieceSpread={settings.defaultPieceSpread}
+        blindCycleCounts={settings.blindCycleCounts}
         initialBin={bin ?? null}
       />
     </BenchTabGuard>

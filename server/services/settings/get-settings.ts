@@ -11,6 +11,7 @@ export function toSettingsDto(s: SiteSettings): SettingsDto {
     stabilityWindowMs: s.stabilityWindowMs,
     varianceThresholdPct: Number(s.varianceThresholdPct),
     varianceThresholdPcs: s.varianceThresholdPcs,
+    blindCycleCounts: s.blindCycleCounts,
     version: s.version,
   };
 }

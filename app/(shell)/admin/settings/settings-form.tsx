@@ -15,6 +15,7 @@ const schema = yup.object({
   stabilityWindowMs: yup.number().typeError('A whole number of ms').integer().min(200, 'At least 200 ms').max(10000, 'At most 10 s').required(),
   varianceThresholdPct: yup.number().typeError('A number').min(0).max(100).required(),
   varianceThresholdPcs: yup.number().typeError('A whole number').integer().min(0).required(),
+  blindCycleCounts: yup.boolean().required(),
 });
 
 export function SettingsForm({ initial }: { initial: SettingsDto }) {
@@ -50,11 +51,18 @@ export function SettingsForm({ initial }: { initial: SettingsDto }) {
             </Field>
           </div>
           <FormField name="defaultPieceSpread" label="Assumed piece-weight spread (coefficient of variation)" inputMode="decimal" hint="Used until a part has learned its own, as a cautious upper value: counts of unlearned parts stay right for parts that vary up to this much. 0.05 (5 %) covers springs, moulded plastic and wire forms (common practice); a lower value makes unlearned counts look surer than they may be." />
-          <FormField name="stabilityWindowMs" label="Stability window (ms)" inputMode="numeric" hint="A reading counts as steady when it stays within one division for this long." />
+          <FormField name="stabilityWindowMs" label="Stability window (ms)" inputMode="numeric" hint="A reading counts as steady when it stays within the scale's own noise (at least one division) for this long." />
           <div className="grid gap-4 sm:grid-cols-2">
             <FormField name="varianceThresholdPct" label="Variance needing approval (%)" inputMode="decimal" />
             <FormField name="varianceThresholdPcs" label="Variance needing approval (pieces)" inputMode="numeric" />
           </div>
+          <label className="flex min-h-11 items-start gap-3">
+            <Field type="checkbox" name="blindCycleCounts" className="mt-1 h-5 w-5" />
+            <span>
+              Count bins blind
+              <span className="block text-sm text-ink-soft">The bench does not show a bin&apos;s book quantity before it is counted, so the book cannot steer the count (common practice for cycle counts).</span>
+            </span>
+          </label>
           <FormMessage message={message} />
           <p role="status" aria-live="polite" className="text-sm text-ok">{saved ? 'Saved.' : ''}</p>
           <button type="submit" className="btn-primary" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Save settings'}</button>

@@ -26,6 +26,7 @@ interface Props {
   stabilityWindowMs: number;
   defaultPieceSpread: number;
   initialBin: string | null;
+  blindCycleCounts: boolean;
 }
 
 /** Container put on the practice pan when none is chosen (our demo tray). */
@@ -51,7 +52,7 @@ function StopCount({ work, onStop }: { work: BenchWork; onStop(): void }) {
 }
 
 // The bench's layout; what it shows and does comes from useBench.
-export function BenchStation({ scales, containers, stabilityWindowMs, defaultPieceSpread, initialBin }: Props) {
+export function BenchStation({ scales, containers, stabilityWindowMs, defaultPieceSpread, initialBin, blindCycleCounts }: Props) {
   const {
     work, part, scale, scaleId, setScaleId, setSource, typed, setTyped, kind,
     frame, frameRef, trace, notice, codes, spreadNote, verdict, showing,
@@ -111,7 +112,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
         </div>
         <aside className="min-w-0 space-y-4">
           <QueuePanel items={queue} onSend={() => void flushQueue()} onDrop={dropQueued} />
-          {!work ? <WorkChooser onChoose={chooseWork} disabled={!scale} initialBin={initialBin} /> : null}
+          {!work ? <WorkChooser onChoose={chooseWork} disabled={!scale} initialBin={initialBin} blindCycleCounts={blindCycleCounts} /> : null}
           <ScalePicker scales={scalesNow} scaleId={scaleId} locked={work !== null} onPick={setScaleId} />
           {scale ? (
             <label className="flex min-h-11 items-center gap-3">

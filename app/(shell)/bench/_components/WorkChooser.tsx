@@ -19,12 +19,14 @@ interface Props {
   disabled?: boolean;
   /** A bin code to start with (from a link such as /bench?bin=K-01-1-01). */
   initialBin?: string | null;
+  /** The site counts bins blind: their book quantity is not shown before the count. */
+  blindCycleCounts: boolean;
 }
 
 const wholeOrNull = (text: string): number | null => (/^\d+$/.test(text.trim()) ? Number(text.trim()) : null);
 
 // Scan a part number (a keyboard-wedge scanner types it and presses Enter) or pick from the list.
-export function WorkChooser({ onChoose, disabled, initialBin }: Props) {
+export function WorkChooser({ onChoose, disabled, initialBin, blindCycleCounts }: Props) {
   const [purpose, setPurpose] = useState<WorkPurpose>(initialBin ? 'bin' : 'part');
   const [query, setQuery] = useState(initialBin ?? '');
   const [items, setItems] = useState<WorkItem[]>([]);
@@ -32,7 +34,7 @@ export function WorkChooser({ onChoose, disabled, initialBin }: Props) {
   const [target, setTarget] = useState('');
   const [below, setBelow] = useState('0');
   const [above, setAbove] = useState('0');
-  const source = useMemo(() => (purpose === 'kit_line' ? queueWorkSource() : purpose === 'bin' ? binWorkSource() : partWorkSource(purpose)), [purpose]);
+  const source = useMemo(() => (purpose === 'kit_line' ? queueWorkSource() : purpose === 'bin' ? binWorkSource(blindCycleCounts) : partWorkSource(purpose)), [purpose, blindCycleCounts]);
   const kind = KINDS.find((k) => k.purpose === purpose)!;
   const scanRef = useRef<HTMLInputElement>(null);
 
