@@ -7,16 +7,18 @@ export interface PendingConfirm {
   /** The button that does it, e.g. "Yes, switch off". */
   yes: string;
   onConfirm(): void | Promise<void>;
+  /** A positive action (accept, approve) is not shown as a danger. */
+  tone?: 'danger' | 'primary';
 }
 
 export function ConfirmBar({ pending, onDone, tone = 'danger' }: { pending: PendingConfirm | null; onDone(): void; tone?: 'danger' | 'primary' }) {
   if (!pending) return null;
   return (
     <div role="alertdialog" aria-label="Please confirm" className="flex flex-wrap items-center gap-3 rounded-md border-2 border-caution bg-paper-card px-4 py-3">
-      <p className="flex-1 font-medium">{pending.question}</p>
+      <p className="min-w-64 flex-1 font-medium">{pending.question}</p>
       <button
         type="button"
-        className={tone === 'danger' ? 'btn-danger' : 'btn-primary'}
+        className={(pending.tone ?? tone) === 'danger' ? 'btn-danger' : 'btn-primary'}
         onClick={async () => {
           onDone();
           await pending.onConfirm();

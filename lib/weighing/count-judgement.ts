@@ -10,6 +10,7 @@
 import { countStep, countVariance, uncertainPiecesOf, type CountModel } from './count-variance';
 import { normalDensity, twoSidedTail } from './normal';
 import type { SpreadNode } from './spread-belief';
+import { toWholePieces } from './tolerance';
 
 /** A count is exact when the chance that it is the true count is at least this (our choice; the target is 99 % right). */
 export const EXACT_PROBABILITY: number = 0.99;
@@ -84,7 +85,7 @@ export function judgeCount(model: CountModel, countRaw: number, nodes: readonly 
     const density = nodes.reduce((sum, node, j) => sum + (node.weight * normalDensity(offset / atRaw[j])) / atRaw[j], 0);
     const wholePiecePValue = nodes.reduce((sum, node, j) => sum + node.weight * twoSidedTail(offset / atRaw[j]), 0);
     return {
-      count, probabilityExact: Math.min(1, density), exact: false, wholePieceRange: Math.floor(expandedUncertainty + 0.5),
+      count, probabilityExact: Math.min(1, density), exact: false, wholePieceRange: toWholePieces(expandedUncertainty),
       standardUncertainty, expandedUncertainty, wholePiecePValue, uncertainPieces,
     };
   }
@@ -140,5 +141,5 @@ function wholePieceRangeOf(chance: (k: number) => number, count: number, window:
     covered += chance(count - h) + chance(count + h);
     if (covered >= COVERAGE) return h;
   }
-  return Math.max(window + 1, Math.floor(expanded + 0.5));
+  return Math.max(window + 1, toWholePieces(expanded));
 }

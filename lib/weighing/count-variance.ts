@@ -3,7 +3,8 @@
  * First-order propagation for N̂ = n·W_b/W_s with correlated inputs (JCGM 100:2008 5.1.2, 5.2.2),
  * every rounding covariance taken at its worst (rounding-covariance.ts).
  */
-import { largestRoundingCovariance, mostNegativeRoundingCovariance, netVarianceBound, readingVariance, type ReadingNoise } from './rounding-covariance';
+import { largestRoundingCovariance, mostNegativeRoundingCovariance, netVarianceBound, type ReadingNoise } from './rounding-covariance';
+import { indicationVariance } from './uncertainty';
 
 export interface WeighingScale extends ReadingNoise {
   /**
@@ -77,7 +78,7 @@ function weighingVariance(model: CountModel, count: number, c2: number): number 
     return netVarianceBound(bulk, spreadOf(count)) + bulkCalibration + r * r * sampleNetVariance(model, c2);
   }
   const noise = model.sampleScale;
-  const independent = readingVariance(noise) * (2 + 2 * r * r - 2 * r);
+  const independent = indicationVariance(noise) * (2 + 2 * r * r - 2 * r);
   const moved = spreadOf(Math.abs(count - n));
   if (geometry === 'added') {
     return independent

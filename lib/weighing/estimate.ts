@@ -51,7 +51,7 @@ function scaleInGrams(scale: EstimateScale, unit: WeightUnit): WeighingScale {
 }
 
 /** What the request says about the spread, most specific first, then the part's history. */
-export function spreadBeliefOf(input: EstimateCountInput, sampleScale: WeighingScale, options: EstimateCountOptions): { belief: SpreadBelief; source: SpreadUsed['source'] } {
+function spreadBeliefOf(input: EstimateCountInput, sampleScale: WeighingScale, options: EstimateCountOptions): { belief: SpreadBelief; source: SpreadUsed['source'] } {
   const increments = input.sample.increments;
   if (increments && input.pieceSpread == null) {
     const learned = spreadFromIncrements(increments.map((x) => toGrams(x, input.unit)), sampleScale);

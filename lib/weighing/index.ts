@@ -12,6 +12,6 @@ export * from './tolerance';
 export * from './stability';
 export * from './warnings';
 export * from './estimate-input';
-export { assessCount, estimateCount, spreadBeliefOf, type CountShare, type EstimateCountResult, type SpreadUsed } from './estimate';
+export { assessCount, estimateCount, type CountShare, type EstimateCountResult, type SpreadUsed } from './estimate';
 export * from './kit-line';
 export * from './sample-plausibility';

@@ -16,17 +16,13 @@
  * Since Δ is unknown to better than σ, the count takes the worst phase: the largest ρ (f = 0) where
  * a positive covariance hurts and the most negative (f = 1/2) where a negative one does.
  */
+import { indicationVariance } from './uncertainty';
 
 export interface ReadingNoise {
   /** Division d. */
   division: number;
   /** Repeatability s_r (standard deviation of one reading); 0 when unknown. */
   repeatability: number;
-}
-
-/** Variance of one reading's error: rounding plus repeatability, d²/12 + s_r² (GUM F.2.2.1). */
-export function readingVariance(noise: ReadingNoise): number {
-  return noise.division ** 2 / 12 + noise.repeatability ** 2;
 }
 
 function damping(noise: ReadingNoise, loadSpread: number): number {
@@ -98,5 +94,5 @@ export function mostNegativeRoundingCovariance(noise: ReadingNoise, loadSpread: 
  * load half a division from the grid, the net is d or 0 around its mean: variance d²/4.
  */
 export function netVarianceBound(noise: ReadingNoise, loadSpread: number): number {
-  return 2 * readingVariance(noise) + 2 * mostNegativeRoundingCovariance(noise, loadSpread);
+  return 2 * indicationVariance(noise) + 2 * mostNegativeRoundingCovariance(noise, loadSpread);
 }

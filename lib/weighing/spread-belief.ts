@@ -12,7 +12,8 @@
  * reading noise is taken off with the rest of the uncertainty, never by a gate. A count then
  * averages over this belief (count-judgement.ts).
  */
-import { readingVariance, type ReadingNoise } from './rounding-covariance';
+import type { ReadingNoise } from './rounding-covariance';
+import { indicationVariance } from './uncertainty';
 
 /**
  * Used for a part whose spread is not known: cautious enough that counts stay right for true
@@ -132,7 +133,7 @@ export function spreadFromIncrements(increments: readonly number[], noise: Readi
   return {
     kind: 'learned',
     scatter: ss / (m - 1) / mean ** 2,
-    noise: (2 * readingVariance(noise) * (1 + 1 / m)) / mean ** 2,
+    noise: (2 * indicationVariance(noise) * (1 + 1 / m)) / mean ** 2,
     degreesOfFreedom: m - 1,
     observations: m,
   };

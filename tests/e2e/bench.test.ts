@@ -139,9 +139,9 @@ describe('the bench (browser, simulated scale)', () => {
     // Stopping once the count has started asks first, saying what would be lost.
     await whenSettled(page, () => page.getByRole('button', { name: /Zero the empty pan/ }).click(), headingShown(page, /Count \d+ pieces onto the pan/));
     await page.getByRole('button', { name: 'Stop this count and choose other work' }).click();
-    const ask = page.getByRole('alertdialog', { name: 'Stop this count?' });
-    await expect.poll(() => ask.textContent()).toContain('will not be recorded');
-    await ask.getByRole('button', { name: 'Keep counting' }).click();
+    const ask = page.getByRole('alertdialog', { name: 'Please confirm' });
+    await expect.poll(() => ask.textContent()).toContain('Stop this count? The tare taken for it will not be recorded.');
+    await ask.getByRole('button', { name: 'Keep it as it is' }).click();
     await expect.poll(headingShown(page, /Count \d+ pieces onto the pan/)).toBe(true);
     await page.getByRole('button', { name: 'Stop this count and choose other work' }).click();
     await ask.getByRole('button', { name: 'Yes, stop and choose other work' }).click();

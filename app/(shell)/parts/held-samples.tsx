@@ -4,18 +4,24 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import type { HeldSample } from '@/server/services/parts/held-samples';
 import { apiFetch } from '../../_components/api-client';
+import { ConfirmBar, type PendingConfirm } from '../../_components/confirm-bar';
 
 const grams = (x: number) => `${Number(x.toPrecision(6))} g`;
 
 // Samples far from their part's history wait here. Each decision is asked twice, with what it does.
 export function HeldSamples({ samples }: { samples: HeldSample[] }) {
   const router = useRouter();
-  const [asking, setAsking] = useState<{ id: number; decision: 'accept' | 'reject' } | null>(null);
+  const [asking, setAsking] = useState<{ id: number; confirm: PendingConfirm } | null>(null);
   const [message, setMessage] = useState<string | null>(null);
   if (samples.length === 0 && !message) return null;
+  const ask = (s: HeldSample, decision: 'accept' | 'reject') => setAsking({
+    id: s.id,
+    confirm: decision === 'accept'
+      ? { question: `Accepting makes ${grams(s.averagePieceWeight)} the piece weight of ${s.partNumber}${s.partApw != null ? ` (now ${grams(s.partApw)})` : ''} and lets the sample teach its spread.`, yes: 'Yes, accept', tone: 'primary', onConfirm: () => decide(s, 'accept') }
+      : { question: `Rejecting keeps the sample on record but it teaches ${s.partNumber} nothing.`, yes: 'Yes, reject', onConfirm: () => decide(s, 'reject') },
+  });
   const decide = async (s: HeldSample, decision: 'accept' | 'reject') => {
     const res = await apiFetch(`/api/v1/parts/${s.partId}/samples/${s.id}/decision`, { method: 'POST', body: { decision } });
-    setAsking(null);
     setMessage(res.ok ? `${s.partNumber}: sample ${decision === 'accept' ? 'accepted' : 'rejected'}.` : res.message);
     if (res.ok) router.refresh();
   };
@@ -30,21 +36,11 @@ export function HeldSamples({ samples }: { samples: HeldSample[] }) {
             <p className="font-bold">{s.partNumber} <span className="font-normal text-ink-soft">· {s.quantity} pcs at {grams(s.averagePieceWeight)} each · {s.scaleName} · {s.takenBy}</span></p>
             <p className="text-sm">{s.holdReason}.</p>
             {asking?.id === s.id ? (
-              <div className="mt-2 flex flex-wrap items-center gap-2">
-                <span className="text-sm">
-                  {asking.decision === 'accept'
-                    ? `Accepting makes ${grams(s.averagePieceWeight)} the piece weight of ${s.partNumber}${s.partApw != null ? ` (now ${grams(s.partApw)})` : ''} and lets the sample teach its spread.`
-                    : `Rejecting keeps the sample on record but it teaches ${s.partNumber} nothing.`}
-                </span>
-                <button type="button" className={asking.decision === 'accept' ? 'btn-primary' : 'btn-danger'} onClick={() => void decide(s, asking.decision)}>
-                  {asking.decision === 'accept' ? 'Yes, accept' : 'Yes, reject'}
-                </button>
-                <button type="button" className="btn-quiet" onClick={() => setAsking(null)}>Keep it waiting</button>
-              </div>
+              <div className="mt-2"><ConfirmBar pending={asking.confirm} onDone={() => setAsking(null)} /></div>
             ) : (
               <div className="mt-2 flex flex-wrap gap-2">
-                <button type="button" className="btn-primary" onClick={() => setAsking({ id: s.id, decision: 'accept' })}>Accept…</button>
-                <button type="button" className="btn-danger" onClick={() => setAsking({ id: s.id, decision: 'reject' })}>Reject…</button>
+                <button type="button" className="btn-primary" onClick={() => ask(s, 'accept')}>Accept…</button>
+                <button type="button" className="btn-danger" onClick={() => ask(s, 'reject')}>Reject…</button>
               </div>
             )}
           </li>

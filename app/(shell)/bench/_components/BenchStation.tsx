@@ -3,6 +3,7 @@
 import { useState } from 'react';
 import type { ContainerDto } from '@/server/schemas/containers';
 import type { ScaleDto } from '@/server/schemas/scales';
+import { ConfirmBar, type PendingConfirm } from '@/app/_components/confirm-bar';
 import type { BenchWork } from '../_lib/bench-work';
 import { CaptureResult } from './CaptureResult';
 import { CountReadout } from './CountReadout';
@@ -34,20 +35,14 @@ const PRACTICE_TRAY_G = 150;
 
 /** Stopping throws the count in progress away: where there is something to lose, it asks first, saying what. */
 function StopCount({ work, onStop }: { work: BenchWork; onStop(): void }) {
-  const [asking, setAsking] = useState(false);
+  const [pending, setPending] = useState<PendingConfirm | null>(null);
   const atStake = work.step !== 'tare' && work.step !== 'captured';
-  if (!asking) {
-    return <button type="button" className="btn-quiet" onClick={() => (atStake ? setAsking(true) : onStop())}>Stop this count and choose other work</button>;
-  }
-  const lost = work.sample ? `the sample of ${work.sample.quantity} pieces and whatever is counted on the pan` : 'the tare taken for it';
+  const lost = work.sample ? `The sample of ${work.sample.quantity} pieces and whatever is counted on the pan` : 'The tare taken for it';
+  if (pending) return <ConfirmBar pending={pending} onDone={() => setPending(null)} />;
   return (
-    <div role="alertdialog" aria-label="Stop this count?" className="card space-y-3 border-2 border-caution">
-      <p className="font-bold">Stop this count? {lost[0].toUpperCase() + lost.slice(1)} will not be recorded.</p>
-      <div className="flex flex-wrap gap-2">
-        <button type="button" className="btn-danger" onClick={onStop}>Yes, stop and choose other work</button>
-        <button type="button" className="btn-quiet" onClick={() => setAsking(false)}>Keep counting</button>
-      </div>
-    </div>
+    <button type="button" className="btn-quiet" onClick={() => (atStake ? setPending({ question: `Stop this count? ${lost} will not be recorded.`, yes: 'Yes, stop and choose other work', onConfirm: onStop }) : onStop())}>
+      Stop this count and choose other work
+    </button>
   );
 }
 

@@ -116,7 +116,7 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   );
   const spread = part?.spreadBelief ?? null;
   // Until the part has learned its spread, the site's cautious value stands in for it.
-  const spreadOrAssumed: SpreadBelief = spread ?? { kind: 'assumed', pieceSpread: defaultPieceSpread };
+  const spreadOrAssumed: SpreadBelief = useMemo(() => spread ?? { kind: 'assumed', pieceSpread: defaultPieceSpread }, [spread, defaultPieceSpread]);
   const chosenContainer = containers.find((c) => c.id === (work?.containerId ?? containerChoice)) ?? null;
   const pipelineWork: PipelineWork = {
     tare: work?.tare ?? work?.panZero ?? 0,
@@ -177,8 +177,13 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     };
   }, [flushQueue, queueStore]);
 
-  const noise = scale ? { division: scale.division, repeatability: scale.repeatability ?? 0 } : null;
-  const growPlan = work?.step === 'grow' && work.sample && noise ? planNextGrow({ noise, sample: work.sample, spread: spreadOrAssumed, upTo: work.targetQuantity != null ? work.targetQuantity + (work.tolerance?.above ?? 0) : undefined }) : null;
+  // The page renders with every animation frame of readings: advice that does not depend on the
+  // reading is worked out only when what it does depend on changes.
+  const noise = useMemo(() => (scale ? { division: scale.division, repeatability: scale.repeatability ?? 0 } : null), [scale]);
+  const growPlan = useMemo(
+    () => (work?.step === 'grow' && work.sample && noise ? planNextGrow({ noise, sample: work.sample, spread: spreadOrAssumed, upTo: work.targetQuantity != null ? work.targetQuantity + (work.tolerance?.above ?? 0) : undefined }) : null),
+    [work, noise, spreadOrAssumed],
+  );
 
   const chooseWork = (item: WorkItem) => {
     if (!scale) return;
@@ -352,14 +357,18 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   const verdict = work?.targetQuantity != null && frame?.estimate && (work.step === 'count' || work.step === 'captured')
     ? judgeKitLine({ count: frame.estimate.count, wholePieceRange: frame.estimate.wholePieceRange }, { target: work.targetQuantity, below: work.tolerance?.below ?? 0, above: work.tolerance?.above ?? 0 })
     : null;
-  const spreadNote = work && part && noise
-    ? describeSpread({ belief: spreadOrAssumed, noise, averagePieceWeight: work.sample ? work.sample.netWeight / work.sample.quantity : part.averagePieceWeight, sampleQuantity: work.sample?.quantity ?? sampleQty, sampleOnPan: sampleStaysOnPan(work.purpose) })
-    : null;
+  const spreadNote = useMemo(
+    () => (work && part && noise
+      ? describeSpread({ belief: spreadOrAssumed, noise, averagePieceWeight: work.sample ? work.sample.netWeight / work.sample.quantity : part.averagePieceWeight, sampleQuantity: work.sample?.quantity ?? sampleQty, sampleOnPan: sampleStaysOnPan(work.purpose) })
+      : null),
+    [work, part, noise, spreadOrAssumed, sampleQty],
+  );
   // Before the count: can this scale count this part, and would another of the bench serve better?
-  const apwKnown = work?.sample ? work.sample.netWeight / work.sample.quantity : part?.averagePieceWeight ?? null;
-  const advice = work && scale && apwKnown && (work.step === 'tare' || work.step === 'sample')
-    ? adviseScales(scalesNow.map(advisedScale), scale.id, { averagePieceWeight: apwKnown, spread: spreadOrAssumed }, work.targetQuantity, sampleStaysOnPan(work.purpose), chosenContainer?.tare ?? 0)
-    : null;
+  const advice = useMemo(() => {
+    const apwKnown = work?.sample ? work.sample.netWeight / work.sample.quantity : part?.averagePieceWeight ?? null;
+    if (!work || !scale || !apwKnown || (work.step !== 'tare' && work.step !== 'sample')) return null;
+    return adviseScales(scalesNow.map(advisedScale), scale.id, { averagePieceWeight: apwKnown, spread: spreadOrAssumed }, work.targetQuantity, sampleStaysOnPan(work.purpose), chosenContainer?.tare ?? 0);
+  }, [work, part, scale, scalesNow, spreadOrAssumed, chosenContainer]);
   const showing: 'gross' | 'net' | 'count' = !work || work.step === 'tare' ? 'gross' : work.step === 'sample' ? 'net' : 'count';
   const kind = scale?.connection.kind;
 
