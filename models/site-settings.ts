@@ -11,6 +11,8 @@ export class SiteSettings extends Model<InferAttributes<SiteSettings>, InferCrea
   declare varianceThresholdPcs: number;
   /** The bench hides a bin's book quantity from its counter until the count is in. */
   declare blindCycleCounts: CreationOptional<boolean>;
+  /** IANA zone the shop keeps its days in; null follows the server's zone. */
+  declare timeZone: CreationOptional<string | null>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -26,6 +28,7 @@ export class SiteSettings extends Model<InferAttributes<SiteSettings>, InferCrea
         varianceThresholdPct: { type: DataTypes.DECIMAL(6, 2), allowNull: false },
         varianceThresholdPcs: { type: DataTypes.INTEGER, allowNull: false },
         blindCycleCounts: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        timeZone: { type: DataTypes.STRING(64), allowNull: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: { type: DataTypes.DATE, allowNull: false },
         updatedAt: { type: DataTypes.DATE, allowNull: false },

@@ -1,7 +1,9 @@
 import 'server-only';
 import { Op } from 'sequelize';
 import { Scale, User } from '@/models';
+import { shiftDay, siteDay } from '@/lib/time/site-clock';
 import { getDb } from '../db';
+import { siteTimeZone } from '../services/settings/get-settings';
 import { sendMail } from '../mail/send-mail';
 import { claimRun } from './claim-run';
 
@@ -14,10 +16,11 @@ export interface ReminderRun {
 }
 
 // Marks scales due soon, locks overdue ones, and tells quality once per scale and due date.
-export async function runCalibrationReminders(today = new Date()): Promise<ReminderRun> {
+// A due date is a day at the site: a scale due today is locked only once the site's day is over.
+export async function runCalibrationReminders(now = new Date()): Promise<ReminderRun> {
   getDb();
-  const day = today.toISOString().slice(0, 10);
-  const soon = new Date(today.getTime() + DUE_SOON_DAYS * 86_400_000).toISOString().slice(0, 10);
+  const day = siteDay(await siteTimeZone(), now);
+  const soon = shiftDay(day, DUE_SOON_DAYS);
   const scales = await Scale.findAll({ where: { calibrationDueAt: { [Op.ne]: null, [Op.lte]: soon } } });
   const quality = (await User.findAll({ where: { role: 'quality', active: true }, attributes: ['email'] })).map((u) => u.email);
   const run: ReminderRun = { dueSoon: 0, overdue: 0, mailsSent: 0 };

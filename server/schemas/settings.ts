@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isTimeZone } from '@/lib/time/site-clock';
 import { WEIGHT_UNITS, type WeightUnit } from '@/lib/weighing/units';
 import { versionSchema } from './common';
 
@@ -10,6 +11,13 @@ export const updateSettingsSchema = z.object({
   varianceThresholdPct: z.number().min(0).max(100).optional(),
   varianceThresholdPcs: z.number().int().min(0).max(1_000_000).optional(),
   blindCycleCounts: z.boolean({ error: 'blindCycleCounts must be true or false' }).optional(),
+  // null: follow the server's own zone.
+  timeZone: z
+    .string({ error: 'A time zone name such as Europe/Berlin' })
+    .trim()
+    .refine(isTimeZone, { error: 'Not a time zone this server knows; use a name such as Europe/Berlin or America/Chicago' })
+    .nullable()
+    .optional(),
   version: versionSchema,
 });
 export type UpdateSettingsInput = z.infer<typeof updateSettingsSchema>;
@@ -22,5 +30,8 @@ export interface SettingsDto {
   varianceThresholdPct: number;
   varianceThresholdPcs: number;
   blindCycleCounts: boolean;
+  /** The zone days and times follow: the site's own, or the server's when none is set. */
+  timeZone: string;
+  timeZoneFromServer: boolean;
   version: number;
 }

@@ -1,6 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import { afterAll, describe, expect, it } from 'vitest';
-import { Bin, CountEvent, initModels, Part, PrintJob, Scale, User } from '../../models';
+import { Bin, CountEvent, initModels, Part, PrintJob, Scale, SiteSettings, User } from '../../models';
 import { createMigrator, migrateUp } from '../../models/migrate';
 import { migrations } from '../../models/migrations';
 import { createScratchDatabase, schemaShape } from '../helpers/scratch-database';
@@ -47,6 +47,9 @@ const ERA_ROWS: Record<string, (q: QueryInterface) => Promise<void>> = {
     await q.bulkInsert('piece_weight_samples', [{ id: 901, part_id: 901, scale_id: 901, quantity: 25, net_weight_g: 13.1, apw_g: 0.524, increments_g: null, created_by: 901, status: 'held', hold_reason: 'far from history', net_variance_g2: 0.0025, decided_by: null, decided_at: null, ...stamps }]);
     await q.bulkUpdate('parts', { spread_scatter: 0.0004, spread_noise: 0.00001, spread_dof: 24 }, { id: 901 });
   },
+  '0008-site-time-zone': async (q) => {
+    await q.bulkUpdate('site_settings', { time_zone: 'Europe/Vienna' }, { id: 1 });
+  },
 };
 
 describe('migrations on an existing database with data', () => {
@@ -86,6 +89,7 @@ describe('migrations on an existing database with data', () => {
     expect(await Scale.findByPk(901)).toMatchObject({ name: 'Upgrade bench', calibrationDueAt: '2027-01-31' });
     expect(await Bin.findByPk(901)).toMatchObject({ bookQuantity: 480, abcClass: 'B' });
     expect(await PrintJob.findByPk(901)).toMatchObject({ status: 'sent', labels: 1 });
+    expect(await SiteSettings.findByPk(1)).toMatchObject({ timeZone: 'Europe/Vienna' });
     const bin = (await Bin.findByPk(901))!;
     bin.bookQuantity = 478;
     await bin.save();

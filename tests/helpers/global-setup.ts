@@ -22,7 +22,9 @@ export async function setup(project: TestProject): Promise<void> {
   // Scheduled jobs run when a test asks (POST /api/v1/jobs/...), not by the clock.
   const printDir = mkdtempSync(path.join(os.tmpdir(), 'tallyforge-printed-'));
   printer = await startIppPrinter({ port: 0, dir: printDir });
-  const appEnv = { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(sink.port), PRINTER_URL: printer.url, TF_JOBS: '0' };
+  // TZ=UTC: the server's zone, and so the site's default, is UTC in tests (helpers/days.ts counts
+  // UTC days); tests of other zones set the site's own.
+  const appEnv = { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(sink.port), PRINTER_URL: printer.url, TF_JOBS: '0', TZ: 'UTC' };
   const started = await startApp(appEnv, 'test-results');
   app = started.child;
   project.provide('baseUrl', started.url);

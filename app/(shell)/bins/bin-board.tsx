@@ -5,7 +5,7 @@ import { useState } from 'react';
 import type { BinDto } from '@/server/schemas/bins';
 import type { LastVariance } from '@/server/services/bins/latest-bin-counts';
 import { DataGrid } from '../../_components/data-grid';
-import { formatWhen } from '../../_components/format';
+import { useSiteTime } from '../../_components/site-time';
 import { BenchLink } from './bench-link';
 
 export type BinRow = BinDto & { lastVariance: LastVariance | null };
@@ -24,12 +24,13 @@ function VarianceCell({ value }: { value: LastVariance | null }) {
 
 export function BinBoard({ rows, canCount, canPrint }: { rows: BinRow[]; canCount: boolean; canPrint: boolean }) {
   const [filter, setFilter] = useState('');
+  const { when } = useSiteTime();
   const columns: ColDef<BinRow>[] = [
     { field: 'code', headerName: 'Bin', minWidth: 140, cellClass: 'num' },
     { field: 'partNumber', headerName: 'Part', minWidth: 140 },
     { field: 'bookQuantity', headerName: 'Book qty', maxWidth: 130, type: 'numericColumn', cellClass: 'num' },
     { field: 'abcClass', headerName: 'ABC', maxWidth: 90 },
-    { field: 'lastCountedAt', headerName: 'Last counted', minWidth: 180, valueFormatter: (p) => (p.value ? formatWhen(p.value) : 'never') },
+    { field: 'lastCountedAt', headerName: 'Last counted', minWidth: 180, valueFormatter: (p) => (p.value ? when(p.value) : 'never') },
     {
       field: 'lastVariance',
       headerName: 'Last variance',

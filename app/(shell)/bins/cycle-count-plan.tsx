@@ -1,10 +1,13 @@
+'use client';
+
 import { CYCLE_DAYS } from '@/lib/variance';
 import type { BinDto } from '@/server/schemas/bins';
-import { formatWhen } from '../../_components/format';
+import { useSiteTime } from '../../_components/site-time';
 import { BenchLink } from './bench-link';
 
 // Bins due by their ABC class interval; the intervals are common practice, not a standard.
 export function CycleCountPlan({ bins, canCount }: { bins: BinDto[]; canCount: boolean }) {
+  const { when } = useSiteTime();
   return (
     <section aria-labelledby="due-title" className="card">
       <h2 id="due-title" className="font-bold">Due for a cycle count <span className="num text-forge">({bins.length})</span></h2>
@@ -17,7 +20,7 @@ export function CycleCountPlan({ bins, canCount }: { bins: BinDto[]; canCount: b
             <li key={b.id} className="flex flex-wrap items-center justify-between gap-x-4 gap-y-1 py-2">
               <span>
                 <span className="num font-medium">{b.code}</span> · {b.partNumber} · class {b.abcClass}
-                <span className="block text-sm text-ink-faint">{b.lastCountedAt ? `last counted ${formatWhen(b.lastCountedAt)}` : 'never counted'}</span>
+                <span className="block text-sm text-ink-faint">{b.lastCountedAt ? `last counted ${when(b.lastCountedAt)}` : 'never counted'}</span>
               </span>
               {canCount ? <BenchLink code={b.code} /> : null}
             </li>

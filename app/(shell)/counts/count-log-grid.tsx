@@ -2,14 +2,15 @@
 
 import type { ColDef, ICellRendererParams } from 'ag-grid-community';
 import Link from 'next/link';
+import { useMemo } from 'react';
 import { COUNT_PURPOSE_LABELS } from '@/lib/count-purposes';
 import { describeWarning } from '@/lib/weighing/warnings';
 import type { CountLogRow } from '@/server/schemas/counts';
 import { DataGrid, fitHeight } from '../../_components/data-grid';
-import { formatGrams, formatWhen } from '../../_components/format';
+import { formatGrams } from '../../_components/format';
+import { useSiteTime } from '../../_components/site-time';
 
-const columns: ColDef<CountLogRow>[] = [
-  { field: 'at', headerName: 'When', minWidth: 200, valueFormatter: (p) => formatWhen(p.value) },
+const columnsAfterWhen: ColDef<CountLogRow>[] = [
   { field: 'partNumber', headerName: 'Part', minWidth: 170, cellClass: 'num', tooltipField: 'description' },
   {
     headerName: 'Count',
@@ -46,5 +47,7 @@ const columns: ColDef<CountLogRow>[] = [
 ];
 
 export function CountLogGrid({ rows }: { rows: CountLogRow[] }) {
+  const { when } = useSiteTime();
+  const columns = useMemo<ColDef<CountLogRow>[]>(() => [{ field: 'at', headerName: 'When', minWidth: 170, valueFormatter: (p) => when(p.value) }, ...columnsAfterWhen], [when]);
   return <DataGrid label="Count log" emptyText="No counts match these filters." rows={rows} columns={columns} rowId={(r) => String(r.id)} height={fitHeight(rows.length, 620)} />;
 }

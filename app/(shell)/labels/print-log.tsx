@@ -5,6 +5,7 @@ import { useEffect, useState } from 'react';
 import type { PrintJobDto } from '@/server/schemas/labels';
 import { apiFetch } from '../../_components/api-client';
 import { DataGrid, fitHeight } from '../../_components/data-grid';
+import { useSiteTime } from '../../_components/site-time';
 
 const STATUS_TEXT: Record<PrintJobDto['status'], string> = { queued: 'Queued', sent: 'Sent', failed: 'Failed' };
 const STATUS_CLASS: Record<PrintJobDto['status'], string> = { queued: 'text-caution', sent: 'text-ok', failed: 'text-fault font-bold' };
@@ -54,9 +55,10 @@ export function PrintLog({ initial, followBatch }: { initial: PrintJobDto[]; fol
     setNote(`Job ${job.id} sent again as job ${res.data.jobs[0].id}.`);
   }
 
+  const { when } = useSiteTime();
   const columns: ColDef<PrintJobDto>[] = [
     { field: 'id', headerName: 'Job', maxWidth: 100, cellClass: 'num' },
-    { field: 'createdAt', headerName: 'Asked for', minWidth: 170, valueFormatter: (p) => new Date(p.value).toLocaleString() },
+    { field: 'createdAt', headerName: 'Asked for', minWidth: 170, valueFormatter: (p) => when(p.value) },
     { field: 'template', headerName: 'Labels', minWidth: 140, valueGetter: (p) => `${p.data?.labels} ${p.data?.template}` },
     { field: 'stock', headerName: 'Stock', maxWidth: 120 },
     { field: 'printer', headerName: 'Printer', minWidth: 160, valueFormatter: (p) => queueOf(p.value) ?? p.value },

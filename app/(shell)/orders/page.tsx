@@ -1,8 +1,10 @@
 import { can } from '@/lib/roles';
+import { siteDay } from '@/lib/time/site-clock';
 import { requirePageUser } from '@/server/auth/authorize';
 import { listOrdersSchema } from '@/server/schemas/orders';
 import { listKits } from '@/server/services/kits/list-kits';
 import { listOrders } from '@/server/services/orders/get-order';
+import { siteTimeZone } from '@/server/services/settings/get-settings';
 import { OrdersBoard } from './orders-board';
 
 export const metadata = { title: 'Build orders' };
@@ -20,7 +22,7 @@ export default async function OrdersPage({ searchParams }: { searchParams: Promi
         <h1 className="page-title">Build orders</h1>
         <p className="text-ink-soft">Kits to build: release them to reserve stock and send their lines to the bench, then follow them line by line.</p>
       </header>
-      <OrdersBoard orders={orders} status={status ?? 'all'} kits={kitChoices} canManage={canManage} today={new Date().toISOString().slice(0, 10)} />
+      <OrdersBoard orders={orders} status={status ?? 'all'} kits={kitChoices} canManage={canManage} today={siteDay(await siteTimeZone())} />
     </div>
   );
 }

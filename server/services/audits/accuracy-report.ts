@@ -2,6 +2,8 @@ import 'server-only';
 import { Op } from 'sequelize';
 import { AuditItem, CountEvent, Part, Scale, User } from '@/models';
 import { judgeAuditItem } from '@/lib/sampling/judge-audit';
+import { dayRange, siteIsoWeek } from '@/lib/time/site-clock';
+import { siteTimeZone } from '../settings/get-settings';
 import { wholePieceRangeOf } from '../counting/count-event-dto';
 import { getDb } from '../../db';
 
@@ -20,26 +22,19 @@ export interface AccuracyRow {
   exactRightShare: number | null;
 }
 
-// ISO week key (ISO 8601): the Thursday of a date's week decides its year.
-function isoWeek(d: Date): string {
-  const t = new Date(Date.UTC(d.getUTCFullYear(), d.getUTCMonth(), d.getUTCDate()));
-  t.setUTCDate(t.getUTCDate() + 4 - (t.getUTCDay() || 7));
-  const start = new Date(Date.UTC(t.getUTCFullYear(), 0, 1));
-  const week = Math.ceil(((t.getTime() - start.getTime()) / 86_400_000 + 1) / 7);
-  return `${t.getUTCFullYear()}-W${String(week).padStart(2, '0')}`;
-}
-
-// Every recount keyed in, grouped; counts captured between from and to (whole UTC days).
+// Every recount keyed in, grouped; counts captured between from and to (whole days at the site,
+// and weeks are the site's ISO 8601 weeks).
 export async function accuracyReport({ from, to, by }: { from: string; to: string; by: ReportGrouping }): Promise<AccuracyRow[]> {
   getDb();
-  const end = new Date(new Date(`${to}T00:00:00Z`).getTime() + 86_400_000);
+  const timeZone = await siteTimeZone();
+  const { start, end } = dayRange({ from, to }, timeZone);
   const items = await AuditItem.findAll({
     where: { handCount: { [Op.ne]: null } },
     include: [
       {
         model: CountEvent,
         as: 'event',
-        where: { createdAt: { [Op.gte]: new Date(`${from}T00:00:00Z`), [Op.lt]: end } },
+        where: { createdAt: { [Op.gte]: start!, [Op.lt]: end! } },
         include: [{ model: Part, as: 'part' }, { model: Scale, as: 'scale' }, { model: User, as: 'operator' }],
       },
     ],
@@ -48,7 +43,7 @@ export async function accuracyReport({ from, to, by }: { from: string; to: strin
   for (const item of items) {
     const e = (item as AuditItem & { event: CountEvent & { part: Part; scale: Scale; operator: User } }).event;
     const [key, label] =
-      by === 'part' ? [String(e.partId), e.part.partNumber] : by === 'scale' ? [String(e.scaleId), e.scale.name] : by === 'operator' ? [String(e.operatorId), e.operator.name] : [isoWeek(e.createdAt), isoWeek(e.createdAt)];
+      by === 'part' ? [String(e.partId), e.part.partNumber] : by === 'scale' ? [String(e.scaleId), e.scale.name] : by === 'operator' ? [String(e.operatorId), e.operator.name] : [siteIsoWeek(e.createdAt, timeZone), siteIsoWeek(e.createdAt, timeZone)];
     const judged = judgeAuditItem({ count: e.count, wholePieceRange: wholePieceRangeOf(e), exact: e.exact, handCount: item.handCount! });
     const group = groups.get(key) ?? { label, rows: [] };
     group.rows.push({ ...judged, hand: item.handCount! });

@@ -8,12 +8,13 @@ import { getDb } from '../../db';
 import { AppError } from '../../errors';
 import type { AuditDto, CreateAuditInput } from '../../schemas/audits';
 import { countEventWhere } from '../counting/count-event-filter';
+import { siteTimeZone } from '../settings/get-settings';
 import { getAudit } from './get-audit';
 
 // The lot is every capture in the population; the sample is drawn with a recorded seed.
 export async function createAudit({ input, by }: { input: CreateAuditInput; by: SessionUser }): Promise<AuditDto> {
   const db = getDb();
-  const events = await CountEvent.findAll({ where: countEventWhere(input.population), attributes: ['id'], order: [['id', 'ASC']], raw: true });
+  const events = await CountEvent.findAll({ where: countEventWhere(input.population, await siteTimeZone()), attributes: ['id'], order: [['id', 'ASC']], raw: true });
   if (events.length < 2) throw new AppError('rule_violated', `The population holds ${events.length} count(s); an audit needs at least 2`, { fields: { population: 'too few counts' } });
   const plan = samplingPlan(events.length, input.aql, input.level);
   const seed = input.seed ?? randomInt(1, 2 ** 31 - 1);

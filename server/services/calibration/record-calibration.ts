@@ -1,11 +1,13 @@
 import 'server-only';
 import { CalibrationRecord, Scale } from '@/models';
 import { evaluateCalibration, repeatabilityStdDev } from '@/lib/metrology/evaluate-calibration';
+import { shiftDay, siteDay } from '@/lib/time/site-clock';
 import { toGrams } from '@/lib/weighing/units';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
 import type { CalibrationRecordDto, RecordCalibrationInput } from '../../schemas/calibration';
+import { siteTimeZone } from '../settings/get-settings';
 import { checkTestWeights } from './check-test-weights';
 import { toCalibrationRecordDto } from './calibration-record-dto';
 
@@ -14,11 +16,12 @@ import { toCalibrationRecordDto } from './calibration-record-dto';
 // the repeatability it showed (used as s_r when counting).
 export async function recordCalibration({ scaleId, input, by }: { scaleId: number; input: RecordCalibrationInput; by: SessionUser }): Promise<CalibrationRecordDto> {
   const db = getDb();
+  const today = siteDay(await siteTimeZone());
   return db.transaction(async (transaction) => {
     const scale = await Scale.findByPk(scaleId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!scale) throw notFound('Scale');
     const g = (v: number) => toGrams(v, input.unit);
-    const performedAt = input.performedAt ?? new Date().toISOString().slice(0, 10);
+    const performedAt = input.performedAt ?? today;
     const test = {
       accuracyClass: scale.accuracyClass,
       verificationInterval: Number(scale.verificationIntervalG),
@@ -35,7 +38,7 @@ export async function recordCalibration({ scaleId, input, by }: { scaleId: numbe
       transaction,
     );
     const pass = verdict.pass && weights.adequate && input.zeroOk && input.tareOk;
-    const nextDueAt = pass ? addDays(performedAt, input.intervalDays) : null;
+    const nextDueAt = pass ? shiftDay(performedAt, input.intervalDays) : null;
     const record = await CalibrationRecord.create(
       {
         scaleId,
@@ -74,10 +77,4 @@ function failureSummary(v: ReturnType<typeof evaluateCalibration>, weightProblem
   if (!input.tareOk) parts.push('tare');
   if (weightProblems.length) parts.push(`test weights: ${weightProblems.join('; ')}`);
   return parts.join('; ');
-}
-
-function addDays(isoDate: string, days: number): string {
-  const d = new Date(`${isoDate}T00:00:00Z`);
-  d.setUTCDate(d.getUTCDate() + days);
-  return d.toISOString().slice(0, 10);
 }

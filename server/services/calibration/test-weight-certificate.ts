@@ -1,9 +1,11 @@
 import 'server-only';
 import { TestWeight } from '@/models';
+import { siteDay } from '@/lib/time/site-clock';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
 import type { TestWeightDto } from '../../schemas/calibration';
 import { readUpload, storeAttachedUpload } from '../../uploads/store-upload';
+import { siteTimeZone } from '../settings/get-settings';
 import { toTestWeightDto } from './test-weights';
 
 // A superseded certificate's file is kept: it backs the calibrations recorded while it was current.
@@ -15,7 +17,7 @@ export async function saveCertificate({ testWeightId, file }: { testWeightId: nu
     found.certificateFile = name;
     return found.save();
   });
-  return toTestWeightDto(weight);
+  return toTestWeightDto(weight, siteDay(await siteTimeZone()));
 }
 
 export async function readCertificate({ testWeightId }: { testWeightId: number }): Promise<{ bytes: Buffer; identifier: string }> {

@@ -1,12 +1,15 @@
 import 'server-only';
 import { TestWeight } from '@/models';
 import { weightMpeMg, type WeightClass } from '@/lib/metrology/weight-classes';
+import { siteDay } from '@/lib/time/site-clock';
 import { toGrams } from '@/lib/weighing/units';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
 import type { CreateTestWeightInput, TestWeightDto } from '../../schemas/calibration';
+import { siteTimeZone } from '../settings/get-settings';
 
-export function toTestWeightDto(w: TestWeight, today = new Date().toISOString().slice(0, 10)): TestWeightDto {
+// `today` is the site's day: a weight due today is still in date.
+export function toTestWeightDto(w: TestWeight, today: string): TestWeightDto {
   const nominal = Number(w.nominalG);
   return {
     id: w.id,
@@ -26,7 +29,8 @@ export function toTestWeightDto(w: TestWeight, today = new Date().toISOString().
 
 export async function listTestWeights(): Promise<TestWeightDto[]> {
   getDb();
-  return (await TestWeight.findAll({ order: [['nominalG', 'ASC'], ['identifier', 'ASC']] })).map((w) => toTestWeightDto(w));
+  const today = siteDay(await siteTimeZone());
+  return (await TestWeight.findAll({ order: [['nominalG', 'ASC'], ['identifier', 'ASC']] })).map((w) => toTestWeightDto(w, today));
 }
 
 // Only nominal values of the OIML R 111 1-2-5 series are accepted, so every weight has a class MPE.
@@ -44,5 +48,5 @@ export async function createTestWeight({ input }: { input: CreateTestWeightInput
     certificateFile: null,
     dueAt: input.dueAt ?? null,
   });
-  return toTestWeightDto(row);
+  return toTestWeightDto(row, siteDay(await siteTimeZone()));
 }

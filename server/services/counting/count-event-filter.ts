@@ -2,6 +2,7 @@ import 'server-only';
 import { Op, type WhereOptions } from 'sequelize';
 import type { CountEvent } from '@/models';
 import type { CountPurpose } from '@/models/columns';
+import { dayStart, shiftDay } from '@/lib/time/site-clock';
 
 export interface CountEventFilter {
   partId?: number;
@@ -12,8 +13,8 @@ export interface CountEventFilter {
   to?: string;
 }
 
-// Dates without a time are whole UTC days: `to` includes its day.
-export function countEventWhere(f: CountEventFilter): WhereOptions<CountEvent> {
+// Dates without a time are whole days at the site (`timeZone`): `to` includes its day.
+export function countEventWhere(f: CountEventFilter, timeZone: string): WhereOptions<CountEvent> {
   const where: Record<string | symbol, unknown> = {};
   if (f.partId) where.partId = f.partId;
   if (f.scaleId) where.scaleId = f.scaleId;
@@ -21,8 +22,8 @@ export function countEventWhere(f: CountEventFilter): WhereOptions<CountEvent> {
   if (f.purpose) where.purpose = f.purpose;
   if (f.from || f.to) {
     const range: Record<symbol, Date> = {};
-    if (f.from) range[Op.gte] = new Date(f.from.length === 10 ? `${f.from}T00:00:00Z` : f.from);
-    if (f.to) range[Op.lt] = f.to.length === 10 ? new Date(new Date(`${f.to}T00:00:00Z`).getTime() + 86_400_000) : new Date(f.to);
+    if (f.from) range[Op.gte] = f.from.length === 10 ? dayStart(f.from, timeZone) : new Date(f.from);
+    if (f.to) range[Op.lt] = f.to.length === 10 ? dayStart(shiftDay(f.to, 1), timeZone) : new Date(f.to);
     where.createdAt = range;
   }
   return where as WhereOptions<CountEvent>;

@@ -2,8 +2,10 @@ import 'server-only';
 import type { WhereOptions } from 'sequelize';
 import { Bin, BuildOrder, BuildOrderLine, CountEvent, Part, Scale, User } from '@/models';
 import type { WarningCode } from '@/lib/weighing/warnings';
+import { formatSiteDateTime } from '@/lib/time/site-clock';
 import { getDb } from '../../db';
 import type { CountLogQuery, CountLogRow } from '../../schemas/counts';
+import { siteTimeZone } from '../settings/get-settings';
 import { countEventWhere } from './count-event-filter';
 import { wholePieceRangeOf } from './count-event-dto';
 
@@ -18,8 +20,8 @@ type Loaded = CountEvent & {
   bin: Bin | null;
 };
 
-function findOptions(query: CountLogQuery) {
-  const where: WhereOptions<CountEvent> = { ...countEventWhere(query), ...(query.notExact ? { exact: false } : {}) };
+function findOptions(query: CountLogQuery, timeZone: string) {
+  const where: WhereOptions<CountEvent> = { ...countEventWhere(query, timeZone), ...(query.notExact ? { exact: false } : {}) };
   return {
     where,
     include: [
@@ -61,18 +63,21 @@ function toRow(e: Loaded): CountLogRow {
 export async function countLog(query: CountLogQuery): Promise<{ rows: CountLogRow[]; total: number; page: number; pageSize: number }> {
   getDb();
   const page = query.page ?? 1;
-  const { rows, count } = await CountEvent.findAndCountAll({ ...findOptions(query), limit: COUNT_LOG_PAGE_SIZE, offset: (page - 1) * COUNT_LOG_PAGE_SIZE, distinct: true });
+  const { rows, count } = await CountEvent.findAndCountAll({ ...findOptions(query, await siteTimeZone()), limit: COUNT_LOG_PAGE_SIZE, offset: (page - 1) * COUNT_LOG_PAGE_SIZE, distinct: true });
   return { rows: (rows as Loaded[]).map(toRow), total: count, page, pageSize: COUNT_LOG_PAGE_SIZE };
 }
 
-const HEADER = ['counted_at_utc', 'purpose', 'part_number', 'description', 'scale', 'counted_by', 'order', 'bin', 'net_g', 'sample_pcs', 'apw_g', 'count', 'plus_minus_pcs', 'expanded_uncertainty_pcs_k2', 'exact', 'target', 'warnings'];
+const HEADER = ['counted_at_utc', 'counted_at_site', 'purpose', 'part_number', 'description', 'scale', 'counted_by', 'order', 'bin', 'net_g', 'sample_pcs', 'apw_g', 'count', 'plus_minus_pcs', 'expanded_uncertainty_pcs_k2', 'exact', 'target', 'warnings'];
 
-// The same filters as the page, every page at once (up to 50 000 rows); warnings as their stable codes.
+// The same filters as the page, every page at once (up to 50 000 rows); warnings as their stable codes;
+// the moment both as UTC (for machines) and as the site's clock read it (for people).
 export async function countLogTable(query: CountLogQuery): Promise<{ header: readonly string[]; rows: unknown[][] }> {
   getDb();
-  const events = (await CountEvent.findAll({ ...findOptions(query), limit: EXPORT_LIMIT })) as Loaded[];
+  const timeZone = await siteTimeZone();
+  const events = (await CountEvent.findAll({ ...findOptions(query, timeZone), limit: EXPORT_LIMIT })) as Loaded[];
   const rows = events.map(toRow).map((r) => [
     r.at,
+    formatSiteDateTime(r.at, timeZone),
     r.purpose,
     r.partNumber,
     r.description,

@@ -1,13 +1,14 @@
 import 'server-only';
 import { CountEvent } from '@/models';
 import { getDb } from '../../db';
+import { siteTimeZone } from '../settings/get-settings';
 import type { CountEventDto, ListCountsQuery } from '../../schemas/counts';
 import { toCountEventDto } from './count-event-dto';
 import { countEventWhere } from './count-event-filter';
 
 export async function listCounts(query: ListCountsQuery): Promise<{ counts: CountEventDto[]; total: number; page: number; pageSize: number }> {
   getDb();
-  const where = countEventWhere(query);
+  const where = countEventWhere(query, await siteTimeZone());
   const { rows, count } = await CountEvent.findAndCountAll({
     where,
     order: [['id', 'DESC']],

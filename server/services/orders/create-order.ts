@@ -1,15 +1,18 @@
 import 'server-only';
 import { randomBytes } from 'node:crypto';
 import { BuildOrder, BuildOrderLine, Kit, KitComponent } from '@/models';
+import { siteYear } from '@/lib/time/site-clock';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
 import type { CreateOrderInput, OrderDto } from '../../schemas/orders';
+import { siteTimeZone } from '../settings/get-settings';
 import { getOrder } from './get-order';
 
 // A draft order copies the kit revision's bill of material, scaled by the number of kits.
 export async function createOrder({ input, by }: { input: CreateOrderInput; by: SessionUser }): Promise<OrderDto> {
   const db = getDb();
+  const timeZone = await siteTimeZone();
   const id = await db.transaction(async (transaction) => {
     const kit = await Kit.findByPk(input.kitId, { transaction });
     if (!kit) throw new AppError('not_found', 'Kit was not found', { fields: { kitId: 'no such kit' } });
@@ -20,7 +23,7 @@ export async function createOrder({ input, by }: { input: CreateOrderInput; by: 
       { transaction },
     );
     // The readable number comes from the row id, so two planners never get the same one.
-    order.number = `BO-${new Date().getUTCFullYear()}-${String(order.id).padStart(5, '0')}`;
+    order.number = `BO-${siteYear(timeZone)}-${String(order.id).padStart(5, '0')}`;
     await order.save({ transaction });
     await BuildOrderLine.bulkCreate(
       components.map((c) => ({

@@ -2,6 +2,7 @@ import 'server-only';
 import { SiteSettings } from '@/models';
 import { getDb } from '../../db';
 import type { SettingsDto } from '../../schemas/settings';
+import { serverTimeZone } from './server-time-zone';
 
 export function toSettingsDto(s: SiteSettings): SettingsDto {
   return {
@@ -12,6 +13,8 @@ export function toSettingsDto(s: SiteSettings): SettingsDto {
     varianceThresholdPct: Number(s.varianceThresholdPct),
     varianceThresholdPcs: s.varianceThresholdPcs,
     blindCycleCounts: s.blindCycleCounts,
+    timeZone: s.timeZone ?? serverTimeZone(),
+    timeZoneFromServer: s.timeZone === null || s.timeZone === undefined,
     version: s.version,
   };
 }
@@ -21,4 +24,9 @@ export async function getSettings(): Promise<SettingsDto> {
   const row = await SiteSettings.findByPk(1);
   if (!row) throw new Error('site_settings row 1 is missing; run the migrations');
   return toSettingsDto(row);
+}
+
+/** The zone the shop keeps its days in. */
+export async function siteTimeZone(): Promise<string> {
+  return (await getSettings()).timeZone;
 }

@@ -2,7 +2,9 @@ import 'server-only';
 import { Op } from 'sequelize';
 import { MailMessage, User } from '@/models';
 import { can, type Role } from '@/lib/roles';
+import { siteDay } from '@/lib/time/site-clock';
 import { getDb } from '../../db';
+import { siteTimeZone } from '../settings/get-settings';
 import { plannerWaiting } from './planner-waiting';
 import { QUALITY_SOURCES } from './quality-sources';
 import { queueWaiting } from './queue-waiting';
@@ -26,7 +28,7 @@ const ADMIN_SOURCES: WaitingSource[] = [
 ];
 
 const WORK_SOURCES: WaitingSource[] = [
-  async ({ role }) => (can(role, 'orders.manage') ? plannerWaiting(new Date().toISOString().slice(0, 10)) : null),
+  async ({ role }) => (can(role, 'orders.manage') ? plannerWaiting(siteDay(await siteTimeZone())) : null),
   async ({ role }) => (role === 'operator' || role === 'admin' ? queueWaiting() : null),
 ];
 

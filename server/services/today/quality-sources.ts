@@ -2,7 +2,9 @@ import 'server-only';
 import { Op } from 'sequelize';
 import { Audit, Scale } from '@/models';
 import { can } from '@/lib/roles';
+import { shiftDay, siteDay } from '@/lib/time/site-clock';
 import { DUE_SOON_DAYS } from '../../jobs/calibration-reminders';
+import { siteTimeZone } from '../settings/get-settings';
 import type { WaitingSource } from './waiting-item';
 
 export const QUALITY_SOURCES: WaitingSource[] = [
@@ -13,7 +15,7 @@ export const QUALITY_SOURCES: WaitingSource[] = [
   },
   async ({ role }) => {
     if (!can(role, 'calibration.manage')) return null;
-    const soon = new Date(Date.now() + DUE_SOON_DAYS * 86_400_000).toISOString().slice(0, 10);
+    const soon = shiftDay(siteDay(await siteTimeZone()), DUE_SOON_DAYS);
     const count = await Scale.count({ where: { status: { [Op.ne]: 'locked' }, [Op.or]: [{ status: 'due' }, { calibrationDueAt: { [Op.lte]: soon } }] } });
     return { key: 'scales-due', title: 'Scales due for calibration', count, detail: `Due within ${DUE_SOON_DAYS} days; locked once overdue`, href: '/scales' };
   },

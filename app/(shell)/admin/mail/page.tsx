@@ -1,5 +1,7 @@
 import { requirePageUser } from '@/server/auth/authorize';
+import { formatSiteDateTime } from '@/lib/time/site-clock';
 import { listMail } from '@/server/services/mail/list-mail';
+import { siteTimeZone } from '@/server/services/settings/get-settings';
 
 export const metadata = { title: 'Outbox' };
 
@@ -7,7 +9,7 @@ const STATUS_STYLE: Record<string, string> = { sent: 'text-ok', failed: 'text-fa
 
 export default async function MailPage() {
   await requirePageUser('admin.manage', '/admin/mail');
-  const messages = await listMail({ limit: 100 });
+  const [messages, timeZone] = await Promise.all([listMail({ limit: 100 }), siteTimeZone()]);
   return (
     <div className="space-y-6">
       <header>
@@ -23,7 +25,7 @@ export default async function MailPage() {
                 <span className="font-medium">{m.subject}</span>
                 <span className="text-sm text-ink-soft">to {m.to}</span>
                 <span className={`text-sm font-medium ${STATUS_STYLE[m.status] ?? ''}`}>{m.status}</span>
-                <time className="text-sm text-ink-faint num" dateTime={m.createdAt}>{m.createdAt.replace('T', ' ').slice(0, 16)} UTC</time>
+                <time className="text-sm text-ink-faint num" dateTime={m.createdAt}>{formatSiteDateTime(m.createdAt, timeZone)}</time>
               </summary>
               {m.error ? <p className="mt-2 text-sm text-fault">{m.error}</p> : null}
               <pre className="mt-3 whitespace-pre-wrap text-sm bg-paper p-3 rounded">{m.text}</pre>

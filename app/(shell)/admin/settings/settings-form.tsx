@@ -7,6 +7,7 @@ import { WEIGHT_UNITS } from '@/lib/weighing/units';
 import type { SettingsDto } from '@/server/schemas/settings';
 import { apiFetch } from '../../../_components/api-client';
 import { FormField, FormMessage } from '../../../_components/form-field';
+import { SelectField } from '../../../_components/select-field';
 
 const schema = yup.object({
   siteName: yup.string().trim().max(120).required('Site name is required'),
@@ -16,21 +17,26 @@ const schema = yup.object({
   varianceThresholdPct: yup.number().typeError('A number').min(0).max(100).required(),
   varianceThresholdPcs: yup.number().typeError('A whole number').integer().min(0).required(),
   blindCycleCounts: yup.boolean().required(),
+  timeZone: yup.string(),
 });
 
-export function SettingsForm({ initial }: { initial: SettingsDto }) {
+// The form keeps "" for "follow the server"; the API takes null for it.
+const formValues = (s: SettingsDto) => ({ ...s, timeZone: s.timeZoneFromServer ? '' : s.timeZone });
+
+export function SettingsForm({ initial, zones, serverZone }: { initial: SettingsDto; zones: string[]; serverZone: string }) {
   const [current, setCurrent] = useState(initial);
   const [message, setMessage] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
   return (
     <Formik
-      initialValues={current}
+      initialValues={formValues(current)}
       enableReinitialize
       validationSchema={schema}
       onSubmit={async (values, helpers) => {
         setMessage(null);
         setSaved(false);
-        const body = { ...values, defaultPieceSpread: Number(values.defaultPieceSpread), stabilityWindowMs: Number(values.stabilityWindowMs), varianceThresholdPct: Number(values.varianceThresholdPct), varianceThresholdPcs: Number(values.varianceThresholdPcs), version: current.version };
+        const { timeZoneFromServer: _fromServer, ...fields } = values;
+        const body = { ...fields, timeZone: values.timeZone || null, defaultPieceSpread: Number(values.defaultPieceSpread), stabilityWindowMs: Number(values.stabilityWindowMs), varianceThresholdPct: Number(values.varianceThresholdPct), varianceThresholdPcs: Number(values.varianceThresholdPcs), version: current.version };
         const res = await apiFetch<{ settings: SettingsDto }>('/api/v1/settings', { method: 'PATCH', body });
         if (res.ok) {
           setCurrent(res.data.settings);
@@ -50,6 +56,12 @@ export function SettingsForm({ initial }: { initial: SettingsDto }) {
               {WEIGHT_UNITS.map((u) => <option key={u} value={u}>{u}</option>)}
             </Field>
           </div>
+          <SelectField
+            name="timeZone"
+            label="Time zone"
+            options={[['', `The server's zone (${serverZone})`], ...zones.map((z) => [z, z] as const)]}
+            hint="Days, due dates, reminders, reports and the count log's day filters follow this zone, and every time is shown in it."
+          />
           <FormField name="defaultPieceSpread" label="Assumed piece-weight spread (coefficient of variation)" inputMode="decimal" hint="Used until a part has learned its own, as a cautious upper value: counts of unlearned parts stay right for parts that vary up to this much. 0.05 (5 %) covers springs, moulded plastic and wire forms (common practice); a lower value makes unlearned counts look surer than they may be." />
           <FormField name="stabilityWindowMs" label="Stability window (ms)" inputMode="numeric" hint="A reading counts as steady when it stays within the scale's own noise (at least one division) for this long." />
           <div className="grid gap-4 sm:grid-cols-2">

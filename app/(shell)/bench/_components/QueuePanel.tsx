@@ -1,6 +1,8 @@
+import { useSiteTime } from '../../../_components/site-time';
 import type { QueuedCapture } from '../_lib/capture-queue';
 
 export function QueuePanel({ items, onSend, onDrop }: { items: QueuedCapture[]; onSend(): void; onDrop(key: string): void }) {
+  const { clock } = useSiteTime();
   if (items.length === 0) return null;
   return (
     <section aria-labelledby="queue-title" className="card space-y-2 border-caution" data-testid="capture-queue">
@@ -10,7 +12,7 @@ export function QueuePanel({ items, onSend, onDrop }: { items: QueuedCapture[]; 
         {items.map((q) => (
           <li key={q.key} data-key={q.key} className="flex items-center justify-between gap-2 py-2">
             <span>
-              {q.label} · <span className="num">{new Date(q.queuedAt).toLocaleTimeString()}</span>
+              {q.label} · <span className="num">{clock(q.queuedAt)}</span>
               {q.error ? <span className="block text-fault">Refused: {q.error}</span> : null}
             </span>
             {q.error ? <button type="button" className="btn-quiet" onClick={() => onDrop(q.key)}>Remove</button> : null}

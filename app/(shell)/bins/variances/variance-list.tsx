@@ -2,10 +2,11 @@
 
 import { useState } from 'react';
 import type { PendingVariance } from '@/server/services/bins/pending-variances';
-import { formatWhen } from '../../../_components/format';
+import { useSiteTime } from '../../../_components/site-time';
 import { VarianceDecision } from './variance-decision';
 
 export function VarianceList({ initial, canDecide }: { initial: PendingVariance[]; canDecide: boolean }) {
+  const { when } = useSiteTime();
   const [pending, setPending] = useState(initial);
   const [notice, setNotice] = useState<string | null>(null);
   return (
@@ -23,7 +24,7 @@ export function VarianceList({ initial, canDecide }: { initial: PendingVariance[
             </div>
             <p className="text-sm">
               Book <span className="num font-medium">{v.bookQuantity}</span> → counted <span className="num font-medium">{v.counted}</span>
-              <span className="block text-ink-faint">by {v.countedBy}, {formatWhen(v.countedAt)}</span>
+              <span className="block text-ink-faint">by {v.countedBy}, {when(v.countedAt)}</span>
             </p>
             {canDecide ? (
               <VarianceDecision

@@ -3,6 +3,7 @@
 import Link from 'next/link';
 import { ORDER_STATUS_WORDS, STATUS_STYLE } from '@/lib/order-words';
 import type { AvailabilityLine, OrderDto } from '@/server/schemas/orders';
+import { useSiteTime } from '../../../_components/site-time';
 import { AvailabilityPanel } from './availability-panel';
 import { OrderActions } from './order-actions';
 import { OrderLines } from './order-lines';
@@ -16,6 +17,7 @@ interface Props {
 
 export function OrderView({ initial, initialAvailability, canManage }: Props) {
   const { order, replace, stale, checkedAt, live } = useOrder(initial);
+  const { when, clock } = useSiteTime();
   const { linesDone, lines } = order.progress;
   const share = lines ? Math.round((linesDone / lines) * 100) : 0;
   return (
@@ -28,7 +30,7 @@ export function OrderView({ initial, initialAvailability, canManage }: Props) {
         </h1>
         <p className="text-ink-soft">
           {order.quantity} × <Link href={`/kits/${order.kitId}`} className="text-forge hover:underline">{order.kitCode} rev {order.kitRevision}</Link> — {order.kitDescription} · {order.dueDate ? `due ${order.dueDate}` : 'no due date'}
-          {order.completedAt ? ` · completed ${order.completedAt.slice(0, 10)}` : order.releasedAt ? ` · released ${order.releasedAt.slice(0, 10)}` : ''}
+          {order.completedAt ? ` · completed ${when(order.completedAt)}` : order.releasedAt ? ` · released ${when(order.releasedAt)}` : ''}
         </p>
       </header>
 
@@ -36,7 +38,7 @@ export function OrderView({ initial, initialAvailability, canManage }: Props) {
         <div className="flex flex-wrap items-baseline justify-between gap-2">
           <h2 id="progress-title" className="font-bold">Progress</h2>
           <p className="text-sm text-ink-faint" aria-live="off">
-            {live ? (stale ? <span className="text-caution">Not updated: {stale}</span> : `Updates by itself${checkedAt ? ` · checked ${checkedAt.toLocaleTimeString()}` : ''}`) : 'Closed'}
+            {live ? (stale ? <span className="text-caution">Not updated: {stale}</span> : `Updates by itself${checkedAt ? ` · checked ${clock(checkedAt)}` : ''}`) : 'Closed'}
           </p>
         </div>
         <p role="status" aria-live="polite" className="text-lg" data-testid="order-progress">

@@ -5,7 +5,8 @@ import { listAudits } from '@/server/services/audits/get-audit';
 import { listParts } from '@/server/services/parts/list-parts';
 import { listScales } from '@/server/services/scales/list-scales';
 import { listUsers } from '@/server/services/users/list-users';
-import { todayIso } from '../../../_components/format';
+import { shiftDay, siteDay } from '@/lib/time/site-clock';
+import { siteTimeZone } from '@/server/services/settings/get-settings';
 import { AuditVerdict } from './audit-verdict';
 import { CreateAuditForm } from './create-audit-form';
 import { SamplingPlanCalculator } from './sampling-plan-calculator';
@@ -15,7 +16,7 @@ export const metadata = { title: 'Count audits' };
 export default async function AuditsPage() {
   await requirePageUser('audits.run', '/quality/audits');
   const [audits, parts, scales, users] = await Promise.all([listAudits(), listParts({ page: 1, pageSize: 500, sort: 'partNumber', dir: 'asc' }), listScales(), listUsers()]);
-  const now = new Date();
+  const today = siteDay(await siteTimeZone());
   return (
     <div className="space-y-6">
       <header>
@@ -28,8 +29,8 @@ export default async function AuditsPage() {
           parts={parts.parts.map((p) => ({ id: p.id, label: p.partNumber }))}
           operators={users.filter((u) => can(u.role, 'counts.capture')).map((u) => ({ id: u.id, label: u.name }))}
           scales={scales.map((s) => ({ id: s.id, label: s.name }))}
-          today={todayIso(now)}
-          monthAgo={todayIso(new Date(now.getTime() - 30 * 86_400_000))}
+          today={today}
+          monthAgo={shiftDay(today, -30)}
         />
       </div>
       <section aria-labelledby="audits-title" className="space-y-3">

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { requirePageUser } from '@/server/auth/authorize';
 import { accuracyReport, type ReportGrouping } from '@/server/services/audits/accuracy-report';
-import { todayIso } from '../../../_components/format';
+import { shiftDay, siteDay } from '@/lib/time/site-clock';
+import { siteTimeZone } from '@/server/services/settings/get-settings';
 import { AccuracyChart } from './accuracy-chart';
 import { AccuracyTable } from './accuracy-table';
 
@@ -19,9 +20,8 @@ const querySchema = z.object({
 export default async function ReportsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   await requirePageUser('audits.run', '/quality/reports');
   const q = querySchema.parse(await searchParams);
-  const now = new Date();
-  const to = q.to ?? todayIso(now);
-  const from = q.from && q.from <= to ? q.from : todayIso(new Date(new Date(`${to}T00:00:00Z`).getTime() - 90 * 86_400_000));
+  const to = q.to ?? siteDay(await siteTimeZone());
+  const from = q.from && q.from <= to ? q.from : shiftDay(to, -90);
   const rows = await accuracyReport({ from, to, by: q.by });
   const csv = `/api/v1/reports/accuracy?${new URLSearchParams({ from, to, by: q.by, format: 'csv' })}`;
   return (

@@ -12,6 +12,7 @@ import { toFormikErrors } from '../../../_components/field-errors';
 import { FormField, FormMessage } from '../../../_components/form-field';
 import { SelectField } from '../../../_components/select-field';
 import { LiveVerdict } from './live-verdict';
+import { useSiteTime } from '../../../_components/site-time';
 import { evaluateBody, initialTestValues, recordBody, resize, type TestValues } from './record-test-values';
 import { TestWeightPicker } from './test-weight-picker';
 import { useLiveVerdict } from './use-live-verdict';
@@ -100,10 +101,11 @@ export function RecordTestForm({ scale, weights }: { scale: ScaleDto; weights: T
   const router = useRouter();
   const [message, setMessage] = useState<string | null>(null);
   const [outcome, setOutcome] = useState<string | null>(null);
+  const { today } = useSiteTime();
   const usable = weights.filter((w) => w.active);
   return (
     <Formik
-      initialValues={initialTestValues(scale)}
+      initialValues={initialTestValues(scale, today())}
       validationSchema={schema}
       onSubmit={async (values, helpers) => {
         setMessage(null);

@@ -1,6 +1,5 @@
 import { defaultTestLoads } from '@/lib/metrology/evaluate-calibration';
 import type { ScaleDto } from '@/server/schemas/scales';
-import { todayIso } from '../../../_components/format';
 
 // Form state in the API's own shape, so the server's field paths ("points.1.indication") land on inputs.
 export interface TestValues {
@@ -22,11 +21,11 @@ const blanks = (n: number) => Array.from({ length: n }, () => '');
 
 // Repeatability near half of Max with three weighings, eccentricity at about a third of Max on
 // four off-centre positions (common practice after OIML R 76-2's test procedures, from memory).
-export function initialTestValues(scale: ScaleDto): TestValues {
+export function initialTestValues(scale: ScaleDto, today: string): TestValues {
   const e = scale.verificationInterval;
   return {
     stage: 'in_service',
-    performedAt: todayIso(),
+    performedAt: today,
     points: defaultTestLoads(scale.accuracyClass, e, scale.capacity).map((load) => ({ load: String(load), indication: '', testWeightIds: [] })),
     withRepeatability: true,
     repeatability: { load: String(round(scale.capacity / 2, e)), indications: blanks(3) },

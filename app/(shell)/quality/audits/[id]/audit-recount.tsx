@@ -4,7 +4,7 @@ import { useRef, useState, type KeyboardEvent } from 'react';
 import * as yup from 'yup';
 import type { AuditDto, AuditItemDto } from '@/server/schemas/audits';
 import { apiFetch } from '../../../../_components/api-client';
-import { formatWhen } from '../../../../_components/format';
+import { useSiteTime } from '../../../../_components/site-time';
 import { AuditVerdict } from '../audit-verdict';
 import { ItemVerdict } from './item-verdict';
 
@@ -13,6 +13,7 @@ const handCount = yup.number().typeError('A whole number of pieces').integer('A 
 // One input per selected count. Enter saves the recount and moves to the next item, so a whole
 // audit can be keyed in without the mouse.
 export function AuditRecount({ initial, scaleNames, operatorNames }: { initial: AuditDto; scaleNames: Record<number, string>; operatorNames: Record<number, string> }) {
+  const { when } = useSiteTime();
   const [audit, setAudit] = useState(initial);
   const [drafts, setDrafts] = useState<Record<number, string>>(() => Object.fromEntries(initial.items.map((i) => [i.id, i.handCount === null ? '' : String(i.handCount)])));
   const [errors, setErrors] = useState<Record<number, string>>({});
@@ -87,7 +88,7 @@ export function AuditRecount({ initial, scaleNames, operatorNames }: { initial: 
                 <td className="px-3 py-2.5 num text-ink-faint">{index + 1}</td>
                 <td className="px-3 py-2.5">
                   <span className="block font-medium">{item.partNumber}</span>
-                  <span className="block whitespace-nowrap">{formatWhen(item.countedAt)}</span>
+                  <span className="block whitespace-nowrap">{when(item.countedAt)}</span>
                   <span className="block text-ink-faint">{scaleNames[item.scaleId] ?? `scale ${item.scaleId}`} · {operatorNames[item.operatorId] ?? 'unknown'}</span>
                 </td>
                 <td className="px-3 py-2.5 num text-right whitespace-nowrap">
