@@ -2,44 +2,50 @@ import type { ReactNode } from 'react';
 import { navFor } from '@/lib/navigation';
 import { ROLE_LABELS } from '@/lib/roles';
 import { requirePageUser } from '@/server/auth/authorize';
+import { siteTimeZone } from '@/server/services/settings/get-settings';
 import { Wordmark } from '../_components/mark';
+import { SiteTimeProvider } from '../_components/site-time';
 import { signOutAction } from './actions';
+import { NavDrawer } from './_components/nav-drawer';
 import { NavLinks } from './_components/nav-links';
 
+function WhoIsHere({ name, role, timeZone }: { name: string; role: string; timeZone: string }) {
+  return (
+    <div className="px-4 py-3 border-t border-ink-soft text-sm">
+      <p className="font-medium">{name}</p>
+      <p className="text-paper-line/80">{role}</p>
+      <p className="mt-1 text-paper-line/80" data-testid="site-time-zone">Times in {timeZone}</p>
+      <form action={signOutAction} className="mt-2">
+        <button type="submit" className="min-h-11 text-brass hover:underline">
+          Sign out
+        </button>
+      </form>
+    </div>
+  );
+}
+
+// At desk width a sidebar; below it (portrait tablets) a bar whose Menu folds the same links out.
 export default async function ShellLayout({ children }: { children: ReactNode }) {
   const user = await requirePageUser();
   const items = navFor(user.role);
+  const timeZone = await siteTimeZone();
+  const who = <WhoIsHere name={user.name} role={ROLE_LABELS[user.role]} timeZone={timeZone} />;
   return (
-    <div className="min-h-screen md:grid md:grid-cols-[15rem_1fr]">
-      <aside className="bg-ink text-paper md:min-h-screen md:sticky md:top-0 flex md:flex-col">
-        <div className="px-4 py-3 md:py-5 flex items-center justify-between md:block">
+    <div className="min-h-screen lg:grid lg:grid-cols-[15rem_1fr]">
+      <aside className="hidden lg:flex lg:flex-col lg:sticky lg:top-0 lg:h-screen lg:overflow-y-auto bg-ink text-paper">
+        <div className="px-4 py-5">
           <a href="/" className="text-paper" aria-label="Tallyforge home">
             <Wordmark />
           </a>
         </div>
-        <NavLinks items={items} />
-        <div className="hidden md:block mt-auto px-4 py-4 border-t border-ink-soft text-sm">
-          <p className="font-medium">{user.name}</p>
-          <p className="text-paper-line/80">{ROLE_LABELS[user.role]}</p>
-          <form action={signOutAction} className="mt-3">
-            <button type="submit" className="text-brass hover:underline">
-              Sign out
-            </button>
-          </form>
-        </div>
+        <NavLinks items={items} layout="rail" />
+        {who}
       </aside>
       <div className="min-w-0">
-        <div className="md:hidden flex items-center justify-between px-4 py-2 bg-paper-deep text-sm">
-          <span>
-            {user.name} · {ROLE_LABELS[user.role]}
-          </span>
-          <form action={signOutAction}>
-            <button type="submit" className="text-forge font-medium min-h-11 px-2">
-              Sign out
-            </button>
-          </form>
-        </div>
-        <main className="px-4 py-6 md:px-8 md:py-8 max-w-7xl">{children}</main>
+        <NavDrawer items={items}>{who}</NavDrawer>
+        <main className="px-4 py-6 lg:px-8 lg:py-8 max-w-7xl">
+          <SiteTimeProvider timeZone={timeZone}>{children}</SiteTimeProvider>
+        </main>
       </div>
     </div>
   );

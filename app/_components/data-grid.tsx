@@ -2,6 +2,8 @@
 
 import { AllCommunityModule, ModuleRegistry, themeQuartz, type ColDef, type GetRowIdParams } from 'ag-grid-community';
 import { AgGridReact } from 'ag-grid-react';
+import { useSyncExternalStore } from 'react';
+import { CardList } from './card-list';
 
 ModuleRegistry.registerModules([AllCommunityModule]);
 
@@ -36,7 +38,21 @@ interface DataGridProps<T> {
   emptyText?: string;
 }
 
+// Desk width is where the sidebar shows (Tailwind's lg); below it the rows are cards.
+const DESK = '(min-width: 1024px)';
+const onWidthChange = (notify: () => void) => {
+  const query = window.matchMedia(DESK);
+  query.addEventListener('change', notify);
+  return () => query.removeEventListener('change', notify);
+};
+
+function useDeskWidth(): boolean {
+  return useSyncExternalStore(onWidthChange, () => window.matchMedia(DESK).matches, () => true);
+}
+
 export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, label, onSelection, emptyText = 'Nothing to show here yet.' }: DataGridProps<T>) {
+  const desk = useDeskWidth();
+  if (!desk) return <CardList rows={rows} columns={columns} rowId={rowId} label={label} quickFilter={quickFilter} onSelection={onSelection} emptyText={emptyText} />;
   return (
     <div style={{ height }} aria-label={label} role="region">
       <AgGridReact<T>

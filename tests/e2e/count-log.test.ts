@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext } from 'playwright-core';
-import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
+import { followNav, gridRows, openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
 import { createPart, createScale } from '../helpers/db';
 import { signedIn } from '../helpers/http';
 
@@ -33,20 +33,20 @@ describe('count log (browser)', () => {
     for (const [context, size] of [[desk, '1280x800'], [tablet, '800x1280']] as const) {
       const page = await context.newPage();
       await signInThroughPage(page, 'quality');
-      await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Count log' }).click();
+      await followNav(page, 'Count log');
       await page.waitForURL('**/counts');
       const filters = page.getByRole('search', { name: 'Filter the count log' });
       await filters.getByLabel('Part number').fill(part.partNumber.toLowerCase());
       await filters.getByRole('button', { name: 'Show' }).click();
       await expect.poll(() => page.getByTestId('log-summary').textContent()).toBe('1–2 of 2 counts.');
-      const grid = page.getByRole('region', { name: 'Count log' });
-      await expect.poll(() => grid.getByRole('row').filter({ hasText: part.partNumber }).count()).toBe(2);
+      // Rows of the grid at desk width, cards on the tablet.
+      await expect.poll(() => gridRows(page, 'Count log', part.partNumber).count()).toBe(2);
       await screenshot(page, `count-log-${size}`);
 
       await filters.getByLabel('Only counts that were not exact').check();
       await filters.getByRole('button', { name: 'Show' }).click();
       await expect.poll(() => page.getByTestId('log-summary').textContent()).toBe('1–1 of 1 count.');
-      const row = grid.getByRole('row').filter({ hasText: part.partNumber });
+      const row = gridRows(page, 'Count log', part.partNumber);
       await expect.poll(() => row.textContent()).toContain('not exact');
       expect(await row.textContent()).toContain('400');
       expect(await page.getByRole('link', { name: 'Download CSV' }).getAttribute('href')).toBe(`/api/v1/counts/export?partNumber=${part.partNumber}&notExact=1`);

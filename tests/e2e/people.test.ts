@@ -44,7 +44,7 @@ describe('people (browser)', () => {
     await screenshot(tab, 'set-password-tablet');
     await tab.getByRole('button', { name: 'Save and sign in' }).click();
     await tab.waitForURL((url) => url.pathname === '/');
-    expect(await tab.getByText('Stockroom clerk').first().isVisible()).toBe(true);
+    expect(await tab.getByRole('main').getByText('Stockroom clerk').first().isVisible()).toBe(true);
     await screenshot(tab, 'today-clerk-tablet');
 
     // Switching someone off asks first, saying what it does; keeping it as it is changes nothing.

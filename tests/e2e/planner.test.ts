@@ -3,7 +3,7 @@ import bwipjs from 'bwip-js/node';
 import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Kit } from '../../models';
-import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
+import { gridRows, openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
 import { createPart, createScale, stockPart, testDb, unique } from '../helpers/db';
 import { signedIn } from '../helpers/http';
 
@@ -106,8 +106,9 @@ describe('planner (browser)', () => {
     await signInThroughPage(page, 'clerk');
     await page.goto(`/parts?q=${tag}`);
     await expect.poll(() => page.getByTestId('parts-notice').textContent()).toContain(`2 parts matching “${tag}”`);
-    expect(await page.getByRole('row', { name: new RegExp(`${tag}-NEW`) }).textContent()).toContain('assumed');
-    expect(await page.getByRole('row', { name: new RegExp(`${tag}-LEARNED`) }).textContent()).toContain('1.2 %');
+    // A card per part on the tablet, with the same columns as the desk's grid.
+    expect(await gridRows(page, 'Parts', `${tag}-NEW`).textContent()).toContain('assumed');
+    expect(await gridRows(page, 'Parts', `${tag}-LEARNED`).textContent()).toContain('1.2 %');
     expect(await page.getByRole('link', { name: 'Download CSV' }).getAttribute('href')).toBe(`/api/v1/parts/export?q=${tag}`);
     await screenshot(page, 'parts-tablet');
   });

@@ -43,3 +43,16 @@ export async function signInThroughPage(page: Page, role: Role): Promise<{ email
   await page.waitForURL((url) => url.pathname === '/');
   return { email: user.email, name: user.name };
 }
+
+// Follows a link of the main navigation, opening the folded menu first where the page is narrow.
+export async function followNav(page: Page, name: string): Promise<void> {
+  const menu = page.getByRole('button', { name: 'Menu' });
+  if (await menu.isVisible()) await menu.click();
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name }).click();
+}
+
+// A grid's rows at desk width, or the cards that stand for them below it.
+export function gridRows(page: Page, label: string, hasText: string) {
+  const region = page.getByRole('region', { name: label });
+  return region.locator('[role=row], li').filter({ hasText });
+}

@@ -4,7 +4,8 @@ import Link from 'next/link';
 import { usePathname } from 'next/navigation';
 import type { NavItem } from '@/lib/navigation';
 
-export function NavLinks({ items }: { items: NavItem[] }) {
+// `rail`: the desk sidebar, one column. `drawer`: the folded menu, groups side by side.
+export function NavLinks({ items, layout }: { items: NavItem[]; layout: 'rail' | 'drawer' }) {
   const pathname = usePathname();
   const groups: Array<[NavItem['group'], string]> = [
     ['work', 'Work'],
@@ -13,13 +14,13 @@ export function NavLinks({ items }: { items: NavItem[] }) {
     ['admin', 'Administration'],
   ];
   return (
-    <nav aria-label="Main" className="flex-1 overflow-x-auto md:overflow-visible flex md:block gap-1 px-2 md:px-3 py-2">
+    <nav aria-label="Main" className={layout === 'rail' ? 'flex-1 px-3 py-2' : 'grid grid-cols-2 gap-x-2 gap-y-3 px-3 py-3 sm:grid-cols-4'}>
       {groups.map(([group, title]) => {
         const entries = items.filter((i) => i.group === group);
         if (!entries.length) return null;
         return (
-          <div key={group} className="flex md:block gap-1 md:mb-4">
-            <p className="hidden md:block px-3 pb-1 text-xs uppercase tracking-wider text-paper-line/60">{title}</p>
+          <div key={group} className={layout === 'rail' ? 'mb-4' : ''}>
+            <p className="px-3 pb-1 text-xs uppercase tracking-wider text-paper-line/60">{title}</p>
             {entries.map((item) => {
               const active = isActive(item.href, pathname, items);
               return (

@@ -51,7 +51,7 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
       minWidth: 200,
       cellRenderer: (p: ICellRendererParams<UserDto>) =>
         p.data && p.data.id !== meId ? (
-          <select aria-label={`Role of ${p.data.name}`} className="field min-h-9 py-0" value={p.data.role} onChange={(e) => changeRole(p.data!, e.target.value as Role)}>
+          <select aria-label={`Role of ${p.data.name}`} className="field py-0" value={p.data.role} onChange={(e) => changeRole(p.data!, e.target.value as Role)}>
             {ROLES.map((r) => (
               <option key={r} value={r}>{ROLE_LABELS[r]}</option>
             ))}
