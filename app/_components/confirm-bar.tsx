@@ -9,6 +9,8 @@ export interface PendingConfirm {
   onConfirm(): void | Promise<void>;
   /** A positive action (accept, approve) is not shown as a danger. */
   tone?: 'danger' | 'primary';
+  /** A gentler way out offered first, e.g. "Stop, but keep the sample". */
+  alternative?: { label: string; onChoose(): void };
 }
 
 export function ConfirmBar({ pending, onDone, tone = 'danger' }: { pending: PendingConfirm | null; onDone(): void; tone?: 'danger' | 'primary' }) {
@@ -16,6 +18,18 @@ export function ConfirmBar({ pending, onDone, tone = 'danger' }: { pending: Pend
   return (
     <div role="alertdialog" aria-label="Please confirm" className="flex flex-wrap items-center gap-3 rounded-md border-2 border-caution bg-paper-card px-4 py-3">
       <p className="min-w-64 flex-1 font-medium">{pending.question}</p>
+      {pending.alternative ? (
+        <button
+          type="button"
+          className="btn-primary"
+          onClick={() => {
+            onDone();
+            pending.alternative!.onChoose();
+          }}
+        >
+          {pending.alternative.label}
+        </button>
+      ) : null}
       <button
         type="button"
         className={(pending.tone ?? tone) === 'danger' ? 'btn-danger' : 'btn-primary'}

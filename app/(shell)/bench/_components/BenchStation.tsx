@@ -33,14 +33,24 @@ interface Props {
 /** Container put on the practice pan when none is chosen (our demo tray). */
 const PRACTICE_TRAY_G = 150;
 
-/** Stopping throws the count in progress away: where there is something to lose, it asks first, saying what. */
-function StopCount({ work, onStop }: { work: BenchWork; onStop(): void }) {
+/**
+ * Stopping throws the count in progress away: where there is something to lose, it asks first,
+ * saying what, and offers to keep a part's sample for its next count.
+ */
+function StopCount({ work, onStop }: { work: BenchWork; onStop(o: { keep: boolean }): void }) {
   const [pending, setPending] = useState<PendingConfirm | null>(null);
   const atStake = work.step !== 'tare' && work.step !== 'captured';
-  const lost = work.sample ? `The sample of ${work.sample.quantity} pieces and whatever is counted on the pan` : 'The tare taken for it';
+  const lost = work.sample ? 'What is on the pan will not be recorded.' : 'The tare taken for it will not be recorded.';
+  const keepable = work.sample !== null && work.purpose !== 'bin' && work.step !== 'captured';
+  const ask = (): PendingConfirm => ({
+    question: `Stop this count? ${lost}`,
+    yes: keepable ? 'Stop and discard the sample' : 'Yes, stop and choose other work',
+    onConfirm: () => onStop({ keep: false }),
+    alternative: keepable ? { label: `Stop, keep the sample of ${work.sample!.quantity} pieces`, onChoose: () => onStop({ keep: true }) } : undefined,
+  });
   if (pending) return <ConfirmBar pending={pending} onDone={() => setPending(null)} />;
   return (
-    <button type="button" className="btn-quiet" onClick={() => (atStake ? setPending({ question: `Stop this count? ${lost} will not be recorded.`, yes: 'Yes, stop and choose other work', onConfirm: onStop }) : onStop())}>
+    <button type="button" className="btn-quiet" onClick={() => (atStake || keepable ? setPending(ask()) : onStop({ keep: false }))}>
       Stop this count and choose other work
     </button>
   );
@@ -49,10 +59,10 @@ function StopCount({ work, onStop }: { work: BenchWork; onStop(): void }) {
 // The bench's layout; what it shows and does comes from useBench.
 export function BenchStation({ scales, containers, stabilityWindowMs, defaultPieceSpread, initialBin, blindCycleCounts }: Props) {
   const {
-    work, part, scale, scaleId, setScaleId, setSource, typed, setTyped, kind,
+    work, part, scale, scaleId, moveToScale, scaleChoice, setSource, typed, setTyped, kind,
     frame, frameRef, trace, notice, codes, spreadNote, verdict, showing,
     actions, chooseWork, chooseContainer, containerChoice, chosenContainer, sampleQty, setSampleQty, growPlan,
-    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued, waiting, cancelWaiting, scales: scalesNow, advice,
+    busy, captureBlocked, result, stop, keptForWork, startFromKeptSample, queue, flushQueue, dropQueued, waiting, cancelWaiting, scales: scalesNow, advice,
   } = useBench({ scales, containers, stabilityWindowMs, defaultPieceSpread });
 
   return (
@@ -67,9 +77,10 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
           </p>
         ) : null}
       </header>
+      {/* Above both columns, so it stays pinned over the steps and the practice pan alike. */}
+      <CountReadout frame={frame} division={scale?.division ?? 1} showing={showing} targetQuantity={work?.targetQuantity ?? null} verdict={verdict} />
       <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="min-w-0 space-y-4">
-          <CountReadout frame={frame} division={scale?.division ?? 1} showing={showing} targetQuantity={work?.targetQuantity ?? null} verdict={verdict} />
           {waiting ? (
             <p role="status" data-testid="waiting" className="flex flex-wrap items-center justify-between gap-2 rounded-md bg-forge-light px-4 py-3 text-lg text-forge-dark">
               <span>Waiting for a steady reading to {STEADY_ACTION_WORDS[waiting]}… keep hands off the pan.</span>
@@ -99,6 +110,8 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
               growPlan={growPlan}
               busy={busy}
               captureBlocked={captureBlocked}
+              kept={keptForWork}
+              onUseKept={startFromKeptSample}
             />
           ) : null}
           {result ? <CaptureResult answer={result} /> : null}
@@ -108,7 +121,7 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
         <aside className="min-w-0 space-y-4">
           <QueuePanel items={queue} onSend={() => void flushQueue()} onDrop={dropQueued} />
           {!work ? <WorkChooser onChoose={chooseWork} disabled={!scale} initialBin={initialBin} blindCycleCounts={blindCycleCounts} /> : null}
-          <ScalePicker scales={scalesNow} scaleId={scaleId} locked={work !== null} onPick={setScaleId} />
+          <ScalePicker scales={scalesNow} scaleId={scaleId} choice={scaleChoice} sampleScaleId={work?.bulkScaleId != null ? work.scaleId : null} onPick={moveToScale} />
           {scale ? (
             <label className="flex min-h-11 items-center gap-3">
               <input type="checkbox" className="h-5 w-5" checked={typed || kind === 'keyed'} disabled={kind === 'keyed'} onChange={(e) => setTyped(e.target.checked)} />

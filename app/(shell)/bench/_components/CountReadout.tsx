@@ -19,12 +19,13 @@ const VERDICT_TEXT: Record<ToleranceVerdict, { text: string; cls: string }> = {
 };
 
 // The number the operator reads from across the bench: very large mono digits, the unit in words.
+// It stays pinned to the top of the window while the steps or the practice pan scroll beneath it.
 export function CountReadout({ frame, division, showing, targetQuantity, verdict }: Props) {
   const est = frame?.estimate ?? null;
   const u = est ? est.wholePieceRange : 0;
   const weight = frame ? (showing === 'gross' ? frame.gross : frame.net) : null;
   return (
-    <section aria-label="Live reading" className="rounded-lg bg-ink p-5 text-paper">
+    <section aria-label="Live reading" className="sticky top-0 z-20 rounded-lg bg-ink p-5 text-paper shadow-lg">
       <div className="flex items-center justify-between text-sm">
         <span data-testid="stability" className={`rounded-full px-3 py-1 font-bold ${frame?.stable ? 'bg-ok text-white' : 'bg-ink-soft text-paper'}`}>
           {frame ? (frame.stable ? 'Settled' : 'Settling…') : 'No readings'}

@@ -3,7 +3,8 @@
 import type { ContainerDto } from '@/server/schemas/containers';
 import type { GrowPlan } from '@/lib/weighing/grow-sample';
 import { allows, type BenchAction } from '../_lib/bench-machine';
-import type { BenchWork } from '../_lib/bench-work';
+import type { BenchWork, KeptSample } from '../_lib/bench-work';
+import { useSiteTime } from '../../../_components/site-time';
 import { SHORTCUTS } from '../_lib/shortcuts';
 import { KeyButton } from './KeyButton';
 
@@ -30,6 +31,9 @@ interface Props {
   growPlan: GrowPlan | null;
   busy: boolean;
   captureBlocked: string | null;
+  /** A sample of this part kept when an earlier count was stopped. */
+  kept: KeptSample | null;
+  onUseKept(): void;
 }
 
 const STEP_NAMES: Array<[BenchWork['step'], string]> = [
@@ -57,6 +61,7 @@ function ContainerSelect({ containers, value, onChange, label }: { containers: C
 // One step at a time, with the next action as the big button and its key shown on it.
 export function StepPanel(p: Props) {
   const { work, actions } = p;
+  const { clock } = useSiteTime();
   // The buttons read the same list as the keys: what the machine allows at this step.
   const off = (action: BenchAction, busy = false): boolean => !allows(work, action) || busy;
   const bin = work.purpose === 'bin';
@@ -75,11 +80,21 @@ export function StepPanel(p: Props) {
       {work.step === 'tare' ? (
         <div className="space-y-3">
           <h2 id="step-title" className="text-xl font-bold">{bin ? 'Empty the pan and zero it' : 'Put the empty container on the pan'}</h2>
+          {work.bulkScaleId !== null && work.sample ? (
+            <p className="text-lg" data-testid="moved-note">On this scale now: tare it as above, then put the sample of {work.sample.quantity} pieces and the rest on. The sample’s piece weight is kept.</p>
+          ) : null}
           {!bin ? <ContainerSelect containers={p.containers} value={p.containerChoice} onChange={p.onContainerChoice} label="Container (for its preset tare)" /> : null}
           <div className="flex flex-wrap gap-2">
             <KeyButton shortcut={SHORTCUTS.tare} onClick={actions.tare} disabled={off('tare', p.busy)}>{bin ? 'Zero the empty pan' : 'Tare now'}</KeyButton>
             {!bin ? <KeyButton tone="quiet" shortcut={SHORTCUTS.presetTare} onClick={actions.presetTare} disabled={off('presetTare', p.containerChoice === null)}>Use preset tare</KeyButton> : null}
           </div>
+          {p.kept ? (
+            <div className="flex flex-wrap items-center gap-3 rounded-md bg-brass-light px-4 py-3" data-testid="kept-sample">
+              <p className="min-w-64 flex-1">A sample of {p.kept.sample.quantity} pieces of this part was kept at {clock(p.kept.keptAt)}. Start from it instead of weighing a new one (its pieces stay off the pan).</p>
+              <button type="button" className="btn-quiet" onClick={p.onUseKept}>Use the kept sample</button>
+            </div>
+          ) : null}
+          {work.sampleApart && work.sample ? <p data-testid="kept-in-use">Counting from the kept sample of {work.sample.quantity} pieces: tare, then put on only the pieces to count.</p> : null}
         </div>
       ) : null}
       {work.step === 'sample' ? (

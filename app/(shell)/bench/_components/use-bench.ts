@@ -15,8 +15,8 @@ import type { CountEventDto } from '@/server/schemas/counts';
 import type { PartDto } from '@/server/schemas/parts';
 import type { ScaleDto } from '@/server/schemas/scales';
 import { apiFetch } from '@/app/_components/api-client';
-import { allows, captureDone, move, type BenchEvent } from '../_lib/bench-machine';
-import { chooseBinContainer, parseSavedWork, pieceIncrements, startWork, type BenchWork } from '../_lib/bench-work';
+import { allows, canMoveScale, canUseKept, captureDone, move, moveScale, takeKept, type BenchEvent } from '../_lib/bench-machine';
+import { chooseBinContainer, keepSample, parseKeptSample, parseSavedWork, pieceIncrements, readingScaleId, sampleOnPan, startWork, type BenchWork, type KeptSample } from '../_lib/bench-work';
 import { createCaptureQueue, type QueuedCapture, type SendOutcome } from '../_lib/capture-queue';
 import { buildCaptureBody } from '../_lib/capture-request';
 import type { PipelineWork } from '../_lib/reading-pipeline';
@@ -40,6 +40,8 @@ const WORK_KEY = 'tallyforge.bench.work';
 /** How often the bench asks for its scale's status (a lock-out shows within this). */
 const SCALE_STATUS_POLL_MS = 3000;
 const SCALE_KEY = 'tallyforge.bench.scale';
+/** One sample kept when a count was stopped, for the next count of its part on this tablet. */
+const KEPT_KEY = 'tallyforge.bench.kept';
 
 export type Notice = { tone: 'fault' | 'ok' | 'info'; text: string; code?: WarningCode } | null;
 
@@ -85,6 +87,7 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   const [restored, setRestored] = useState(false);
   /** A step pressed while the reading still moved: it acts on the first steady reading. */
   const [waiting, setWaiting] = useState<SteadyAction | null>(null);
+  const [kept, setKept] = useState<KeptSample | null>(null);
   const queueStore = useMemo(() => (typeof window === 'undefined' ? null : createCaptureQueue(browserStore)), []);
 
   // The chosen scale's status as the server has it now: a lock-out (or its lifting) made elsewhere
@@ -121,7 +124,7 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   const pipelineWork: PipelineWork = {
     tare: work?.tare ?? work?.panZero ?? 0,
     sample: work && work.step !== 'tare' && work.step !== 'sample' ? work.sample : null,
-    sampleOnPan: work ? sampleStaysOnPan(work.purpose) : true,
+    sampleOnPan: work ? sampleOnPan(work) : true,
     targetQuantity: work?.targetQuantity ?? null,
     spread,
     containerWeight: chosenContainer?.tare ?? null,
@@ -135,13 +138,14 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     const savedScale = Number(browserStore.getItem(SCALE_KEY));
     if (saved && scales.some((s) => s.id === saved.scaleId)) {
       setWork(saved);
-      setScaleId(saved.scaleId);
+      setScaleId(readingScaleId(saved));
       setSampleQty(saved.sample?.quantity ?? 10);
       void apiFetch<{ part: PartDto }>(`/api/v1/parts/${saved.partId}`).then((r) => r.ok && setPart(r.data.part));
     } else if (scales.some((s) => s.id === savedScale)) {
       setScaleId(savedScale);
     }
     setQueue(queueStore?.list() ?? []);
+    setKept(parseKeptSample(browserStore.getItem(KEPT_KEY)));
     setRestored(true);
   }, []); // eslint-disable-line react-hooks/exhaustive-deps
 
@@ -359,7 +363,7 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     : null;
   const spreadNote = useMemo(
     () => (work && part && noise
-      ? describeSpread({ belief: spreadOrAssumed, noise, averagePieceWeight: work.sample ? work.sample.netWeight / work.sample.quantity : part.averagePieceWeight, sampleQuantity: work.sample?.quantity ?? sampleQty, sampleOnPan: sampleStaysOnPan(work.purpose) })
+      ? describeSpread({ belief: spreadOrAssumed, noise, averagePieceWeight: work.sample ? work.sample.netWeight / work.sample.quantity : part.averagePieceWeight, sampleQuantity: work.sample?.quantity ?? sampleQty, sampleOnPan: sampleOnPan(work) })
       : null),
     [work, part, noise, spreadOrAssumed, sampleQty],
   );
@@ -367,7 +371,7 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   const advice = useMemo(() => {
     const apwKnown = work?.sample ? work.sample.netWeight / work.sample.quantity : part?.averagePieceWeight ?? null;
     if (!work || !scale || !apwKnown || (work.step !== 'tare' && work.step !== 'sample')) return null;
-    return adviseScales(scalesNow.map(advisedScale), scale.id, { averagePieceWeight: apwKnown, spread: spreadOrAssumed }, work.targetQuantity, sampleStaysOnPan(work.purpose), chosenContainer?.tare ?? 0);
+    return adviseScales(scalesNow.map(advisedScale), scale.id, { averagePieceWeight: apwKnown, spread: spreadOrAssumed }, work.targetQuantity, sampleOnPan(work), chosenContainer?.tare ?? 0);
   }, [work, part, scale, scalesNow, spreadOrAssumed, chosenContainer]);
   const showing: 'gross' | 'net' | 'count' = !work || work.step === 'tare' ? 'gross' : work.step === 'sample' ? 'net' : 'count';
   const kind = scale?.connection.kind;
@@ -381,14 +385,45 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   useEffect(() => setWaiting(null), [work?.step, work?.partId]);
   const cancelWaiting = () => setWaiting(null);
 
+  /**
+   * Another scale of the bench for the rest of the count (a bigger one for the bulk): the sample
+   * learned so far goes with it. The live count reads the new scale's noise for both weighings,
+   * which errs on the cautious side; the server counts the capture with each scale's own.
+   */
+  const moveToScale = (id: number) => {
+    if (!work) return setScaleId(id);
+    const m = moveScale(work, id);
+    if (!m.ok) return setNotice({ tone: 'fault', text: m.reason });
+    const to = scalesNow.find((s) => s.id === id);
+    setWork(m.work);
+    setScaleId(id);
+    setResult(null);
+    setNotice({ tone: 'info', text: `The count moves to ${to?.name ?? 'the other scale'} and keeps its sample of ${work.sample!.quantity} pieces. Tare there first, then put the sample and the rest on.` });
+  };
+  const scaleChoice: 'free' | 'move' | 'fixed' = !work ? 'free' : canMoveScale(work) ? 'move' : 'fixed';
+
   const chooseContainer = (id: number | null) => {
     if (work?.purpose === 'bin' && work.step === 'count') setWork(chooseBinContainer(work, id, containers.find((c) => c.id === id)?.tare ?? 0));
     else setContainerChoice(id);
   };
-  const stop = () => {
+  /** Stop the count; with `keep`, its sample stays on this tablet for the part's next count. */
+  const stop = ({ keep }: { keep: boolean } = { keep: false }) => {
+    const saved = keep && work ? keepSample(work, new Date()) : null;
+    if (saved) {
+      browserStore.setItem(KEPT_KEY, JSON.stringify(saved));
+      setKept(saved);
+    }
     setWork(null);
     setResult(null);
-    setNotice(null);
+    setNotice(saved ? { tone: 'ok', text: `The sample of ${saved.sample.quantity} pieces of ${work!.partNumber} is kept: the next count of it can start from it.` } : null);
+  };
+  const keptForWork = canUseKept(work, kept) ? kept : null;
+  const startFromKeptSample = () => {
+    if (!work || scaleId === null) return;
+    const m = takeKept(work, kept, scaleId);
+    if (!m.ok) return setNotice({ tone: 'fault', text: m.reason });
+    setWork(m.work);
+    setNotice({ tone: 'info', text: `Counting from the kept sample of ${m.work.sample!.quantity} pieces. Tare the container, then put on the pieces to count (the sample’s pieces are not part of this count).` });
   };
   const dropQueued = (key: string) => {
     queueStore?.remove(key);
@@ -396,9 +431,9 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   };
 
   return {
-    work, part, scale, scaleId, setScaleId, source, setSource, typed, setTyped, kind,
+    work, part, scale, scaleId, moveToScale, scaleChoice, source, setSource, typed, setTyped, kind,
     frame, frameRef, trace, notice, codes, spreadNote, verdict, showing,
     actions, chooseWork, chooseContainer, containerChoice, chosenContainer, sampleQty, setSampleQty, growPlan,
-    busy, captureBlocked, result, stop, queue, flushQueue, dropQueued, waiting, cancelWaiting, scales: scalesNow, advice,
+    busy, captureBlocked, result, stop, keptForWork, startFromKeptSample, queue, flushQueue, dropQueued, waiting, cancelWaiting, scales: scalesNow, advice,
   };
 }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { allowedActions, captureDone, move, type BenchEvent } from './bench-machine';
-import { startWork, type BenchWork } from './bench-work';
+import { allowedActions, canMoveScale, canUseKept, captureDone, move, moveScale, takeKept, type BenchEvent } from './bench-machine';
+import { buildCaptureBody } from './capture-request';
+import { keepSample, parseKeptSample, parseSavedWork, startWork, type BenchWork } from './bench-work';
 
 const part = { partId: 7, partNumber: 'SC-4', label: 'SC-4 screw', scaleId: 3 };
 const fresh = (purpose: BenchWork['purpose'] = 'part') => startWork({ ...part, purpose });
@@ -75,5 +76,55 @@ describe('the bench state machine', () => {
     const done = captureDone(go(sampled(), { action: 'count' }, { action: 'capture', makeKey: () => 'k' }));
     const next = go({ ...done, targetQuantity: 40 }, { action: 'next' });
     expect(next).toMatchObject({ step: 'tare', captureKey: null, containerId: null, targetQuantity: 40, partId: 7 });
+  });
+
+  it('moves a count to another scale once the sample is weighed, keeping the sample: tare there, then count', () => {
+    expect(canMoveScale(tared())).toBe(false);
+    expect(moveScale(tared(), 9)).toEqual({ ok: false, reason: expect.stringMatching(/sample first/) });
+    const moved = moveScale(sampled(), 9);
+    if (!moved.ok) throw new Error(moved.reason);
+    expect(moved.work).toMatchObject({ step: 'tare', scaleId: 3, bulkScaleId: 9, sample: { quantity: 10, netWeight: 25 }, tare: null });
+    expect(moveScale(moved.work, 9).ok).toBe(false);
+    const counting = go(moved.work, { action: 'tare', stableGross: 410, containerId: null });
+    expect(counting).toMatchObject({ step: 'count', tare: 410, sample: { quantity: 10 } });
+    // The capture names both scales: the sample's and the bulk's.
+    // Two scales weigh independently: the server counts the bulk with the sample taken as apart.
+    expect(buildCaptureBody(counting, 660)).toMatchObject({ scaleId: 3, bulkScaleId: 9, tare: 410, gross: 660, sample: { quantity: 10, netWeight: 25 }, sampleOnPan: false });
+    // Moving back to the sample's own scale is no longer a two-scale count.
+    const back = moveScale(counting, 3);
+    expect(back.ok && back.work.bulkScaleId).toBe(null);
+  });
+
+  it('moves a bin count too: the new scale zeroes empty and the bin is counted on it', () => {
+    const binSampled = go(fresh('bin'), { action: 'tare', stableGross: 0, containerId: null }, { action: 'sample', quantity: 20, stableGross: 10 });
+    const moved = moveScale(binSampled, 9);
+    if (!moved.ok) throw new Error(moved.reason);
+    expect(go(moved.work, { action: 'tare', stableGross: 0.4, containerId: null })).toMatchObject({ step: 'count', panZero: 0.4, tare: 0.4, bulkScaleId: 9 });
+  });
+
+  it('keeps a stopped count’s sample for the part’s next count, which then counts only what goes on the pan', () => {
+    const kept = keepSample(sampled(), new Date('2026-12-03T10:00:00Z'));
+    expect(kept).toEqual({ partId: 7, scaleId: 3, sample: { quantity: 10, netWeight: 25 }, keptAt: '2026-12-03T10:00:00.000Z' });
+    expect(keepSample(tared(), new Date())).toBeNull();
+    expect(parseKeptSample(JSON.stringify(kept))).toEqual(kept);
+    expect(parseKeptSample('{"partId":7}')).toBeNull();
+    expect(canUseKept(fresh(), kept)).toBe(true);
+    expect(canUseKept(startWork({ ...part, partId: 8, purpose: 'part' }), kept)).toBe(false);
+    expect(canUseKept(tared(), kept)).toBe(false);
+    const started = takeKept(fresh(), kept, 3);
+    if (!started.ok) throw new Error(started.reason);
+    const counting = go(started.work, { action: 'tare', stableGross: 150, containerId: null });
+    expect(counting).toMatchObject({ step: 'count', sampleApart: true, bulkScaleId: null });
+    // The kept pieces are off the pan: the server counts the net alone.
+    expect(buildCaptureBody(counting, 400)).toMatchObject({ sampleOnPan: false, sample: { quantity: 10, netWeight: 25 }, tare: 150 });
+    // Kept on scale 3, counted on scale 9: a two-scale count.
+    const elsewhere = takeKept(fresh(), kept, 9);
+    expect(elsewhere.ok && elsewhere.work).toMatchObject({ scaleId: 3, bulkScaleId: 9 });
+    expect(takeKept(fresh(), null, 3).ok).toBe(false);
+  });
+
+  it('resumes work saved before counts could move scales or keep samples', () => {
+    const { bulkScaleId: _b, sampleApart: _s, ...older } = sampled();
+    expect(parseSavedWork(JSON.stringify(older))).toMatchObject({ step: 'grow', bulkScaleId: null, sampleApart: false });
   });
 });

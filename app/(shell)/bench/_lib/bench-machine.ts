@@ -5,8 +5,8 @@
  * request, the offline queue, the trace) belong to the hook that drives it.
  */
 import {
-  addPieceReading, applyTare, finishPieceSample, goToCount, growSample, markCaptured, nextCount, takeSample, withCaptureKey,
-  type BenchSample, type BenchStep, type BenchWork,
+  addPieceReading, applyTare, finishPieceSample, goToCount, growSample, markCaptured, moveToScale, nextCount, readingScaleId, startFromKept, takeSample, withCaptureKey,
+  type BenchSample, type BenchStep, type BenchWork, type KeptSample,
 } from './bench-work';
 
 export type BenchAction = 'tare' | 'presetTare' | 'sample' | 'piece' | 'finishPieces' | 'grow' | 'count' | 'capture' | 'next';
@@ -85,6 +85,27 @@ export function move(work: BenchWork, event: BenchEvent): Move {
     case 'next':
       return to(nextCount(work));
   }
+}
+
+/** Once the sample is learned, the count may move to another scale of the bench and keep it. */
+export function canMoveScale(work: BenchWork | null): boolean {
+  return work !== null && work.sample !== null && (work.step === 'grow' || work.step === 'count' || (work.step === 'tare' && work.bulkScaleId !== null));
+}
+
+export function moveScale(work: BenchWork, scaleId: number): Move {
+  if (!canMoveScale(work)) return refuse(work.sample ? 'The scale can change once the sample is weighed, until the count is captured.' : 'Weigh the sample first: the scale can change once its piece weight is known.');
+  if (scaleId === readingScaleId(work)) return refuse('The count is on that scale already.');
+  return to(moveToScale(work, scaleId));
+}
+
+/** A kept sample serves a new count of the same part, before anything is weighed for it. */
+export function canUseKept(work: BenchWork | null, kept: KeptSample | null): kept is KeptSample {
+  return work !== null && kept !== null && kept.partId === work.partId && work.purpose !== 'bin' && work.step === 'tare' && work.sample === null;
+}
+
+export function takeKept(work: BenchWork, kept: KeptSample | null, onScaleId: number): Move {
+  if (!canUseKept(work, kept)) return refuse('There is no kept sample of this part to use now.');
+  return to(startFromKept(work, kept, onScaleId));
 }
 
 /** The server recorded the capture, or it waits in the offline queue: the count is done either way. */

@@ -2,7 +2,7 @@
  * The count in progress as plain data, and the steps that move it on. Everything needed to
  * resume after a reload lives here, so it is saved as it is after each change.
  */
-import type { ToleranceBand, WorkPurpose, WorkTarget } from './work-item';
+import { sampleStaysOnPan, type ToleranceBand, type WorkPurpose, type WorkTarget } from './work-item';
 
 export type BenchStep = 'tare' | 'sample' | 'grow' | 'count' | 'captured';
 
@@ -17,7 +17,10 @@ export interface BenchWork extends WorkTarget {
   partId: number;
   partNumber: string;
   label: string;
+  /** The scale the sample was weighed on. */
   scaleId: number;
+  /** The scale the count is read on, when the work moved on from the sample's scale (a bigger one). */
+  bulkScaleId: number | null;
   step: BenchStep;
   /** Tare taken off the gross for the count, grams. */
   tare: number | null;
@@ -25,6 +28,8 @@ export interface BenchWork extends WorkTarget {
   /** Bin counts: the empty-pan reading the sample was weighed against. */
   panZero: number | null;
   sample: BenchSample | null;
+  /** The sample was kept from an earlier count and is not on the pan: it is not part of this count. */
+  sampleApart: boolean;
   /** Stable readings while building the sample piece by piece (first: the tared pan). */
   pieceReadings: number[];
   targetQuantity: number | null;
@@ -41,11 +46,13 @@ export function startWork(
     orderLineId: input.orderLineId ?? null,
     binId: input.binId ?? null,
     binVersion: input.binVersion ?? null,
+    bulkScaleId: null,
     step: 'tare',
     tare: null,
     containerId: null,
     panZero: null,
     sample: null,
+    sampleApart: false,
     pieceReadings: [],
     targetQuantity: input.targetQuantity ?? null,
     tolerance: input.tolerance ?? null,
@@ -53,8 +60,14 @@ export function startWork(
   };
 }
 
-/** Part counts: the container's tare (taken now or preset). Bin counts: the empty pan's zero. */
+/**
+ * Part counts: the container's tare (taken now or preset). Bin counts: the empty pan's zero.
+ * After a move to another scale the sample is already known, so the count follows the tare.
+ */
 export function applyTare(work: BenchWork, tare: number, containerId: number | null): BenchWork {
+  if (work.sample && (work.bulkScaleId !== null || work.sampleApart)) {
+    return work.purpose === 'bin' ? { ...work, step: 'count', panZero: tare, tare, containerId: null } : { ...work, step: 'count', tare, containerId };
+  }
   if (work.purpose === 'bin') return { ...work, step: 'sample', panZero: tare, tare: null, containerId: null, pieceReadings: [tare] };
   return { ...work, step: 'sample', tare, containerId, pieceReadings: [tare] };
 }
@@ -96,6 +109,50 @@ export function goToCount(work: BenchWork): BenchWork {
   return { ...work, step: 'count' };
 }
 
+/**
+ * The count moves to another scale of the bench (a bigger one for the bulk), keeping the sample
+ * learned on the first: the new scale is tared, then the count is read on it.
+ */
+export function moveToScale(work: BenchWork, scaleId: number): BenchWork {
+  return { ...work, bulkScaleId: scaleId === work.scaleId ? null : scaleId, step: 'tare', tare: null, containerId: null, pieceReadings: [], captureKey: null };
+}
+
+/** A sample kept on this tablet when a count was stopped, for the next count of the part. */
+export interface KeptSample {
+  partId: number;
+  scaleId: number;
+  sample: BenchSample;
+  keptAt: string;
+}
+
+export function keepSample(work: BenchWork, at: Date): KeptSample | null {
+  return work.sample && work.purpose !== 'bin' ? { partId: work.partId, scaleId: work.scaleId, sample: work.sample, keptAt: at.toISOString() } : null;
+}
+
+/**
+ * A new count of the part starts from a kept sample: its pieces are off the pan, so the count is
+ * of what goes on now, weighed apart from the sample (on the sample's scale or another).
+ */
+export function startFromKept(work: BenchWork, kept: KeptSample, onScaleId: number): BenchWork {
+  return { ...work, sample: kept.sample, sampleApart: true, scaleId: kept.scaleId, bulkScaleId: onScaleId === kept.scaleId ? null : onScaleId };
+}
+
+/**
+ * Whether the count is of the sample weighed again with the rest, on the same scale. A kept sample
+ * is off the pan. On a second scale the sample's pieces go into the bulk, but the two weighings are
+ * independent, so the count is made as if the sample were apart: that leaves out the sample pieces'
+ * share in both weighings, which would make the count surer, so it errs on the cautious side
+ * (var(N̂)/N² ≈ c²(1/n + 1/N) taken instead of c²(1/n − 1/N); docs/counting-model.md).
+ */
+export function sampleOnPan(work: BenchWork): boolean {
+  return !work.sampleApart && work.bulkScaleId === null && sampleStaysOnPan(work.purpose);
+}
+
+/** The scale the pan readings come from now. */
+export function readingScaleId(work: BenchWork): number {
+  return work.bulkScaleId ?? work.scaleId;
+}
+
 /** Bin counts: the bin goes on in its container; its preset tare comes off the gross. */
 export function chooseBinContainer(work: BenchWork, containerId: number | null, containerTare: number): BenchWork {
   return { ...work, containerId, tare: (work.panZero ?? 0) + containerTare };
@@ -109,9 +166,9 @@ export function markCaptured(work: BenchWork): BenchWork {
   return { ...work, step: 'captured' };
 }
 
-/** The next count of the same part on the same scale: keep the sample, new container and key. */
+/** The next count of the same part, on the scale in use now: a new tare, sample and key. */
 export function nextCount(work: BenchWork): BenchWork {
-  return { ...startWork(work), targetQuantity: work.targetQuantity, tolerance: work.tolerance };
+  return { ...startWork({ ...work, scaleId: readingScaleId(work) }), targetQuantity: work.targetQuantity, tolerance: work.tolerance };
 }
 
 /** Net weight being counted: on the pan it includes the sample. */
@@ -124,6 +181,16 @@ const PURPOSES: readonly WorkPurpose[] = ['part', 'bin', 'kit_line'];
 const num = (x: unknown): x is number => typeof x === 'number' && Number.isFinite(x);
 const numOrNull = (x: unknown): boolean => x === null || num(x);
 
+/** Saved JSON → kept sample, or null when it is not one. */
+export function parseKeptSample(text: string | null): KeptSample | null {
+  try {
+    const k = JSON.parse(text ?? 'null') as Partial<KeptSample> | null;
+    return k && num(k.partId) && num(k.scaleId) && typeof k.keptAt === 'string' && num(k.sample?.quantity) && num(k.sample?.netWeight) && k.sample.quantity >= 1 && k.sample.netWeight > 0 ? (k as KeptSample) : null;
+  } catch {
+    return null;
+  }
+}
+
 /** Saved JSON → work, or null when it is not a count we could resume. */
 export function parseSavedWork(text: string | null): BenchWork | null {
   if (!text) return null;
@@ -134,13 +201,15 @@ export function parseSavedWork(text: string | null): BenchWork | null {
     return null;
   }
   if (!w || typeof w !== 'object') return null;
+  // Work saved before counts could move between scales, or start from a kept sample, has neither.
+  w = { bulkScaleId: null, sampleApart: false, ...w };
   const ok =
     PURPOSES.includes(w.purpose as WorkPurpose) &&
     STEPS.includes(w.step as BenchStep) &&
     num(w.partId) && num(w.scaleId) &&
     typeof w.partNumber === 'string' && typeof w.label === 'string' &&
     numOrNull(w.tare) && numOrNull(w.panZero) && numOrNull(w.containerId) && numOrNull(w.targetQuantity) &&
-    numOrNull(w.orderLineId) && numOrNull(w.binId) && numOrNull(w.binVersion) &&
+    numOrNull(w.orderLineId) && numOrNull(w.binId) && numOrNull(w.binVersion) && numOrNull(w.bulkScaleId) && typeof w.sampleApart === 'boolean' &&
     (w.sample === null || (num(w.sample?.quantity) && num(w.sample?.netWeight))) &&
     Array.isArray(w.pieceReadings) && w.pieceReadings.every(num) &&
     (w.captureKey === null || typeof w.captureKey === 'string') &&

@@ -1,11 +1,11 @@
 /** The body of POST /api/v1/counts for the work on the pan: weights only, the server counts. */
-import type { BenchWork } from './bench-work';
-import { sampleStaysOnPan } from './work-item';
+import { sampleOnPan, type BenchWork } from './bench-work';
 
 export interface CaptureBody {
   purpose: BenchWork['purpose'];
   partId: number;
   scaleId: number;
+  bulkScaleId?: number;
   containerId?: number;
   unit: 'g';
   gross: number;
@@ -32,9 +32,11 @@ export function buildCaptureBody(work: BenchWork, stableMean: number): CaptureBo
     gross: g6(stableMean),
     tare: g6(work.tare ?? work.panZero ?? 0),
     sample: { quantity: work.sample.quantity, netWeight: g6(work.sample.netWeight) },
-    sampleOnPan: sampleStaysOnPan(work.purpose),
+    sampleOnPan: sampleOnPan(work),
     stable: true,
   };
+  // Sample on one scale, bulk on another: the server counts each weighing with its own scale's noise.
+  if (work.bulkScaleId != null) body.bulkScaleId = work.bulkScaleId;
   if (work.containerId != null) body.containerId = work.containerId;
   if (work.targetQuantity != null) body.targetQuantity = work.targetQuantity;
   if (work.orderLineId != null) body.orderLineId = work.orderLineId;
