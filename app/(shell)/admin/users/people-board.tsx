@@ -28,6 +28,11 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
     if (res.ok) {
       replace(res.data.user);
       setNotice(`${res.data.user.name}: saved.`);
+    } else if (res.code === 'stale_version') {
+      // Changed meanwhile (an invitation accepted, another admin): show it as it is now, change nothing.
+      const fresh = await apiFetch<{ users: UserDto[] }>('/api/v1/users');
+      if (fresh.ok) setUsers(fresh.data.users);
+      setNotice(`${user.name} was changed meanwhile, so nothing was saved. The list now shows them as they are; make the change again if it still applies.`);
     } else setNotice(res.message);
   }
 
