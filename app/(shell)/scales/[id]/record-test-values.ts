@@ -1,4 +1,5 @@
 import { defaultTestLoads } from '@/lib/metrology/evaluate-calibration';
+import { formatWeight } from '@/lib/weighing/display-decimals';
 import type { ScaleDto } from '@/server/schemas/scales';
 
 // Form state in the API's own shape, so the server's field paths ("points.1.indication") land on inputs.
@@ -16,7 +17,8 @@ export interface TestValues {
   notes: string;
 }
 
-const round = (x: number, e: number) => Math.round(x / e) * e;
+// A load on the scale's e grid, written with e's decimals (not 206.67000000000002).
+const onGrid = (x: number, e: number) => formatWeight(Math.round(x / e) * e, e);
 const blanks = (n: number) => Array.from({ length: n }, () => '');
 
 // Repeatability near half of Max with three weighings, eccentricity at about a third of Max on
@@ -26,11 +28,11 @@ export function initialTestValues(scale: ScaleDto, today: string): TestValues {
   return {
     stage: 'in_service',
     performedAt: today,
-    points: defaultTestLoads(scale.accuracyClass, e, scale.capacity).map((load) => ({ load: String(load), indication: '', testWeightIds: [] })),
+    points: defaultTestLoads(scale.accuracyClass, e, scale.capacity).map((load) => ({ load: onGrid(load, e), indication: '', testWeightIds: [] })),
     withRepeatability: true,
-    repeatability: { load: String(round(scale.capacity / 2, e)), indications: blanks(3) },
+    repeatability: { load: onGrid(scale.capacity / 2, e), indications: blanks(3) },
     withEccentricity: true,
-    eccentricity: { load: String(round(scale.capacity / 3, e)), indications: blanks(4) },
+    eccentricity: { load: onGrid(scale.capacity / 3, e), indications: blanks(4) },
     zeroOk: true,
     tareOk: true,
     intervalDays: '180',
