@@ -4,7 +4,7 @@ import { BinCount, BuildOrderLine, Container, CountEvent, Scale } from '../../mo
 import { createPart, createScale, stockPart, testDb, unique } from '../helpers/db';
 import { signedIn } from '../helpers/http';
 import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
-import { CAPTURE_WAIT_MS, headingShown, liveCount, openBench, panButton, putOn, waitSettled, whenSettled } from '../helpers/bench';
+import { CAPTURE_WAIT_MS, headingShown, liveCount, openBench, panButton, putOn, waitSettled, wedgeScan, whenSettled } from '../helpers/bench';
 
 // A quiet scale (s_r = 0.2 d) so the ±1 d stability window settles within a second or two.
 const benchScale = (o: Parameters<typeof createScale>[0] = {}) => createScale({ repeatabilityG: 0.02, ...o });
@@ -132,8 +132,7 @@ describe('the bench (browser, simulated scale)', () => {
     // Someone typed into the field, then scanned a label into it: the scan replaces the typing.
     await field.fill('wrong');
     await field.focus();
-    await page.keyboard.type(second.code, { delay: 5 });
-    await page.keyboard.press('Enter');
+    await wedgeScan(page, second.code);
     await expect.poll(() => page.getByRole('heading', { name: 'Empty the pan and zero it' }).isVisible()).toBe(true);
     await expect.poll(() => page.locator('header').textContent()).toContain(second.code);
     // Stopping once the count has started asks first, saying what would be lost.
@@ -148,8 +147,7 @@ describe('the bench (browser, simulated scale)', () => {
     // Focus on nothing in particular (a button): the scan still lands.
     await page.getByText('Bin count — bin weighed apart').click();
     await page.getByRole('heading', { name: 'What are you counting?' }).click();
-    await page.keyboard.type(first.code, { delay: 5 });
-    await page.keyboard.press('Enter');
+    await wedgeScan(page, first.code);
     await expect.poll(() => page.locator('header').textContent()).toContain(first.code);
   });
 

@@ -57,3 +57,23 @@ export async function whenSettled(page: Page, act: () => Promise<void>, done: ()
 }
 
 export const headingShown = (page: Page, name: string | RegExp) => () => page.getByRole('heading', { name }).isVisible();
+
+/**
+ * A keyboard-wedge scan as the hardware sends it: each key stamped 8 ms after the last, then Enter.
+ * A real scanner's keys carry the operating system's timestamps, so a busy page still sees them
+ * 8 ms apart; Playwright's own typing stamps each key when the page gets round to it, which on a
+ * loaded test machine can be 100 ms, and would test the machine rather than the bench.
+ */
+export async function wedgeScan(page: Page, code: string): Promise<void> {
+  const cdp = await page.context().newCDPSession(page);
+  const start = Date.now() / 1000;
+  const keys = [...code].map((ch) => ({ key: ch, text: ch }));
+  keys.push({ key: 'Enter', text: '\r' });
+  for (const [i, k] of keys.entries()) {
+    const timestamp = start + i * 0.008;
+    const enter = k.key === 'Enter' ? { code: 'Enter', windowsVirtualKeyCode: 13, nativeVirtualKeyCode: 13 } : {};
+    await cdp.send('Input.dispatchKeyEvent', { type: 'keyDown', key: k.key, text: k.text, unmodifiedText: k.text, timestamp, ...enter });
+    await cdp.send('Input.dispatchKeyEvent', { type: 'keyUp', key: k.key, timestamp: timestamp + 0.002, ...enter });
+  }
+  await cdp.detach();
+}
