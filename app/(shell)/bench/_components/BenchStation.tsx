@@ -77,10 +77,11 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
           </p>
         ) : null}
       </header>
-      {/* Above both columns, so it stays pinned over the steps and the practice pan alike. */}
-      <CountReadout frame={frame} division={scale?.division ?? 1} showing={showing} targetQuantity={work?.targetQuantity ?? null} verdict={verdict} />
-      <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_24rem]">
-        <div className="min-w-0 space-y-4">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_24rem]">
+        {/* In one column (tablets) this column's pieces join the grid itself, so the pinned reading
+            stays on screen over the scale panel and the practice pan too. */}
+        <div className="contents lg:block lg:min-w-0 lg:space-y-4">
+          <CountReadout frame={frame} division={scale?.division ?? 1} showing={showing} targetQuantity={work?.targetQuantity ?? null} verdict={verdict} />
           {waiting ? (
             <p role="status" data-testid="waiting" className="flex flex-wrap items-center justify-between gap-2 rounded-md bg-forge-light px-4 py-3 text-lg text-forge-dark">
               <span>Waiting for a steady reading to {STEADY_ACTION_WORDS[waiting]}… keep hands off the pan.</span>

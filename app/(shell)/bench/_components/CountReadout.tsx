@@ -25,7 +25,7 @@ export function CountReadout({ frame, division, showing, targetQuantity, verdict
   const u = est ? est.wholePieceRange : 0;
   const weight = frame ? (showing === 'gross' ? frame.gross : frame.net) : null;
   return (
-    <section aria-label="Live reading" className="sticky top-0 z-20 rounded-lg bg-ink p-5 text-paper shadow-lg">
+    <section aria-label="Live reading" className="sticky top-0 z-20 rounded-lg bg-ink p-5 text-paper">
       <div className="flex items-center justify-between text-sm">
         <span data-testid="stability" className={`rounded-full px-3 py-1 font-bold ${frame?.stable ? 'bg-ok text-white' : 'bg-ink-soft text-paper'}`}>
           {frame ? (frame.stable ? 'Settled' : 'Settling…') : 'No readings'}
