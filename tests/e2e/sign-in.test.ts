@@ -2,7 +2,8 @@ import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { navFor } from '../../lib/navigation';
 import { ROLE_LABELS, ROLES } from '../../lib/roles';
-import { createUser } from '../helpers/db';
+import { createUser, TEST_PASSWORD } from '../helpers/db';
+import { baseUrl } from '../helpers/http';
 import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
 
 describe('signing in (browser)', () => {
@@ -42,6 +43,22 @@ describe('signing in (browser)', () => {
       await page.close();
     });
   }
+
+  it('follows `next` after sign-in only to a page of the app, however the address is dressed up', async () => {
+    const user = await createUser('planner');
+    for (const next of ['/\\evil.test', '/%09/evil.test', '/%5Cevil.test', '/%0a/evil.test']) {
+      const page = await browser.newPage();
+      await page.goto(`/sign-in?next=${next}`);
+      await page.getByLabel('E-mail').fill(user.email);
+      await page.getByLabel('Password').fill(TEST_PASSWORD);
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      // Wherever it goes (another host would not even load here), it must leave the sign-in page for the app.
+      await page.waitForURL((url) => url.pathname !== '/sign-in', { waitUntil: 'commit' });
+      expect(new URL(page.url()).origin, next).toBe(new URL(baseUrl()).origin);
+      await page.close();
+      await browser.clearCookies();
+    }
+  });
 
   it('shows a role without the right an explanation instead of the page', async () => {
     const page = await browser.newPage();
