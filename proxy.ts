@@ -19,7 +19,8 @@ export async function proxy(req: NextRequest): Promise<NextResponse> {
       data = {};
     }
   }
-  const live = Boolean(data.userId) && !isIdleExpired(data, now);
+  // A cookie that looks live; the server still checks its session row on every request.
+  const live = Boolean(data.sid) && !isIdleExpired(data, now);
   const isApi = pathname.startsWith('/api/');
   // Next's router answers a bare text 500 for a path that is not valid percent-encoded UTF-8
   // (it fails decoding the [id] before any handler runs): API callers get the usual JSON 400.

@@ -19,6 +19,7 @@ import { Part } from './part';
 import { PartStock } from './part-stock';
 import { PieceWeightSample } from './piece-weight-sample';
 import { PrintJob } from './print-job';
+import { UserSession } from './user-session';
 import { Scale } from './scale';
 import { PasswordToken } from './password-token';
 import { SignInThrottle } from './sign-in-throttle';
@@ -47,6 +48,7 @@ export {
   PasswordToken,
   PieceWeightSample,
   PrintJob,
+  UserSession,
   Scale,
   SignInThrottle,
   SiteSettings,
@@ -60,13 +62,14 @@ const initialised = new WeakSet<Sequelize>();
 
 export function initModels(sequelize: Sequelize): void {
   if (initialised.has(sequelize)) return;
-  const models = [User, SiteSettings, PasswordToken, SignInThrottle, MailMessage, PrintJob, Scale, Container, Part, PieceWeightSample, CountEvent];
+  const models = [User, UserSession, SiteSettings, PasswordToken, SignInThrottle, MailMessage, PrintJob, Scale, Container, Part, PieceWeightSample, CountEvent];
   const stockModels = [Bin, BinCount, PartStock, StockMovement, Kit, KitComponent, BuildOrder, BuildOrderLine, StockReservation];
   const qualityModels = [TestWeight, CalibrationRecord, JobRun, Audit, AuditItem];
   for (const model of [...models, ...stockModels, ...qualityModels]) {
     model.initModel(sequelize);
   }
   PasswordToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  UserSession.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   PieceWeightSample.belongsTo(Part, { foreignKey: 'partId', as: 'part' });
   PieceWeightSample.belongsTo(Scale, { foreignKey: 'scaleId', as: 'scale' });
   CountEvent.belongsTo(Part, { foreignKey: 'partId', as: 'part' });

@@ -13,6 +13,10 @@ export class SiteSettings extends Model<InferAttributes<SiteSettings>, InferCrea
   declare blindCycleCounts: CreationOptional<boolean>;
   /** IANA zone the shop keeps its days in; null follows the server's zone. */
   declare timeZone: CreationOptional<string | null>;
+  /** A session ends this many hours after sign-in however busy it is (one shift). */
+  declare sessionHours: CreationOptional<number>;
+  /** Whoever counted a variance cannot approve or reject it. */
+  declare fourEyesVariances: CreationOptional<boolean>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -29,6 +33,8 @@ export class SiteSettings extends Model<InferAttributes<SiteSettings>, InferCrea
         varianceThresholdPcs: { type: DataTypes.INTEGER, allowNull: false },
         blindCycleCounts: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         timeZone: { type: DataTypes.STRING(64), allowNull: true },
+        sessionHours: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 12 },
+        fourEyesVariances: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: { type: DataTypes.DATE, allowNull: false },
         updatedAt: { type: DataTypes.DATE, allowNull: false },

@@ -5,7 +5,7 @@ import { requirePageUser } from '@/server/auth/authorize';
 import { siteTimeZone } from '@/server/services/settings/get-settings';
 import { Wordmark } from '../_components/mark';
 import { SiteTimeProvider } from '../_components/site-time';
-import { signOutAction } from './actions';
+import { signOutAction, signOutEverywhereAction } from './actions';
 import { NavDrawer } from './_components/nav-drawer';
 import { NavLinks } from './_components/nav-links';
 
@@ -15,11 +15,18 @@ function WhoIsHere({ name, role, timeZone }: { name: string; role: string; timeZ
       <p className="font-medium">{name}</p>
       <p className="text-paper-line/80">{role}</p>
       <p className="mt-1 text-paper-line/80" data-testid="site-time-zone">Times in {timeZone}</p>
-      <form action={signOutAction} className="mt-2">
-        <button type="submit" className="min-h-11 text-brass hover:underline">
-          Sign out
-        </button>
-      </form>
+      <div className="mt-2 flex flex-wrap gap-x-4">
+        <form action={signOutAction}>
+          <button type="submit" className="min-h-11 text-brass hover:underline">
+            Sign out
+          </button>
+        </form>
+        <form action={signOutEverywhereAction}>
+          <button type="submit" className="min-h-11 text-paper-line hover:underline" title="Ends your sessions on every device, this one included">
+            Sign out everywhere
+          </button>
+        </form>
+      </div>
     </div>
   );
 }

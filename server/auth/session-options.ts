@@ -3,7 +3,8 @@ import type { SessionOptions } from 'iron-session';
 import { getEnv } from '../env';
 
 export interface SessionData {
-  userId?: number;
+  /** A random id naming the session's row (user_sessions); the server can end it at any time. */
+  sid?: string;
   // Last time the session was used (ms); the session ends after IDLE_LIMIT_MS without use.
   seenAt?: number;
 }

@@ -2,6 +2,7 @@ import 'server-only';
 import { log } from '../log';
 import { failInterruptedPrintJobs } from '../services/print-jobs/fail-interrupted-print-jobs';
 import { runCalibrationReminders } from './calibration-reminders';
+import { pruneSessions } from './prune-sessions';
 
 const MINUTE = 60_000;
 
@@ -16,4 +17,5 @@ function every(ms: number, name: string, work: () => Promise<unknown>): void {
 export function startScheduler(): void {
   every(60 * MINUTE, 'calibration reminders', () => runCalibrationReminders());
   every(5 * MINUTE, 'interrupted print jobs', () => failInterruptedPrintJobs());
+  every(60 * MINUTE, 'old sessions', () => pruneSessions());
 }

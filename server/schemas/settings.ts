@@ -11,6 +11,8 @@ export const updateSettingsSchema = z.object({
   varianceThresholdPct: z.number().min(0).max(100).optional(),
   varianceThresholdPcs: z.number().int().min(0).max(1_000_000).optional(),
   blindCycleCounts: z.boolean({ error: 'blindCycleCounts must be true or false' }).optional(),
+  sessionHours: z.number({ error: 'A whole number of hours' }).int({ error: 'A whole number of hours' }).min(1, { error: 'At least 1 hour' }).max(72, { error: 'At most 72 hours' }).optional(),
+  fourEyesVariances: z.boolean({ error: 'fourEyesVariances must be true or false' }).optional(),
   // null: follow the server's own zone.
   timeZone: z
     .string({ error: 'A time zone name such as Europe/Berlin' })
@@ -33,5 +35,8 @@ export interface SettingsDto {
   /** The zone days and times follow: the site's own, or the server's when none is set. */
   timeZone: string;
   timeZoneFromServer: boolean;
+  /** Hours a session lasts from sign-in, however busy (new sessions take a change). */
+  sessionHours: number;
+  fourEyesVariances: boolean;
   version: number;
 }

@@ -73,6 +73,35 @@ describe('bins and cycle counts', () => {
     expect(twice.status).toBe(422);
   });
 
+  it('keeps four eyes on a variance: whoever counted the bin cannot decide it, someone else can; the site may switch it off', async () => {
+    const quality = await signedIn('quality');
+    const other = await signedIn('quality');
+    const admin = await signedIn('admin');
+    const part = await createPart({ pieceSpread: 0.001 });
+    const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
+    const bin = await newBin(admin.agent, part.id, 1000);
+    // Book 1 000, counted 500 by a quality engineer, who then tries to approve it.
+    const own = await quality.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, bin, 500));
+    expect(own.body.binCount.status).toBe('pending');
+    const self = await quality.agent.post(`/api/v1/bin-counts/${own.body.binCount.id}/decision`).send({ decision: 'approve' });
+    expect(self.status).toBe(403);
+    expect(self.body.error.message).toMatch(/You counted this bin/);
+    testDb();
+    expect((await Bin.findByPk(bin.id))!.bookQuantity).toBe(1000);
+    expect((await other.agent.post(`/api/v1/bin-counts/${own.body.binCount.id}/decision`).send({ decision: 'reject' })).status).toBe(200);
+
+    // Switched off (a one-person stockroom), the counter may decide.
+    const { settings } = (await admin.agent.get('/api/v1/settings')).body;
+    expect(settings.fourEyesVariances).toBe(true);
+    const off = await admin.agent.patch('/api/v1/settings').send({ fourEyesVariances: false, version: settings.version });
+    try {
+      const again = await quality.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, { id: bin.id, version: (await Bin.findByPk(bin.id))!.version }, 500));
+      expect((await quality.agent.post(`/api/v1/bin-counts/${again.body.binCount.id}/decision`).send({ decision: 'reject' })).status).toBe(200);
+    } finally {
+      await admin.agent.patch('/api/v1/settings').send({ fourEyesVariances: true, version: off.body.settings.version });
+    }
+  });
+
   it('puts a bin whose variance was rejected first on the count plan again, and tells the clerks why', async () => {
     const clerk = await signedIn('clerk');
     const planner = await signedIn('planner');

@@ -9,7 +9,7 @@ import { baseUrl, signedIn } from '../helpers/http';
 // The one server action (sign out), by the id the build gave it.
 function signOutActionId(): string {
   const manifest = JSON.parse(readFileSync(path.resolve(__dirname, '../../.next/server/server-reference-manifest.json'), 'utf8'));
-  const ids = Object.keys(manifest.node);
+  const ids = Object.entries(manifest.node as Record<string, { exportedName?: string }>).filter(([, v]) => v.exportedName === 'signOutAction').map(([id]) => id);
   expect(ids).toHaveLength(1);
   return ids[0];
 }

@@ -1,6 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import { afterAll, describe, expect, it } from 'vitest';
-import { Bin, CountEvent, initModels, Part, PrintJob, Scale, SiteSettings, User } from '../../models';
+import { Bin, CountEvent, initModels, Part, PrintJob, Scale, SiteSettings, User, UserSession } from '../../models';
 import { createMigrator, migrateUp } from '../../models/migrate';
 import { migrations } from '../../models/migrations';
 import { createScratchDatabase, schemaShape } from '../helpers/scratch-database';
@@ -50,6 +50,10 @@ const ERA_ROWS: Record<string, (q: QueryInterface) => Promise<void>> = {
   '0008-site-time-zone': async (q) => {
     await q.bulkUpdate('site_settings', { time_zone: 'Europe/Vienna' }, { id: 1 });
   },
+  '0009-user-sessions': async (q) => {
+    await q.bulkInsert('user_sessions', [{ id: 901, token_hash: 'a'.repeat(64), user_id: 901, last_seen_at: now, expires_at: now, ended_at: now, end_reason: 'signed_out', ...stamps }]);
+    await q.bulkUpdate('site_settings', { session_hours: 10, four_eyes_variances: false }, { id: 1 });
+  },
 };
 
 describe('migrations on an existing database with data', () => {
@@ -89,7 +93,8 @@ describe('migrations on an existing database with data', () => {
     expect(await Scale.findByPk(901)).toMatchObject({ name: 'Upgrade bench', calibrationDueAt: '2027-01-31' });
     expect(await Bin.findByPk(901)).toMatchObject({ bookQuantity: 480, abcClass: 'B' });
     expect(await PrintJob.findByPk(901)).toMatchObject({ status: 'sent', labels: 1 });
-    expect(await SiteSettings.findByPk(1)).toMatchObject({ timeZone: 'Europe/Vienna' });
+    expect(await SiteSettings.findByPk(1)).toMatchObject({ timeZone: 'Europe/Vienna', sessionHours: 10, fourEyesVariances: false });
+    expect(await UserSession.findByPk(901)).toMatchObject({ userId: 901, endReason: 'signed_out' });
     const bin = (await Bin.findByPk(901))!;
     bin.bookQuantity = 478;
     await bin.save();

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { PasswordToken, User } from '../../models';
-import { testDb, unique } from '../helpers/db';
+import { TEST_PASSWORD, testDb, unique } from '../helpers/db';
 import { anonymous, signedIn } from '../helpers/http';
 import { waitForMail } from '../helpers/mail';
 
@@ -65,7 +65,7 @@ describe('people (admin)', () => {
     expect(again.body.error.fields.email).toBeTruthy();
   });
 
-  it('changes a role with optimistic locking: a stale version gets 409', async () => {
+  it('changes a role with optimistic locking: a stale version gets 409; the new role is taken up by signing in again', async () => {
     const admin = await signedIn('admin');
     const other = await signedIn('operator');
     const list = await admin.agent.get('/api/v1/users');
@@ -76,7 +76,10 @@ describe('people (admin)', () => {
     const stale = await admin.agent.patch(`/api/v1/users/${other.userId}`).send({ role: 'planner', version: row.version });
     expect(stale.status).toBe(409);
     expect(stale.body.error.code).toBe('stale_version');
-    expect((await other.agent.get('/api/v1/session')).body.user.role).toBe('clerk');
+    // The session signed in with the old role ended with the change.
+    expect((await other.agent.get('/api/v1/session')).status).toBe(401);
+    const again = await anonymous().post('/api/v1/session').send({ email: other.email, password: TEST_PASSWORD });
+    expect(again.body.user.role).toBe('clerk');
   });
 
   it('switching someone off ends their session; an admin cannot switch off themselves', async () => {

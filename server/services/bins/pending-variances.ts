@@ -12,6 +12,7 @@ export interface PendingVariance {
   variance: number;
   percent: number | null;
   countedBy: string;
+  countedById: number;
   countedAt: string;
 }
 
@@ -28,7 +29,7 @@ export async function pendingVariances(): Promise<PendingVariance[]> {
     limit: 500,
   });
   return rows.map((r) => {
-    const { bin, event } = r as BinCount & { bin: { code: string; part?: { partNumber: string } }; event: { operator?: { name: string } } };
+    const { bin, event } = r as BinCount & { bin: { code: string; part?: { partNumber: string } }; event: { operatorId: number; operator?: { name: string } } };
     const pct = variancePercent(r.variance, r.bookQuantity);
     return {
       id: r.id,
@@ -39,6 +40,7 @@ export async function pendingVariances(): Promise<PendingVariance[]> {
       variance: r.variance,
       percent: Number.isFinite(pct) ? Math.round(pct * 10) / 10 : null,
       countedBy: event.operator?.name ?? 'unknown',
+      countedById: event.operatorId,
       countedAt: r.createdAt.toISOString(),
     };
   });

@@ -15,6 +15,8 @@ export function toSettingsDto(s: SiteSettings): SettingsDto {
     blindCycleCounts: s.blindCycleCounts,
     timeZone: s.timeZone ?? serverTimeZone(),
     timeZoneFromServer: s.timeZone === null || s.timeZone === undefined,
+    sessionHours: s.sessionHours,
+    fourEyesVariances: s.fourEyesVariances,
     version: s.version,
   };
 }

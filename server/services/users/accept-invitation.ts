@@ -2,13 +2,14 @@ import 'server-only';
 import { Op } from 'sequelize';
 import { PasswordToken, User } from '@/models';
 import { hashPassword } from '../../auth/passwords';
-import type { SessionUser } from '../../auth/session';
+import { endSessionsOf, type SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
 import type { AcceptInvitationInput } from '../../schemas/session';
 import { hashToken } from './issue-password-token';
 
 // Sets the password from a one-time link. The token row is locked, so a double submit uses it once.
+// A new password ends every session signed in with the old one.
 export async function acceptInvitation({ token, password }: AcceptInvitationInput): Promise<SessionUser> {
   const db = getDb();
   const passwordHash = await hashPassword(password);
@@ -27,6 +28,7 @@ export async function acceptInvitation({ token, password }: AcceptInvitationInpu
     await row.update({ usedAt: new Date() }, { transaction });
     user.passwordHash = passwordHash;
     await user.save({ transaction });
+    await endSessionsOf(user.id, 'password_changed', transaction);
     return { id: user.id, email: user.email, name: user.name, role: user.role };
   });
 }

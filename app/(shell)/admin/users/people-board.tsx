@@ -36,6 +36,11 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
     } else setNotice(res.message);
   }
 
+  async function signOutEverywhere(user: UserDto) {
+    const res = await apiFetch<{ ended: number }>(`/api/v1/users/${user.id}/sessions`, { method: 'DELETE' });
+    setNotice(res.ok ? `${user.name} is signed out on ${res.data.ended === 1 ? '1 device' : `${res.data.ended} devices`}.` : res.message);
+  }
+
   async function resend(user: UserDto) {
     const res = await apiFetch<{ mail: string }>(`/api/v1/users/${user.id}/invitation`, { method: 'POST' });
     setNotice(res.ok ? `A new invitation went to ${user.email} (${res.data.mail}).` : res.message);
@@ -75,7 +80,7 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
       headerName: 'Actions',
       sortable: false,
       filter: false,
-      minWidth: 260,
+      minWidth: 340,
       cellRenderer: (p: ICellRendererParams<UserDto>) => {
         const u = p.data;
         if (!u || u.id === meId) return null;
@@ -86,6 +91,9 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
             ) : (
               <button type="button" className="text-forge hover:underline" onClick={() => patch(u, { active: true })}>Switch on</button>
             )}
+            {u.status === 'active' ? (
+              <button type="button" className="text-forge hover:underline" onClick={() => setPending({ question: `Sign ${u.name} out on every device? Whatever they are doing unsaved is lost; they can sign in again.`, yes: 'Yes, sign out everywhere', onConfirm: () => signOutEverywhere(u) })}>Sign out everywhere</button>
+            ) : null}
             {u.status === 'invited' ? (
               <button type="button" className="text-forge hover:underline" onClick={() => resend(u)}>Send link again</button>
             ) : null}

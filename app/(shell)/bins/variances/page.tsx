@@ -21,7 +21,7 @@ export default async function VariancesPage() {
           {canDecide ? 'Approving books the counted quantity; rejecting keeps the book and asks for a recount.' : 'A planner, quality engineer or administrator decides.'}
         </p>
       </header>
-      <VarianceList initial={variances} canDecide={canDecide} />
+      <VarianceList initial={variances} canDecide={canDecide} meId={user.id} fourEyes={settings.fourEyesVariances} />
     </div>
   );
 }

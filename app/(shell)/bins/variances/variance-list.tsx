@@ -5,7 +5,7 @@ import type { PendingVariance } from '@/server/services/bins/pending-variances';
 import { useSiteTime } from '../../../_components/site-time';
 import { VarianceDecision } from './variance-decision';
 
-export function VarianceList({ initial, canDecide }: { initial: PendingVariance[]; canDecide: boolean }) {
+export function VarianceList({ initial, canDecide, meId, fourEyes }: { initial: PendingVariance[]; canDecide: boolean; meId: number; fourEyes: boolean }) {
   const { when } = useSiteTime();
   const [pending, setPending] = useState(initial);
   const [notice, setNotice] = useState<string | null>(null);
@@ -26,7 +26,9 @@ export function VarianceList({ initial, canDecide }: { initial: PendingVariance[
               Book <span className="num font-medium">{v.bookQuantity}</span> → counted <span className="num font-medium">{v.counted}</span>
               <span className="block text-ink-faint">by {v.countedBy}, {when(v.countedAt)}</span>
             </p>
-            {canDecide ? (
+            {canDecide && fourEyes && v.countedById === meId ? (
+              <p className="text-sm text-ink-soft" data-testid="own-variance">You counted this bin: someone else approves or rejects it (four eyes).</p>
+            ) : canDecide ? (
               <VarianceDecision
                 variance={v}
                 onDecided={(text) => {
