@@ -98,6 +98,7 @@ interface Sample {
   ids?: Record<string, number>; // path ids when not the resource's own fixture
   headers?: () => Record<string, string>; // fresh for each request
   file?: { name: string; type: string; bytes: Buffer }; // a valid upload
+  ownSession?: boolean; // the handler ends its caller's sessions: each request is sent by someone signed in for it
 }
 
 // A value that must be new on each request (unique names and codes), made as the body is sent:
@@ -137,6 +138,8 @@ const PDF = Buffer.from('%PDF-1.4\n%fuzz certificate\n');
 const SAMPLES: Record<string, (w: World) => Sample> = {
   'POST /api/v1/session': (w) => ({ bodies: [{ email: fresh('e-mail', (n) => `fuzz-${RUN}-${n}@example.test`), password: 'not the password' }, { email: w.user.email, password: TEST_PASSWORD }] }),
   'DELETE /api/v1/session': () => ({}),
+  'DELETE /api/v1/session/everywhere': () => ({ ownSession: true }),
+  'DELETE /api/v1/users/[id]/sessions': () => ({}),
   // The catch-all for addresses no route serves reads nothing; whatever comes, it answers 404.
   'POST /api/[...path]': () => ({}),
   'PUT /api/[...path]': () => ({}),
@@ -697,12 +700,16 @@ async function send(agent: Agent, h: Handler, s: Sample, r: FuzzRequest) {
 
 // CHECKSUM TABLE reads every row (InnoDB keeps no live checksum), so it is exact, unlike
 // information_schema's table_rows estimate; with a few thousand rows it costs milliseconds.
-// No table is left out: sessions live in the cookie and the scheduler is off in tests (TF_JOBS=0),
-// so nothing writes on every request. The one refusal that writes on purpose is a failed sign-in.
+// The scheduler is off in tests (TF_JOBS=0), so nothing writes on every request but one thing: a
+// session's idle clock, moved at most once a minute. Session rows are compared without it, so a
+// session started or ended on a refusal still shows. The one refusal that writes on purpose is a failed sign-in.
 let tables: string[] = [];
+const SESSION_ROWS = `SELECT COUNT(*) AS n, SUM(CRC32(CONCAT_WS('|', id, user_id, token_hash, expires_at, IFNULL(ended_at, '-'), IFNULL(end_reason, '-')))) AS s FROM user_sessions`;
 async function fingerprint(): Promise<Map<string, string>> {
-  const rows = await testDb().query<{ Table: string; Checksum: number | string | null }>(`CHECKSUM TABLE ${tables.map((t) => `\`${t}\``).join(', ')}`, { type: QueryTypes.SELECT });
-  return new Map(rows.map((r) => [r.Table.split('.').pop()!, String(r.Checksum)]));
+  const db = testDb();
+  const rows = await db.query<{ Table: string; Checksum: number | string | null }>(`CHECKSUM TABLE ${tables.filter((t) => t !== 'user_sessions').map((t) => `\`${t}\``).join(', ')}`, { type: QueryTypes.SELECT });
+  const [sessions] = await db.query<{ n: number; s: string | null }>(SESSION_ROWS, { type: QueryTypes.SELECT });
+  return new Map([...rows.map((r): [string, string] => [r.Table.split('.').pop()!, String(r.Checksum)]), ['user_sessions', `${sessions.n}:${sessions.s}`]]);
 }
 
 function writesAllowed(h: Handler, status: number): string[] {
@@ -815,7 +822,7 @@ describe('fuzzing every route handler', () => {
       const role = roleFor(h);
       await fc.assert(
         fc.asyncProperty(requestArb(h, sample, world), async (r) => {
-          const agent = role ? world.agents.get(role)! : anonymous();
+          const agent = !role ? anonymous() : sample.ownSession ? (await signedIn(role)).agent : world.agents.get(role)!;
           const before = await fingerprint();
           const res = await send(agent, h, sample, r);
           const what = `${h.key} answered ${res.status}: ${res.text?.slice(0, 300)}`;
