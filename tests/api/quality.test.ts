@@ -156,6 +156,29 @@ describe('calibration reminders', () => {
   });
 });
 
+describe('a scale past its calibration date', () => {
+  it('refuses captures and samples at once, before the reminder job has locked it; on its due day it still counts', async () => {
+    const { agent } = await signedIn('operator');
+    const part = await createPart({ pieceSpread: 0.01 });
+    const scale = await createScale();
+    const capture = () =>
+      agent
+        .post('/api/v1/counts')
+        .set('Idempotency-Key', randomUUID())
+        .send({ purpose: 'part', partId: part.id, scaleId: scale.id, unit: 'g', gross: 20, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true });
+    // The test server's site days are UTC days (TZ=UTC).
+    await Scale.update({ calibrationDueAt: utcDay(0) }, { where: { id: scale.id } });
+    expect((await capture()).status).toBe(201);
+    await Scale.update({ calibrationDueAt: utcDay(-1) }, { where: { id: scale.id } });
+    const refused = await capture();
+    expect(refused.status).toBe(422);
+    expect(refused.body.error).toMatchObject({ code: 'scale_locked', message: expect.stringContaining(`was due for calibration on ${utcDay(-1)}`) });
+    expect((await Scale.findByPk(scale.id))!.status).toBe('in_service');
+    const sample = await agent.post(`/api/v1/parts/${part.id}/samples`).send({ scaleId: scale.id, unit: 'g', quantity: 3, netWeight: 1.5, increments: [0.5, 0.5, 0.5] });
+    expect(sample.status).toBe(422);
+  });
+});
+
 describe('sampling plans and count audits', () => {
   it('answers the sampling-plan contract (ISO 2859-1: lot 500, level II, AQL 1.0 → H, 50, 1/2)', async () => {
     const { agent } = await signedIn('quality');

@@ -15,6 +15,8 @@ import type { CountEventDto } from '@/server/schemas/counts';
 import type { PartDto } from '@/server/schemas/parts';
 import type { ScaleDto } from '@/server/schemas/scales';
 import { apiFetch } from '@/app/_components/api-client';
+import { useSiteTime } from '@/app/_components/site-time';
+import { calibrationOverdue } from '@/lib/metrology/calibration-due';
 import { allows, canMoveScale, canUseKept, captureDone, move, moveScale, takeKept, type BenchEvent } from '../_lib/bench-machine';
 import { chooseBinContainer, keepSample, parseKeptSample, parseSavedWork, pieceIncrements, readingScaleId, sampleOnPan, startWork, type BenchWork, type KeptSample } from '../_lib/bench-work';
 import { createCaptureQueue, type QueuedCapture, type SendOutcome } from '../_lib/capture-queue';
@@ -230,8 +232,12 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     return f;
   };
 
+  const { today } = useSiteTime();
+  const overdue = scale ? calibrationOverdue(scale.calibrationDueAt, today()) : false;
   const locked = scale?.status === 'locked';
-  const captureBlocked = locked
+  const captureBlocked = overdue && !locked
+    ? `This scale was due for calibration on ${scale!.calibrationDueAt} and may not be used until a passing test is recorded. ${describeWarning('scale_locked').remedy}`
+    : locked
     ? `This scale is locked${scale?.statusReason ? `: ${scale.statusReason}` : ''}. ${describeWarning('scale_locked').remedy}`
     : null;
 
@@ -355,7 +361,7 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   const codes: WarningCode[] = [];
   for (const w of frame?.estimate?.warnings ?? []) codes.push(w.code);
   if (frame?.load.level === 'over' && !codes.includes('over_capacity')) codes.push('over_capacity');
-  if (locked) codes.push('scale_locked');
+  if (locked || overdue) codes.push('scale_locked');
   if (notice?.code && !codes.includes(notice.code)) codes.push(notice.code);
 
   const verdict = work?.targetQuantity != null && frame?.estimate && (work.step === 'count' || work.step === 'captured')
