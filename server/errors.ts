@@ -13,6 +13,7 @@ export const ERROR_STATUS = {
   conflict: 409,
   stale_version: 409,
   duplicate: 409,
+  payload_too_large: 413,
   unsupported_media_type: 415,
   rule_violated: 422,
   scale_locked: 422,

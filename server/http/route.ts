@@ -6,6 +6,7 @@ import { requirePermission, requireUser } from '../auth/authorize';
 import { getCurrentUser, type SessionUser } from '../auth/session';
 import { AppError } from '../errors';
 import { errorResponse } from './errors-to-response';
+import { assertJsonShape, JSON_BODY_LIMIT, readBodyText } from './read-body';
 import { rejectCrossSite } from './reject-cross-site';
 import { zodFields } from './zod-fields';
 
@@ -17,6 +18,8 @@ interface RouteSpec<A extends Access, B, Q, P> {
   body?: B;
   query?: Q;
   params?: P;
+  /** The largest body this address takes, bytes (JSON_BODY_LIMIT unless said). */
+  maxBodyBytes?: number;
 }
 
 export interface RouteContext<A extends Access, B, Q, P> {
@@ -40,13 +43,15 @@ export function route<A extends Access, B extends z.ZodType | undefined = undefi
         spec.access === 'public' ? await getCurrentUser() : spec.access === 'signed-in' ? await requireUser() : await requirePermission(spec.access as Permission);
       const params = parseWith(spec.params, await ctx.params, 'Bad address');
       const query = parseWith(spec.query, Object.fromEntries(req.nextUrl.searchParams), 'Bad query');
-      const body = spec.body ? parseWith(spec.body, await readJson(req), 'Some fields need attention') : undefined;
+      const body = spec.body ? parseWith(spec.body, await readJson(req, spec.maxBodyBytes ?? JSON_BODY_LIMIT), 'Some fields need attention') : undefined;
       const result = await handler({ req, user, body, query, params } as RouteContext<A, B, Q, P>);
       if (result instanceof Response) return result;
-      if (result === undefined) return new Response(null, { status: 204 });
-      return Response.json(result);
+      if (result === undefined) return new Response(null, { status: 204, headers: NO_STORE });
+      return Response.json(result, { headers: NO_STORE });
     } catch (err) {
-      return errorResponse(err, req.headers.get('x-request-id'));
+      const res = errorResponse(err, req.headers.get('x-request-id'));
+      res.headers.set('Cache-Control', 'no-store');
+      return res;
     }
   };
 }
@@ -58,23 +63,29 @@ function parseWith(schema: z.ZodType | undefined, value: unknown, message: strin
   return parsed.data;
 }
 
-async function readJson(req: NextRequest): Promise<unknown> {
-  const text = await req.text();
+// Answers about people and stock are never kept by a browser or a proxy on the way.
+const NO_STORE = { 'Cache-Control': 'no-store' };
+
+async function readJson(req: NextRequest, limit: number): Promise<unknown> {
+  const text = await readBodyText(req, limit);
   if (!text.trim()) return {};
   // A body under another type is refused rather than guessed at: it is not what our clients send,
   // and a form or text/plain post is what a cross-site page can send without a preflight.
   if (!isJsonMediaType(req.headers.get('content-type'))) {
     throw new AppError('unsupported_media_type', 'Send the body as JSON, with Content-Type: application/json');
   }
+  let value: unknown;
   try {
-    return JSON.parse(text);
+    value = JSON.parse(text);
   } catch {
     throw new AppError('invalid_json', 'The request body is not valid JSON');
   }
+  assertJsonShape(value);
+  return value;
 }
 
 export function created(data: unknown): Response {
-  return Response.json(data, { status: 201 });
+  return Response.json(data, { status: 201, headers: NO_STORE });
 }
 
 // application/json or a +json type (RFC 6839), in UTF-8: the only charset JSON text may use on the wire (RFC 8259 §8.1).

@@ -1,11 +1,13 @@
 import { endSession, startSession } from '@/server/auth/session';
 import { AppError } from '@/server/errors';
 import { clientAddress } from '@/server/http/client-address';
+import { CREDENTIALS_BODY_LIMIT } from '@/server/http/read-body';
 import { route } from '@/server/http/route';
 import { signInSchema } from '@/server/schemas/session';
 import { signIn } from '@/server/services/auth/sign-in';
 
-export const POST = route({ access: 'public', body: signInSchema }, async ({ req, body }) => {
+// Refused cheaply: a small body limit, read before anything else is done.
+export const POST = route({ access: 'public', body: signInSchema, maxBodyBytes: CREDENTIALS_BODY_LIMIT }, async ({ req, body }) => {
   const user = await signIn({ ...body, address: clientAddress(req) });
   await startSession(user.id);
   return { user };
