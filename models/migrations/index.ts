@@ -7,6 +7,7 @@ import * as m0006 from './0006-print-jobs';
 import * as m0007 from './0007-exact-counts';
 import * as m0008 from './0008-site-time-zone';
 import * as m0009 from './0009-user-sessions';
+import * as m0010 from './0010-mask-mail-links';
 
 // Ordered list of migrations. Add a file `NNNN-what-it-does.ts` exporting up/down and list it here.
 export const migrations = [
@@ -19,4 +20,5 @@ export const migrations = [
   { name: '0007-exact-counts', ...m0007 },
   { name: '0008-site-time-zone', ...m0008 },
   { name: '0009-user-sessions', ...m0009 },
+  { name: '0010-mask-mail-links', ...m0010 },
 ];

@@ -5,6 +5,7 @@ import { getDb } from '../db';
 import { getEnv } from '../env';
 import { log } from '../log';
 import { addressListForLog } from './address-list';
+import { maskSecrets } from './mask-secrets';
 import { getTransport } from './transport';
 
 export interface OutgoingMail {
@@ -12,9 +13,11 @@ export interface OutgoingMail {
   to: string[];
   subject: string;
   text: string;
+  /** Parts of the text only the recipient may see (one-time links): masked in the outbox. */
+  secrets?: string[];
 }
 
-// Logs the message, then sends it. Call after the business transaction commits: a mail
+// Logs the message (secrets masked), then sends it. Call after the business transaction commits: a mail
 // failure is recorded on the log row and never undoes the change that caused it.
 export async function sendMail(mail: OutgoingMail): Promise<MailStatus> {
   getDb();
@@ -23,7 +26,7 @@ export async function sendMail(mail: OutgoingMail): Promise<MailStatus> {
     kind: mail.kind,
     toAddress: addressListForLog(mail.to),
     subject: mail.subject,
-    bodyText: mail.text,
+    bodyText: maskSecrets(mail.text, mail.secrets ?? []),
     status: 'queued',
     error: null,
     sentAt: null,

@@ -1,6 +1,7 @@
 import type { QueryInterface } from 'sequelize';
 import { afterAll, describe, expect, it } from 'vitest';
-import { Bin, CountEvent, initModels, Part, PrintJob, Scale, SiteSettings, User, UserSession } from '../../models';
+import { Bin, CountEvent, initModels, MailMessage, Part, PrintJob, Scale, SiteSettings, User, UserSession } from '../../models';
+import { HIDDEN_SECRET } from '../../server/mail/mask-secrets';
 import { createMigrator, migrateUp } from '../../models/migrate';
 import { migrations } from '../../models/migrations';
 import { createScratchDatabase, schemaShape } from '../helpers/scratch-database';
@@ -53,6 +54,11 @@ const ERA_ROWS: Record<string, (q: QueryInterface) => Promise<void>> = {
   '0009-user-sessions': async (q) => {
     await q.bulkInsert('user_sessions', [{ id: 901, token_hash: 'a'.repeat(64), user_id: 901, last_seen_at: now, expires_at: now, ended_at: now, end_reason: 'signed_out', ...stamps }]);
     await q.bulkUpdate('site_settings', { session_hours: 10, four_eyes_variances: false }, { id: 1 });
+    // Logged in full, as the outbox did then: the next migration masks it.
+    await q.bulkInsert('mail_messages', [{ id: 902, kind: 'invitation', to_address: 'old.hand@upgrade.test', subject: 'You are invited', body_text: 'Choose:\n\nhttp://127.0.0.1:3000/set-password?token=Ab_c-9\n\nThanks', status: 'sent', error: null, sent_at: now, ...stamps }]);
+  },
+  '0010-mask-mail-links': async (q) => {
+    await q.bulkInsert('mail_messages', [{ id: 903, kind: 'password_reset', to_address: 'old.hand@upgrade.test', subject: 'Choose a new password', body_text: 'Masked when sent: [one-time link: only the recipient has it]', status: 'sent', error: null, sent_at: now, ...stamps }]);
   },
 };
 
@@ -95,6 +101,8 @@ describe('migrations on an existing database with data', () => {
     expect(await PrintJob.findByPk(901)).toMatchObject({ status: 'sent', labels: 1 });
     expect(await SiteSettings.findByPk(1)).toMatchObject({ timeZone: 'Europe/Vienna', sessionHours: 10, fourEyesVariances: false });
     expect(await UserSession.findByPk(901)).toMatchObject({ userId: 901, endReason: 'signed_out' });
+    expect((await MailMessage.findByPk(902))!.bodyText).toBe(`Choose:\n\n${HIDDEN_SECRET}\n\nThanks`);
+    expect((await MailMessage.findByPk(901))!.bodyText).toBe('Hello');
     const bin = (await Bin.findByPk(901))!;
     bin.bookQuantity = 478;
     await bin.save();

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { PasswordToken, User } from '../../models';
+import { MailMessage, PasswordToken, User } from '../../models';
+import { HIDDEN_SECRET } from '../../server/mail/mask-secrets';
 import { TEST_PASSWORD, testDb, unique } from '../helpers/db';
 import { anonymous, signedIn } from '../helpers/http';
 import { waitForMail } from '../helpers/mail';
@@ -109,12 +110,41 @@ describe('people (admin)', () => {
     expect((await anonymous().post('/api/v1/invitations/accept').send({ token: secondToken, password: 'a long enough secret' })).status).toBe(200);
   });
 
-  it('keeps a log of sent mail that admins can read', async () => {
+  it('keeps a log of sent mail that admins can read, with the one-time link masked: only the inbox has it', async () => {
     const { agent } = await signedIn('admin');
     const email = `${unique('logged')}@example.test`;
     await agent.post('/api/v1/users').send({ name: 'Logged Person', email, role: 'operator' });
+    const token = linkToken((await waitForMail(email))[0].text);
     const res = await agent.get('/api/v1/mail');
     expect(res.status).toBe(200);
-    expect(res.body.messages.some((m: { to: string; status: string }) => m.to === email && m.status === 'sent')).toBe(true);
+    const logged = res.body.messages.find((m: { to: string }) => m.to === email);
+    expect(logged).toMatchObject({ status: 'sent', kind: 'invitation' });
+    expect(logged.text).toContain('Logged Person');
+    expect(logged.text).toContain(HIDDEN_SECRET);
+    expect(logged.text).not.toContain(token);
+    expect(logged.text).not.toContain('set-password');
+    const row = await MailMessage.findByPk(logged.id);
+    expect(row!.bodyText).not.toContain(token);
+  });
+
+  it('sends someone who has a password a reset link only they receive; their password works until they use it', async () => {
+    const admin = await signedIn('admin');
+    const person = await signedIn('clerk');
+    const res = await admin.agent.post(`/api/v1/users/${person.userId}/invitation`);
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ mail: 'sent', kind: 'password_reset' });
+    const [mail] = await waitForMail(person.email);
+    expect(mail.subject).toBe('Choose a new Tallyforge password');
+    const token = linkToken(mail.text);
+    const logged = (await admin.agent.get('/api/v1/mail')).body.messages.find((m: { to: string }) => m.to === person.email);
+    expect(logged).toMatchObject({ kind: 'password_reset' });
+    expect(logged.text).not.toContain(token);
+
+    // Until the link is used nothing changes: the old password signs in, the old session works.
+    expect((await anonymous().post('/api/v1/session').send({ email: person.email, password: TEST_PASSWORD })).status).toBe(200);
+    expect((await person.agent.get('/api/v1/session')).status).toBe(200);
+    expect((await anonymous().post('/api/v1/invitations/accept').send({ token, password: 'a brand new long secret' })).status).toBe(200);
+    expect((await person.agent.get('/api/v1/session')).status).toBe(401);
+    expect((await anonymous().post('/api/v1/session').send({ email: person.email, password: TEST_PASSWORD })).status).toBe(401);
   });
 });

@@ -1,6 +1,6 @@
 import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { unique } from '../helpers/db';
+import { createUser, unique } from '../helpers/db';
 import { openBrowser, screenshot, signInThroughPage } from '../helpers/browser';
 import { waitForMail } from '../helpers/mail';
 
@@ -63,5 +63,35 @@ describe('people (browser)', () => {
     await ask.getByRole('button', { name: 'Yes, switch off' }).click();
     await expect.poll(() => page.getByTestId('people-notice').textContent()).toBe('Rosa Lindqvist: saved.');
     await expect.poll(() => page.getByRole('gridcell', { name: 'inactive' }).count()).toBe(1);
+  });
+
+  it('an admin mails someone a password reset link; the outbox shows it masked, and only the person can use it', async () => {
+    const person = await createUser('operator');
+    const page = await admin.newPage();
+    await signInThroughPage(page, 'admin');
+    await page.goto('/admin/users');
+    await page.getByLabel('Find').fill(person.email);
+    await expect.poll(() => page.getByRole('gridcell', { name: person.email }).count()).toBe(1);
+    await page.getByRole('button', { name: 'Reset password' }).click();
+    const ask = page.getByRole('alertdialog', { name: 'Please confirm' });
+    await expect.poll(() => ask.textContent()).toContain('Their current password keeps working until they use it');
+    await ask.getByRole('button', { name: 'Yes, send the link' }).click();
+    await expect.poll(() => page.getByTestId('people-notice').textContent()).toBe(`A password reset link went to ${person.email}; only they can open it.`);
+
+    const [mail] = await waitForMail(person.email);
+    const link = mail.text.match(/https?:\/\/\S+\/set-password\?token=\S+/)![0];
+    await page.goto('/admin/mail');
+    const entry = page.getByRole('listitem').filter({ hasText: person.email }).first();
+    await entry.getByText('Choose a new Tallyforge password').click();
+    await expect.poll(() => entry.locator('pre').textContent()).toContain('[one-time link: only the recipient has it]');
+    expect(await entry.locator('pre').textContent()).not.toContain('token=');
+    await screenshot(page, 'outbox-masked-link');
+
+    const tab = await newcomer.newPage();
+    await tab.goto(link);
+    await tab.getByLabel('New password').fill('a fresh long secret');
+    await tab.getByLabel('Same password again').fill('a fresh long secret');
+    await tab.getByRole('button', { name: 'Save and sign in' }).click();
+    await tab.waitForURL((url) => url.pathname === '/');
   });
 });

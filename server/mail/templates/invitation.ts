@@ -5,7 +5,7 @@ export interface InvitationMailInput {
   name: string;
   role: Role;
   link: string;
-  expiresAt: Date;
+  expiresAt: string; // as the site reads it
   invitedBy: string;
 }
 
@@ -20,7 +20,7 @@ export function invitationMail({ name, role, link, expiresAt, invitedBy }: Invit
       '',
       link,
       '',
-      `The link works once and expires ${expiresAt.toUTCString()}.`,
+      `The link works once and expires ${expiresAt}.`,
       'If you did not expect this, ignore this message.',
     ].join('\n'),
   };

@@ -1,4 +1,5 @@
 import 'server-only';
+import { formatSiteDateTime } from '@/lib/time/site-clock';
 import { User } from '@/models';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
@@ -7,6 +8,7 @@ import { AppError } from '../../errors';
 import { sendMail } from '../../mail/send-mail';
 import { invitationMail } from '../../mail/templates/invitation';
 import type { InviteUserInput, UserDto } from '../../schemas/users';
+import { siteTimeZone } from '../settings/get-settings';
 import { issuePasswordToken } from './issue-password-token';
 import { toUserDto } from './user-dto';
 
@@ -27,8 +29,8 @@ export async function inviteUser({ input, invitedBy }: InviteUserOptions): Promi
   return { user: toUserDto(user), mail };
 }
 
-export function sendInvitation(user: User, token: string, expiresAt: Date, invitedBy: string): Promise<string> {
+export async function sendInvitation(user: User, token: string, expiresAt: Date, invitedBy: string): Promise<string> {
   const link = `${getEnv().APP_URL}/set-password?token=${token}`;
-  const message = invitationMail({ name: user.name, role: user.role, link, expiresAt, invitedBy });
-  return sendMail({ kind: 'invitation', to: [user.email], ...message });
+  const message = invitationMail({ name: user.name, role: user.role, link, expiresAt: formatSiteDateTime(expiresAt, await siteTimeZone()), invitedBy });
+  return sendMail({ kind: 'invitation', to: [user.email], ...message, secrets: [link] });
 }

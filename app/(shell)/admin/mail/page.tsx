@@ -14,7 +14,7 @@ export default async function MailPage() {
     <div className="space-y-6">
       <header>
         <h1 className="page-title">Outbox</h1>
-        <p className="text-ink-soft">The last 100 e-mails Tallyforge sent, newest first. In a local setup they go to the mail sink, not to real inboxes.</p>
+        <p className="text-ink-soft">The last 100 e-mails Tallyforge sent, newest first. In a local setup they go to the mail sink, not to real inboxes. One-time links are masked here: only the recipient's inbox has them.</p>
       </header>
       {messages.length === 0 ? <p className="card text-ink-soft">No e-mail has been sent yet.</p> : null}
       <ul className="space-y-3">

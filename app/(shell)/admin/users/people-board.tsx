@@ -41,9 +41,11 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
     setNotice(res.ok ? `${user.name} is signed out on ${res.data.ended === 1 ? '1 device' : `${res.data.ended} devices`}.` : res.message);
   }
 
-  async function resend(user: UserDto) {
-    const res = await apiFetch<{ mail: string }>(`/api/v1/users/${user.id}/invitation`, { method: 'POST' });
-    setNotice(res.ok ? `A new invitation went to ${user.email} (${res.data.mail}).` : res.message);
+  async function sendLink(user: UserDto) {
+    const res = await apiFetch<{ mail: string; kind: 'invitation' | 'password_reset' }>(`/api/v1/users/${user.id}/invitation`, { method: 'POST' });
+    if (!res.ok) return setNotice(res.message);
+    const what = res.data.kind === 'password_reset' ? 'A password reset link' : 'A new invitation';
+    setNotice(res.data.mail === 'sent' ? `${what} went to ${user.email}; only they can open it.` : `${what} for ${user.email} could not be sent (${res.data.mail}); see the outbox.`);
   }
 
   // Making someone an administrator gives them every permission: asked first. Other roles change at once.
@@ -80,7 +82,7 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
       headerName: 'Actions',
       sortable: false,
       filter: false,
-      minWidth: 340,
+      minWidth: 440,
       cellRenderer: (p: ICellRendererParams<UserDto>) => {
         const u = p.data;
         if (!u || u.id === meId) return null;
@@ -95,7 +97,10 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
               <button type="button" className="text-forge hover:underline" onClick={() => setPending({ question: `Sign ${u.name} out on every device? Whatever they are doing unsaved is lost; they can sign in again.`, yes: 'Yes, sign out everywhere', onConfirm: () => signOutEverywhere(u) })}>Sign out everywhere</button>
             ) : null}
             {u.status === 'invited' ? (
-              <button type="button" className="text-forge hover:underline" onClick={() => resend(u)}>Send link again</button>
+              <button type="button" className="text-forge hover:underline" onClick={() => sendLink(u)}>Send link again</button>
+            ) : null}
+            {u.status === 'active' ? (
+              <button type="button" className="text-forge hover:underline" onClick={() => setPending({ question: `Mail ${u.name} a link to choose a new password? Their current password keeps working until they use it.`, yes: 'Yes, send the link', onConfirm: () => sendLink(u) })}>Reset password</button>
             ) : null}
           </span>
         );

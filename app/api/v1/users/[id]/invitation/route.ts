@@ -1,7 +1,7 @@
 import { route } from '@/server/http/route';
 import { idParamSchema } from '@/server/schemas/common';
-import { resendInvitation } from '@/server/services/users/resend-invitation';
+import { sendPasswordLink } from '@/server/services/users/send-password-link';
 
 export const POST = route({ access: 'admin.manage', params: idParamSchema }, async ({ params, user }) =>
-  resendInvitation({ userId: params.id, by: user }),
+  sendPasswordLink({ userId: params.id, by: user }),
 );
