@@ -1,6 +1,7 @@
 import { NextResponse, type NextRequest } from 'next/server';
 import { sealData, unsealData } from 'iron-session';
 import { isIdleExpired, REFRESH_AFTER_MS, SESSION_COOKIE, sessionOptions, type SessionData } from '@/server/auth/session-options';
+import { isCrossSite } from '@/server/http/reject-cross-site';
 
 const PUBLIC_PAGES = ['/sign-in', '/set-password'];
 
@@ -26,6 +27,11 @@ export async function proxy(req: NextRequest): Promise<NextResponse> {
   // (it fails decoding the [id] before any handler runs): API callers get the usual JSON 400.
   if (isApi && !decodes(pathname)) {
     return NextResponse.json({ error: { code: 'bad_request', message: 'The address is not valid (bad percent-encoding)' } }, { status: 400 });
+  }
+
+  // A server action posted from another site: refused here with 403 (Next's own check would answer 500).
+  if (!isApi && req.headers.has('next-action') && isCrossSite(req)) {
+    return new NextResponse('Cross-site requests are not accepted', { status: 403, headers: { 'content-type': 'text/plain; charset=utf-8' } });
   }
 
   if (!live && !isApi && !PUBLIC_PAGES.includes(pathname)) {
