@@ -4,7 +4,7 @@
 #      counting grid against an independent simulator (no database; builds if needed);
 #   2. every scripts/bench/db-*.ts against a throwaway database on its own MariaDB (.data/bench,
 #      port TF_BENCH_DB_PORT or 3329); each appends to bench-results/<name>.json. db-load.ts starts
-#      its own `next start` on the build.
+#      its own app server on the build.
 source "$(dirname "$0")/lib.sh"
 cd "$ROOT"
 ensure_node_modules

@@ -1,4 +1,4 @@
-// One production `next start` on a free loopback port, for the API and browser tests and for the load
+// One production app server (scripts/serve.ts, as `npm start` runs it) on a free loopback port, for the API and browser tests and for the load
 // bench. The caller has already migrated and built; it passes the environment the app should see.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { createWriteStream, mkdirSync } from 'node:fs';
@@ -22,9 +22,9 @@ export async function freePort(): Promise<number> {
 export async function startApp(env: Record<string, string>, logDir: string): Promise<{ url: string; child: ChildProcess }> {
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
-  const child = spawn(path.join(root, 'node_modules/.bin/next'), ['start', '-p', String(port), '-H', '127.0.0.1'], {
+  const child = spawn(process.execPath, ['--import', 'tsx', 'scripts/serve.ts'], {
     cwd: root,
-    env: { ...process.env, APP_URL: url, ...env, PORT: String(port) },
+    env: { ...process.env, APP_URL: url, HOST: '127.0.0.1', ...env, PORT: String(port) },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   // Never outlive the process that started it, even when that one ends without cleaning up
@@ -42,7 +42,7 @@ export async function startApp(env: Record<string, string>, logDir: string): Pro
   child.stdout?.on('data', keep);
   child.stderr?.on('data', keep);
   for (let i = 0; i < 200; i++) {
-    if (child.exitCode !== null) throw new Error(`next start exited early:\n${output}`);
+    if (child.exitCode !== null) throw new Error(`the app server exited early:\n${output}`);
     try {
       const res = await fetch(`${url}/api/v1/health`);
       if (res.ok) return { url, child };
@@ -52,5 +52,5 @@ export async function startApp(env: Record<string, string>, logDir: string): Pro
     await new Promise((r) => setTimeout(r, 150));
   }
   child.kill('SIGKILL');
-  throw new Error(`next start did not answer in time:\n${output}`);
+  throw new Error(`the app server did not answer in time:\n${output}`);
 }

@@ -33,7 +33,7 @@ kill_pidfile "$run/app.pid"
 cleanup() { kill_pidfile "$run/app.pid"; kill_pidfile "$run/fakes.pid"; db_stop dev; }
 trap cleanup INT TERM
 
-"$ROOT/node_modules/.bin/next" start -p "$PORT" -H "${HOST:-127.0.0.1}" &
+HOST="${HOST:-127.0.0.1}" node --import tsx scripts/serve.ts &
 echo $! >"$run/app.pid"
 for _ in $(seq 1 100); do curl -fsS "http://127.0.0.1:$PORT/api/v1/health" >/dev/null 2>&1 && break; sleep 0.3; done
 

@@ -14,6 +14,12 @@ const envSchema = z.object({
   // Set when the app is reached over https (directly or behind a proxy): cookies get Secure.
   SECURE_COOKIES: z.enum(['0', '1']).default('0'),
   APP_URL: z.string().url().default('http://localhost:3000'),
+  // Reverse proxies whose X-Forwarded-For is believed: addresses or CIDR ranges, comma-separated.
+  // Empty: the address a request came from is the socket's, whatever headers it carries.
+  TRUSTED_PROXIES: z
+    .string()
+    .default('')
+    .transform((v) => v.split(',').map((s) => s.trim()).filter(Boolean)),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().positive().default(2525),
   SMTP_USER: z.string().optional(),

@@ -1,10 +1,19 @@
 import 'server-only';
 import type { NextRequest } from 'next/server';
+import proxyaddr from 'proxy-addr';
+import { PEER_HEADER } from '@/lib/peer-header';
+import { getEnv } from '../env';
 
-// The address the sign-in throttle counts against. Next fills X-Forwarded-For from the socket
-// only when the request has none, so without a reverse proxy that overwrites the header a client
-// can choose this value; the per-account limit holds regardless (see README, "Running it for real").
+let trust: ((addr: string, i: number) => boolean) | undefined;
+
+// The address the sign-in limits count against: the socket's (set by scripts/serve.ts), or, when that
+// is one of TRUSTED_PROXIES, the nearest X-Forwarded-For entry that is not (proxy-addr's rule).
 export function clientAddress(req: NextRequest): string {
-  const first = (req.headers.get('x-forwarded-for') ?? '').split(',')[0]?.trim();
-  return first ? first.slice(0, 64) : 'unknown';
+  trust ??= proxyaddr.compile(getEnv().TRUSTED_PROXIES);
+  const peer = req.headers.get(PEER_HEADER);
+  if (!peer) return 'unknown';
+  const forwarded = req.headers.get('x-forwarded-for') ?? undefined;
+  // proxy-addr reads a Node request; these are the only two things it looks at.
+  const nodeLike = { socket: { remoteAddress: peer }, connection: { remoteAddress: peer }, headers: { 'x-forwarded-for': forwarded } };
+  return proxyaddr(nodeLike as unknown as Parameters<typeof proxyaddr>[0], trust).slice(0, 64);
 }

@@ -1,5 +1,6 @@
 import 'server-only';
 import { log } from '../log';
+import { pruneSignInThrottles } from '../services/auth/sign-in-throttle';
 import { failInterruptedPrintJobs } from '../services/print-jobs/fail-interrupted-print-jobs';
 import { runCalibrationReminders } from './calibration-reminders';
 import { pruneSessions } from './prune-sessions';
@@ -18,4 +19,5 @@ export function startScheduler(): void {
   every(60 * MINUTE, 'calibration reminders', () => runCalibrationReminders());
   every(5 * MINUTE, 'interrupted print jobs', () => failInterruptedPrintJobs());
   every(60 * MINUTE, 'old sessions', () => pruneSessions());
+  every(60 * MINUTE, 'old sign-in counts', () => pruneSignInThrottles());
 }

@@ -1,7 +1,21 @@
+import http from 'node:http';
 import { describe, expect, it } from 'vitest';
 import { User } from '../../models';
 import { createUser, TEST_PASSWORD, testDb, unique } from '../helpers/db';
+import { startAnotherApp } from '../helpers/app-process';
 import { anonymous, signedIn } from '../helpers/http';
+
+// A JSON POST from a chosen local address (supertest cannot choose one); answers the status.
+function postFrom(localAddress: string, url: string, body: unknown, headers: Record<string, string>): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const req = http.request(url, { method: 'POST', localAddress, headers: { 'Content-Type': 'application/json', ...headers } }, (res) => {
+      res.resume();
+      resolve(res.statusCode ?? 0);
+    });
+    req.on('error', reject);
+    req.end(JSON.stringify(body));
+  });
+}
 
 describe('session API', () => {
   it('signs in with e-mail and password and sets a sealed httpOnly SameSite=Lax cookie', async () => {
@@ -60,31 +74,70 @@ describe('session API', () => {
     expect(again.status).toBe(401);
   });
 
-  it('blocks an account after 5 failed sign-ins, even with the right password, and says so', async () => {
+  const someAddress = (prefix: string) => `${prefix}.${Math.floor(Math.random() * 250)}.${Math.floor(Math.random() * 250)}`;
+  const tryPassword = (email: string, password: string, address: string) =>
+    anonymous().post('/api/v1/session').set('X-Forwarded-For', address).send({ email, password });
+
+  it('blocks an account from the address that sent 5 wrong passwords; its owner still signs in from another', async () => {
     testDb();
     const user = await createUser('quality');
-    const address = `10.99.${Math.floor(Math.random() * 250)}.1`;
-    for (let i = 0; i < 5; i++) {
-      const res = await anonymous().post('/api/v1/session').set('X-Forwarded-For', address).send({ email: user.email, password: `wrong-${i}` });
-      expect(res.status).toBe(401);
-    }
-    const blocked = await anonymous().post('/api/v1/session').set('X-Forwarded-For', address).send({ email: user.email, password: TEST_PASSWORD });
+    const address = someAddress('10.99');
+    for (let i = 0; i < 5; i++) expect((await tryPassword(user.email, `wrong-${i}`, address)).status).toBe(401);
+    const blocked = await tryPassword(user.email, TEST_PASSWORD, address);
     expect(blocked.status).toBe(429);
     expect(blocked.body.error.code).toBe('rate_limited');
     expect(blocked.body.error.message).toMatch(/Try again in \d+ minute/);
     expect(Number(blocked.headers['retry-after'])).toBeGreaterThan(0);
+    expect((await tryPassword(user.email, TEST_PASSWORD, someAddress('10.96'))).status).toBe(200);
   });
 
-  it('blocks an address after 20 failed sign-ins across different accounts', async () => {
-    const address = `10.98.${Math.floor(Math.random() * 250)}.7`;
-    for (let i = 0; i < 20; i++) {
-      await anonymous().post('/api/v1/session').set('X-Forwarded-For', address).send({ email: `${unique('spray')}@example.test`, password: 'guess' });
-    }
+  it('lets exactly 5 of 40 parallel wrong passwords from one address be checked; the rest are refused', async () => {
     const user = await createUser('planner');
-    const blocked = await anonymous().post('/api/v1/session').set('X-Forwarded-For', address).send({ email: user.email, password: TEST_PASSWORD });
+    const address = someAddress('10.95');
+    const answers = await Promise.all(Array.from({ length: 40 }, (_, i) => tryPassword(user.email, `guess-${i}`, address)));
+    const statuses = answers.map((r) => r.status).sort();
+    expect(statuses.filter((s) => s === 401)).toHaveLength(5);
+    expect(statuses.filter((s) => s === 429)).toHaveLength(35);
+  });
+
+  it('slows an account that wrong passwords from many addresses hit, but takes its right password', async () => {
+    const user = await createUser('clerk');
+    for (let i = 0; i < 11; i++) expect((await tryPassword(user.email, `spray-${i}`, someAddress('10.94'))).status).toBe(401);
+    const started = Date.now();
+    const owner = await tryPassword(user.email, TEST_PASSWORD, someAddress('10.93'));
+    expect(owner.status).toBe(200);
+    // Eleven wrong passwords are one over the quiet limit of ten: the owner waited the one-second step.
+    expect(Date.now() - started).toBeGreaterThanOrEqual(1_000);
+    // Signing in starts the account clean again.
+    const next = Date.now();
+    expect((await tryPassword(user.email, TEST_PASSWORD, someAddress('10.93'))).status).toBe(200);
+    expect(Date.now() - next).toBeLessThan(1_000);
+  });
+
+  it('blocks an address after 20 tries across different accounts; right passwords do not count', async () => {
+    const address = someAddress('10.98');
+    const user = await createUser('planner');
+    for (let i = 0; i < 3; i++) expect((await tryPassword(user.email, TEST_PASSWORD, address)).status).toBe(200);
+    for (let i = 0; i < 20; i++) expect((await tryPassword(`${unique('spray')}@example.test`, 'guess', address)).status).toBe(401);
+    const blocked = await tryPassword(user.email, TEST_PASSWORD, address);
     expect(blocked.status).toBe(429);
-    const elsewhere = await anonymous().post('/api/v1/session').set('X-Forwarded-For', '10.97.0.1').send({ email: user.email, password: TEST_PASSWORD });
-    expect(elsewhere.status).toBe(200);
+    expect((await tryPassword(user.email, TEST_PASSWORD, someAddress('10.97'))).status).toBe(200);
+  });
+
+  it('believes X-Forwarded-For only from a trusted proxy: without one, a client cannot pick its address', { timeout: 60_000 }, async () => {
+    const app = await startAnotherApp({ TRUSTED_PROXIES: '' });
+    try {
+      const user = await createUser('operator');
+      // Sent from a loopback address of this test's own, so its tries count against no one else's.
+      const from = someAddress('127.0');
+      const send = (password: string, claimed: string) => postFrom(from, `${app.url}/api/v1/session`, { email: user.email, password }, { 'X-Forwarded-For': claimed });
+      for (let i = 0; i < 5; i++) expect(await send(`wrong-${i}`, `10.92.0.${i}`)).toBe(401);
+      // Every try came from the same socket address, whatever the header said: that pair is blocked.
+      expect(await send(TEST_PASSWORD, '10.92.1.1')).toBe(429);
+      expect((await tryPassword(user.email, TEST_PASSWORD, someAddress('10.91'))).status).toBe(200);
+    } finally {
+      app.child.kill('SIGKILL');
+    }
   });
 
   it('refuses state-changing requests sent from another site', async () => {
@@ -93,5 +146,16 @@ describe('session API', () => {
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('cross_site');
     expect(res.headers['set-cookie']).toBeUndefined();
+  });
+
+  it('does not take X-Forwarded-Host as this site: a forged one beside a foreign Origin is refused', async () => {
+    const user = await createUser('planner');
+    const res = await anonymous()
+      .post('/api/v1/session')
+      .set('Origin', 'https://evil.example')
+      .set('X-Forwarded-Host', 'evil.example')
+      .send({ email: user.email, password: TEST_PASSWORD });
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe('cross_site');
   });
 });

@@ -1,4 +1,4 @@
-// Starts the local SMTP sink, the IPP printer fake and one production `next start` against the test database,
+// Starts the local SMTP sink, the IPP printer fake and one production app server (scripts/serve.ts) against the test database,
 // and hands their addresses to the tests. `npm test` has already migrated and built.
 import type { ChildProcess } from 'node:child_process';
 import { mkdtempSync } from 'node:fs';
@@ -24,7 +24,8 @@ export async function setup(project: TestProject): Promise<void> {
   printer = await startIppPrinter({ port: 0, dir: printDir });
   // TZ=UTC: the server's zone, and so the site's default, is UTC in tests (helpers/days.ts counts
   // UTC days); tests of other zones set the site's own.
-  const appEnv = { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(sink.port), PRINTER_URL: printer.url, TF_JOBS: '0', TZ: 'UTC' };
+  // The tests stand in for a reverse proxy on loopback, so their X-Forwarded-For names the client.
+  const appEnv = { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(sink.port), PRINTER_URL: printer.url, TF_JOBS: '0', TZ: 'UTC', TRUSTED_PROXIES: '127.0.0.1' };
   const started = await startApp(appEnv, 'test-results');
   app = started.child;
   project.provide('baseUrl', started.url);

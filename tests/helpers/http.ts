@@ -1,4 +1,4 @@
-// Real HTTP against the `next start` that global-setup launched.
+// Real HTTP against the app server that global-setup launched.
 import request from 'supertest';
 import { inject } from 'vitest';
 import type { Role } from '../../lib/roles';

@@ -1,53 +1,123 @@
 import 'server-only';
-import { QueryTypes } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
 
-// Failed sign-ins allowed per rolling window before a key is blocked (common practice values).
-export const THROTTLE = { windowMinutes: 15, blockMinutes: 15, accountLimit: 5, addressLimit: 20 } as const;
+// Sign-in limits (common practice values). Attempts are counted per address and per (account, address)
+// pair before the password is checked, so concurrent tries cannot slip past a limit; past it, that pair
+// or address is blocked. Across addresses an account is only slowed, never blocked, so wrong passwords
+// sent from elsewhere cannot keep its owner out.
+export const THROTTLE = {
+  windowMinutes: 15,
+  blockMinutes: 15,
+  pairLimit: 5,
+  addressLimit: 20,
+  /** Wrong passwords for one account, from any address, before each further try is slowed. */
+  accountQuietLimit: 10,
+  accountDelayStepMs: 1_000,
+  accountDelayMaxMs: 8_000,
+} as const;
 
-export interface ThrottleKey {
-  key: string;
-  limit: number;
+export interface ThrottleKeys {
+  address: string;
+  pair: string;
+  account: string;
 }
 
-export function throttleKeys(email: string, address: string): ThrottleKey[] {
-  return [
-    { key: `account:${email.toLowerCase()}`, limit: THROTTLE.accountLimit },
-    { key: `address:${address}`, limit: THROTTLE.addressLimit },
-  ];
+export function throttleKeys(email: string, address: string): ThrottleKeys {
+  const account = email.trim().toLowerCase();
+  return { address: `address:${address}`, pair: `pair:${account}|${address}`, account: `account:${account}` };
 }
 
-export async function assertNotThrottled(keys: ThrottleKey[]): Promise<void> {
-  const rows = await getDb().query<{ seconds: number }>(
-    `SELECT TIMESTAMPDIFF(SECOND, UTC_TIMESTAMP(), blocked_until) AS seconds FROM sign_in_throttles
-      WHERE scope_key IN (:keys) AND blocked_until > UTC_TIMESTAMP() ORDER BY blocked_until DESC LIMIT 1`,
-    { replacements: { keys: keys.map((k) => k.key) }, type: QueryTypes.SELECT },
+// A window that has run out, with no block in force, starts again. MariaDB assigns left to right, so
+// each later assignment sees the new values of the earlier ones; `expired` is read before any is made.
+const EXPIRED = `(window_start < UTC_TIMESTAMP() - INTERVAL :window MINUTE AND (blocked_until IS NULL OR blocked_until <= UTC_TIMESTAMP()))`;
+
+async function countTry(key: string, limit: number, transaction?: Transaction): Promise<void> {
+  await getDb().query(
+    `INSERT INTO sign_in_throttles (scope_key, failures, window_start, blocked_until) VALUES (:key, 1, UTC_TIMESTAMP(), NULL)
+     ON DUPLICATE KEY UPDATE
+       failures = IF(${EXPIRED}, 1, failures + 1),
+       blocked_until = IF(${EXPIRED}, NULL,
+         IF(failures > :limit AND (blocked_until IS NULL OR blocked_until <= UTC_TIMESTAMP()), UTC_TIMESTAMP() + INTERVAL :block MINUTE, blocked_until)),
+       window_start = IF(${EXPIRED}, UTC_TIMESTAMP(), window_start)`,
+    { replacements: { key, limit, window: THROTTLE.windowMinutes, block: THROTTLE.blockMinutes }, transaction },
   );
-  if (rows.length) {
-    const seconds = Math.max(1, Number(rows[0].seconds));
-    throw new AppError('rate_limited', `Too many failed sign-ins. Try again in ${Math.ceil(seconds / 60)} minute(s).`, {
-      headers: { 'Retry-After': String(seconds) },
-    });
-  }
 }
 
-// One atomic upsert per key: the window restarts when it has run out, the block starts at the limit.
-// MariaDB applies the assignments left to right, so blocked_until sees the new failure count.
-export async function recordFailure(keys: ThrottleKey[]): Promise<void> {
+interface Row {
+  failures: number;
+  blockedSeconds: number | null;
+  live: number;
+}
+
+async function readRow(key: string, transaction?: Transaction): Promise<Row | undefined> {
+  const rows = await getDb().query<Row>(
+    `SELECT failures,
+            IF(blocked_until > UTC_TIMESTAMP(), TIMESTAMPDIFF(SECOND, UTC_TIMESTAMP(), blocked_until), NULL) AS blockedSeconds,
+            NOT ${EXPIRED} AS live
+       FROM sign_in_throttles WHERE scope_key = :key`,
+    { replacements: { key, window: THROTTLE.windowMinutes }, type: QueryTypes.SELECT, transaction },
+  );
+  return rows[0];
+}
+
+function refuse(seconds: number): never {
+  const wait = Math.max(1, Number(seconds));
+  throw new AppError('rate_limited', `Too many sign-in attempts from here. Try again in ${Math.ceil(wait / 60)} minute(s).`, {
+    headers: { 'Retry-After': String(wait) },
+  });
+}
+
+/** How long a try at an account that wrong passwords from anywhere have been hitting waits first. */
+export function accountDelayMs(recentFailures: number): number {
+  const over = recentFailures - THROTTLE.accountQuietLimit;
+  return over <= 0 ? 0 : Math.min(THROTTLE.accountDelayMaxMs, over * THROTTLE.accountDelayStepMs);
+}
+
+/**
+ * Counts this try against the address and the pair, refusing it (429) once either is past its limit.
+ * Each key's count and check happen under its row lock, so N parallel tries let exactly the limit through.
+ * Returns how long to wait before checking the password.
+ */
+export async function admitSignIn(keys: ThrottleKeys): Promise<number> {
+  return getDb().transaction(async (transaction) => {
+    for (const [key, limit] of [
+      [keys.address, THROTTLE.addressLimit],
+      [keys.pair, THROTTLE.pairLimit],
+    ] as const) {
+      await countTry(key, limit, transaction);
+      const row = (await readRow(key, transaction))!;
+      if (row.blockedSeconds !== null) refuse(row.blockedSeconds);
+    }
+    const account = await readRow(keys.account, transaction);
+    return account && Number(account.live) ? accountDelayMs(Number(account.failures)) : 0;
+  });
+}
+
+/** A wrong password: counted against the account across addresses (it slows, never blocks). */
+export async function recordWrongPassword(keys: ThrottleKeys): Promise<void> {
+  await getDb().query(
+    `INSERT INTO sign_in_throttles (scope_key, failures, window_start, blocked_until) VALUES (:key, 1, UTC_TIMESTAMP(), NULL)
+     ON DUPLICATE KEY UPDATE failures = IF(${EXPIRED}, 1, failures + 1), window_start = IF(${EXPIRED}, UTC_TIMESTAMP(), window_start)`,
+    { replacements: { key: keys.account, window: THROTTLE.windowMinutes } },
+  );
+}
+
+/** A right password: the pair and account start clean, and the try is not held against the address. */
+export async function recordSignedIn(keys: ThrottleKeys): Promise<void> {
   const db = getDb();
-  for (const { key, limit } of keys) {
-    await db.query(
-      `INSERT INTO sign_in_throttles (scope_key, failures, window_start, blocked_until) VALUES (:key, 1, UTC_TIMESTAMP(), NULL)
-       ON DUPLICATE KEY UPDATE
-         failures = IF(window_start < UTC_TIMESTAMP() - INTERVAL :window MINUTE, 1, failures + 1),
-         window_start = IF(window_start < UTC_TIMESTAMP() - INTERVAL :window MINUTE, UTC_TIMESTAMP(), window_start),
-         blocked_until = IF(failures >= :limit, UTC_TIMESTAMP() + INTERVAL :block MINUTE, blocked_until)`,
-      { replacements: { key, limit, window: THROTTLE.windowMinutes, block: THROTTLE.blockMinutes } },
-    );
-  }
+  await db.query('DELETE FROM sign_in_throttles WHERE scope_key IN (:keys)', { replacements: { keys: [keys.pair, keys.account] } });
+  await db.query('UPDATE sign_in_throttles SET failures = GREATEST(failures - 1, 0) WHERE scope_key = :key', {
+    replacements: { key: keys.address },
+  });
 }
 
-export async function clearFailures(key: string): Promise<void> {
-  await getDb().query('DELETE FROM sign_in_throttles WHERE scope_key = :key', { replacements: { key } });
+/** Rows whose window and block ran out a day ago say nothing any more. */
+export async function pruneSignInThrottles(): Promise<number> {
+  const [, meta] = await getDb().query(
+    `DELETE FROM sign_in_throttles
+      WHERE window_start < UTC_TIMESTAMP() - INTERVAL 1 DAY AND (blocked_until IS NULL OR blocked_until < UTC_TIMESTAMP())`,
+  );
+  return (meta as { affectedRows?: number }).affectedRows ?? 0;
 }

@@ -1,0 +1,44 @@
+// The app's HTTP server in production: Next.js's own request handler behind a plain Node server, so that
+// every request carries the address of the socket it came in on. Next keeps a client's X-Forwarded-For
+// as sent, which would let anyone choose the address the sign-in limits count against.
+// Run with `node --import tsx scripts/serve.ts`; PORT and HOST as for `next start`.
+import http from 'node:http';
+import path from 'node:path';
+import next from 'next';
+import { PEER_HEADER } from '../lib/peer-header';
+
+const port = Number(process.env.PORT ?? 3000);
+const hostname = process.env.HOST ?? '127.0.0.1';
+// instrumentation.ts reads it: serving beyond loopback is refused while demo passwords are known.
+process.env.HOST = hostname;
+// How long a stop waits for requests in flight before it exits anyway.
+const STOP_GRACE_MS = 30_000;
+
+async function main(): Promise<void> {
+  const app = next({ dev: false, dir: path.resolve(__dirname, '..'), hostname, port });
+  await app.prepare();
+  const handle = app.getRequestHandler();
+  const server = http.createServer((req, res) => {
+    req.headers[PEER_HEADER] = req.socket.remoteAddress ?? '';
+    void handle(req, res);
+  });
+  server.listen(port, hostname, () => console.log(`Tallyforge serving on http://${hostname}:${port}`));
+
+  // Stop as `next start` does: take no new connections, let requests in flight finish, then exit with the
+  // signal's code. Kept-alive connections are closed as soon as they fall idle.
+  const stop = (code: number) => {
+    const idle = setInterval(() => server.closeIdleConnections(), 100);
+    server.close(() => {
+      clearInterval(idle);
+      process.exit(code);
+    });
+    setTimeout(() => process.exit(code), STOP_GRACE_MS).unref();
+  };
+  process.once('SIGTERM', () => stop(143));
+  process.once('SIGINT', () => stop(130));
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});
