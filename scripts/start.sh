@@ -22,9 +22,13 @@ if [ "$SMTP_HOST" = "127.0.0.1" ] && ! { [ -f "$run/fakes.pid" ] && kill -0 "$(c
   echo $! >"$run/fakes.pid"
 fi
 
+export HOST="${HOST:-127.0.0.1}"
+# The demo's sign-ins have a documented password: it loads by itself only when served on this machine.
+case "$HOST" in 127.*|localhost|::1) DEMO="${DEMO:-1}" ;; *) DEMO="${DEMO:-0}" ;; esac
+
 log "migrating"
 $TSX scripts/migrate.ts
-$TSX scripts/seed-demo.ts
+if [ "$DEMO" = 1 ]; then $TSX scripts/seed-demo.ts; else log "demo not loaded (DEMO=0)"; fi
 
 log "building (next build)"
 "$ROOT/node_modules/.bin/next" build >"$ROOT/.data/dev/build.log" 2>&1 || { tail -40 "$ROOT/.data/dev/build.log"; exit 1; }
@@ -33,16 +37,26 @@ kill_pidfile "$run/app.pid"
 cleanup() { kill_pidfile "$run/app.pid"; kill_pidfile "$run/fakes.pid"; db_stop dev; }
 trap cleanup INT TERM
 
-HOST="${HOST:-127.0.0.1}" node --import tsx scripts/serve.ts &
+node --import tsx scripts/serve.ts &
 echo $! >"$run/app.pid"
-for _ in $(seq 1 100); do curl -fsS "http://127.0.0.1:$PORT/api/v1/health" >/dev/null 2>&1 && break; sleep 0.3; done
+for _ in $(seq 1 100); do
+  curl -fsS "http://127.0.0.1:$PORT/api/v1/health" >/dev/null 2>&1 && break
+  # It refused to serve (it said why above) or crashed.
+  kill -0 "$(cat "$run/app.pid")" 2>/dev/null || { cleanup; exit 1; }
+  sleep 0.3
+done
 
+if [ "$DEMO" = 1 ]; then
+  signins="  Demo sign-ins (password: ${DEMO_PASSWORD:-tallyforge-demo}):
+    admin@tallyforge.test     operator@tallyforge.test   planner@tallyforge.test
+    clerk@tallyforge.test     quality@tallyforge.test"
+else
+  signins="  No demo. First administrator: npm run create-admin -- --email you@example.com --name \"Your Name\""
+fi
 cat <<MSG
 
   Tallyforge is running at $APP_URL
-  Demo sign-ins (password: ${DEMO_PASSWORD:-tallyforge-demo}):
-    admin@tallyforge.test     operator@tallyforge.test   planner@tallyforge.test
-    clerk@tallyforge.test     quality@tallyforge.test
+$signins
   E-mail goes to the local sink: .data/dev/mail (admins also see it under Outbox).
   Stop everything with: npm run stop
 

@@ -10,5 +10,3 @@ export const DEMO_USERS: Array<{ role: Role; name: string }> = [
   { role: 'clerk', name: 'Priya Dunmore' },
   { role: 'quality', name: 'Elliot Vance' },
 ];
-
-export const demoEmail = (role: Role): string => `${role}@tallyforge.test`;

@@ -2,7 +2,8 @@
 import { SiteSettings, User } from '../../models';
 import { hashPassword } from '../../server/auth/passwords';
 import { getDb } from '../../server/db';
-import { DEMO_SITE_NAME, DEMO_USERS, demoEmail } from './demo-company';
+import { demoEmail } from '../../lib/demo-accounts';
+import { DEMO_SITE_NAME, DEMO_USERS } from './demo-company';
 import { loadDemo } from './load-demo';
 
 export async function seedDemoData(password: string): Promise<'loaded' | 'skipped'> {
