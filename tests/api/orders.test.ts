@@ -101,6 +101,26 @@ describe('kits and build orders', () => {
     expect(await StockReservation.sum('quantity', { where: { partId: spring.id, status: 'active' } })).toBe(100);
   });
 
+  it('answers 16 parallel releases sharing parts with 200 (or 503 to try again), never 500, and reserves exactly what the 200s hold', { timeout: 60_000 }, async () => {
+    const planner = await signedIn('planner');
+    // Three parts in every kit, listed in different orders, so the releases meet on the same rows from different sides.
+    const [a, b, c] = [await createPart(), await createPart(), await createPart()];
+    for (const part of [a, b, c]) await stockPart(part.id, 100_000);
+    const kits = [
+      await makeKit(planner.agent, [{ id: a.id, quantity: 1 }, { id: b.id, quantity: 1 }, { id: c.id, quantity: 1 }]),
+      await makeKit(planner.agent, [{ id: c.id, quantity: 1 }, { id: a.id, quantity: 1 }, { id: b.id, quantity: 1 }]),
+    ];
+    const orders = [];
+    for (let i = 0; i < 16; i++) orders.push(await makeOrder(planner.agent, kits[i % 2].id, 3));
+    const results = await Promise.all(orders.map((o) => planner.agent.post(`/api/v1/orders/${o.id}/release`).send({ version: o.version })));
+    const statuses = results.map((r) => r.status);
+    expect(statuses.every((s) => s === 200 || s === 503), statuses.join(',')).toBe(true);
+    for (const r of results.filter((x) => x.status === 503)) expect(Number(r.headers['retry-after'])).toBeGreaterThan(0);
+    const released = statuses.filter((s) => s === 200).length;
+    testDb();
+    for (const part of [a, b, c]) expect((await PartStock.findByPk(part.id))!.reserved).toBe(3 * released);
+  });
+
   it('fills a line from bench captures, shows it in the queue, completes, and books the consumption', async () => {
     const planner = await signedIn('planner');
     const operator = await signedIn('operator');

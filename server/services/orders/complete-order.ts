@@ -9,6 +9,7 @@ import type { CompleteOrderInput, OrderDto } from '../../schemas/orders';
 import { log } from '../../log';
 import { printKitLabel } from '../print-jobs/print-kit-label';
 import { getOrder } from './get-order';
+import { lockOrderStock } from './order-availability';
 
 // Completion turns the reservation into a recorded consumption: what was counted into kits leaves
 // the part's bins (largest first), and the hold on stock ends. All in one transaction.
@@ -25,6 +26,7 @@ export async function completeOrder({ orderId, input, by }: { orderId: number; i
       if (notIn.length && !input.overrideReason) {
         throw new AppError('rule_violated', `${notIn.length} line(s) are not in tolerance; count them, or complete with a reason`, { fields: { overrideReason: 'needed while lines are not in tolerance' } });
       }
+      await lockOrderStock(orderId, transaction);
       await db.query(
         `UPDATE part_stock ps JOIN stock_reservations r ON r.part_id = ps.part_id JOIN build_order_lines l ON l.id = r.order_line_id
             SET ps.reserved = ps.reserved - r.quantity, ps.on_hand = ps.on_hand - l.counted, r.status = 'consumed', r.updated_at = UTC_TIMESTAMP()

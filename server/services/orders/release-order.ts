@@ -16,6 +16,11 @@ export async function releaseOrder({ orderId, version, by }: { orderId: number; 
   const db = getDb();
   let shortages: AvailabilityLine[] = [];
   let number = '';
+  // A part never stocked gets its zero row first, in a statement of its own: inside the release it
+  // would hold shared locks that two releases then both try to raise to exclusive (a sure deadlock).
+  await db.query(`INSERT IGNORE INTO part_stock (part_id, on_hand, reserved) SELECT part_id, 0, 0 FROM build_order_lines WHERE order_id = :orderId`, {
+    replacements: { orderId },
+  });
   try {
     await retryOnDeadlock(() => db.transaction(async (transaction) => {
       const order = await BuildOrder.findByPk(orderId, { transaction, lock: transaction.LOCK.UPDATE });
@@ -24,10 +29,6 @@ export async function releaseOrder({ orderId, version, by }: { orderId: number; 
       if (order.version !== version) throw new AppError('stale_version', 'Someone else changed this order; reload and try again');
       if (order.status !== 'draft') throw new AppError('rule_violated', `Only a draft order can be released; ${order.number} is ${order.status.replace('_', ' ')}`);
       const replacements = { orderId };
-      await db.query(
-        `INSERT IGNORE INTO part_stock (part_id, on_hand, reserved) SELECT part_id, 0, 0 FROM build_order_lines WHERE order_id = :orderId`,
-        { replacements, transaction },
-      );
       const lines = await orderAvailability(orderId, { transaction, lockRows: true });
       shortages = lines.filter((l) => l.shortage > 0);
       if (shortages.length) {
