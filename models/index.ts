@@ -19,6 +19,7 @@ import { Part } from './part';
 import { PartStock } from './part-stock';
 import { PieceWeightSample } from './piece-weight-sample';
 import { PrintJob } from './print-job';
+import { RequestKey } from './request-key';
 import { UserSession } from './user-session';
 import { Scale } from './scale';
 import { PasswordToken } from './password-token';
@@ -48,6 +49,7 @@ export {
   PasswordToken,
   PieceWeightSample,
   PrintJob,
+  RequestKey,
   UserSession,
   Scale,
   SignInThrottle,
@@ -62,7 +64,7 @@ const initialised = new WeakSet<Sequelize>();
 
 export function initModels(sequelize: Sequelize): void {
   if (initialised.has(sequelize)) return;
-  const models = [User, UserSession, SiteSettings, PasswordToken, SignInThrottle, MailMessage, PrintJob, Scale, Container, Part, PieceWeightSample, CountEvent];
+  const models = [User, UserSession, RequestKey, SiteSettings, PasswordToken, SignInThrottle, MailMessage, PrintJob, Scale, Container, Part, PieceWeightSample, CountEvent];
   const stockModels = [Bin, BinCount, PartStock, StockMovement, Kit, KitComponent, BuildOrder, BuildOrderLine, StockReservation];
   const qualityModels = [TestWeight, CalibrationRecord, JobRun, Audit, AuditItem];
   for (const model of [...models, ...stockModels, ...qualityModels]) {

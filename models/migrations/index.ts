@@ -8,6 +8,7 @@ import * as m0007 from './0007-exact-counts';
 import * as m0008 from './0008-site-time-zone';
 import * as m0009 from './0009-user-sessions';
 import * as m0010 from './0010-mask-mail-links';
+import * as m0011 from './0011-request-keys';
 
 // Ordered list of migrations. Add a file `NNNN-what-it-does.ts` exporting up/down and list it here.
 export const migrations = [
@@ -21,4 +22,5 @@ export const migrations = [
   { name: '0008-site-time-zone', ...m0008 },
   { name: '0009-user-sessions', ...m0009 },
   { name: '0010-mask-mail-links', ...m0010 },
+  { name: '0011-request-keys', ...m0011 },
 ];

@@ -26,12 +26,12 @@ async function kitWithLines(lines: number, by: SessionUser, tag: string): Promis
     Array.from({ length: lines }, (_, i) => ({ partNumber: `BENCH-${tag}-${i}`, description: 'bench part', apwG: null, apwSampleSize: null, pieceSpread: null, photoFile: null })),
   );
   await db.query(`INSERT INTO part_stock (part_id, on_hand, reserved) VALUES ${parts.map((p) => `(${p.id}, 100000000, 0)`).join(',')}`);
-  const kit = await createKit({ input: { code: `BENCH-${tag}`, revision: 'A', description: `${lines}-line bench kit`, components: parts.map((p) => ({ partId: p.id, quantity: 3, toleranceBelow: 0, toleranceAbove: 0 })) } });
+  const { kit } = await createKit({ input: { code: `BENCH-${tag}`, revision: 'A', description: `${lines}-line bench kit`, components: parts.map((p) => ({ partId: p.id, quantity: 3, toleranceBelow: 0, toleranceAbove: 0 })) }, by });
   return kit.id;
 }
 
 async function timedRelease(kitId: number, by: SessionUser): Promise<{ ms: number; queries: number; sql: string[] }> {
-  const order = await createOrder({ input: { kitId, quantity: KITS, dueDate: null }, by });
+  const { order } = await createOrder({ input: { kitId, quantity: KITS, dueDate: null }, by });
   statements = [];
   const start = performance.now();
   await releaseOrder({ orderId: order.id, version: order.version, by });

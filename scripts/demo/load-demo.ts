@@ -52,9 +52,9 @@ export async function loadDemo(people: People): Promise<void> {
   const kits = [];
   for (const k of DEMO_KITS) {
     const components = k.lines.map(([pn, quantity, toleranceBelow, toleranceAbove]) => ({ partId: parts.get(pn)!.id, quantity, toleranceBelow, toleranceAbove }));
-    kits.push(await createKit({ input: { code: k.code, revision: k.revision, description: k.description, components } }));
+    kits.push((await createKit({ input: { code: k.code, revision: k.revision, description: k.description, components }, by: people.planner })).kit);
   }
-  const endcaps = await createOrder({ input: { kitId: kits[0].id, quantity: 40, dueDate: daysFromToday(7) }, by: people.planner });
+  const { order: endcaps } = await createOrder({ input: { kitId: kits[0].id, quantity: 40, dueDate: daysFromToday(7) }, by: people.planner });
   const released = await releaseOrder({ orderId: endcaps.id, version: endcaps.version, by: people.planner });
   await createOrder({ input: { kitId: kits[1].id, quantity: 25, dueDate: daysFromToday(14) }, by: people.planner });
   // 100 drive kits need 200 bearings against 120 in stock: left in draft to show the shortage.

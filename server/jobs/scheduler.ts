@@ -2,6 +2,7 @@ import 'server-only';
 import { log } from '../log';
 import { pruneSignInThrottles } from '../services/auth/sign-in-throttle';
 import { failInterruptedPrintJobs } from '../services/print-jobs/fail-interrupted-print-jobs';
+import { pruneRequestKeys } from '../services/requests/once-per-key';
 import { runCalibrationReminders } from './calibration-reminders';
 import { pruneSessions } from './prune-sessions';
 
@@ -20,4 +21,5 @@ export function startScheduler(): void {
   every(5 * MINUTE, 'interrupted print jobs', () => failInterruptedPrintJobs());
   every(60 * MINUTE, 'old sessions', () => pruneSessions());
   every(60 * MINUTE, 'old sign-in counts', () => pruneSignInThrottles());
+  every(60 * MINUTE, 'old request keys', () => pruneRequestKeys());
 }

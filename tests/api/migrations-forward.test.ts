@@ -1,6 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import { afterAll, describe, expect, it } from 'vitest';
-import { Bin, CountEvent, initModels, MailMessage, Part, PrintJob, Scale, SiteSettings, User, UserSession } from '../../models';
+import { Bin, CountEvent, initModels, MailMessage, Part, PrintJob, RequestKey, Scale, SiteSettings, User, UserSession } from '../../models';
 import { HIDDEN_SECRET } from '../../server/mail/mask-secrets';
 import { createMigrator, migrateUp } from '../../models/migrate';
 import { migrations } from '../../models/migrations';
@@ -60,6 +60,9 @@ const ERA_ROWS: Record<string, (q: QueryInterface) => Promise<void>> = {
   '0010-mask-mail-links': async (q) => {
     await q.bulkInsert('mail_messages', [{ id: 903, kind: 'password_reset', to_address: 'old.hand@upgrade.test', subject: 'Choose a new password', body_text: 'Masked when sent: [one-time link: only the recipient has it]', status: 'sent', error: null, sent_at: now, ...stamps }]);
   },
+  '0011-request-keys': async (q) => {
+    await q.bulkInsert('request_keys', [{ id: 901, user_id: 901, scope: 'orders.create', idem_key: 'upgrade-key-901', fingerprint: 'b'.repeat(64), record_id: 901, created_at: now }]);
+  },
 };
 
 describe('migrations on an existing database with data', () => {
@@ -101,6 +104,7 @@ describe('migrations on an existing database with data', () => {
     expect(await PrintJob.findByPk(901)).toMatchObject({ status: 'sent', labels: 1 });
     expect(await SiteSettings.findByPk(1)).toMatchObject({ timeZone: 'Europe/Vienna', sessionHours: 10, fourEyesVariances: false });
     expect(await UserSession.findByPk(901)).toMatchObject({ userId: 901, endReason: 'signed_out' });
+    expect(await RequestKey.findByPk(901)).toMatchObject({ scope: 'orders.create', recordId: 901 });
     expect((await MailMessage.findByPk(902))!.bodyText).toBe(`Choose:\n\n${HIDDEN_SECRET}\n\nThanks`);
     expect((await MailMessage.findByPk(901))!.bodyText).toBe('Hello');
     const bin = (await Bin.findByPk(901))!;

@@ -7,6 +7,7 @@ import * as yup from 'yup';
 import { BIN_CODE_HINT, parseBinCode } from '@/lib/bin-code';
 import { CYCLE_DAYS } from '@/lib/variance';
 import { apiFetch } from '../../_components/api-client';
+import { useRequestKey } from '../../_components/request-key';
 import { toFormikErrors } from '../../_components/field-errors';
 import { FormField, FormMessage } from '../../_components/form-field';
 import { SelectField } from '../../_components/select-field';
@@ -21,6 +22,7 @@ export function BinForm({ parts, containers }: { parts: Array<{ id: number; part
   const router = useRouter();
   const [message, setMessage] = useState<string | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
+  const requestKey = useRequestKey();
   return (
     <Formik
       initialValues={{ code: '', partId: '', containerId: '', bookQuantity: '0', abcClass: 'C' }}
@@ -29,12 +31,13 @@ export function BinForm({ parts, containers }: { parts: Array<{ id: number; part
         setMessage(null);
         setSaved(null);
         const body = { code: values.code, partId: Number(values.partId), containerId: values.containerId ? Number(values.containerId) : null, bookQuantity: Number(values.bookQuantity), abcClass: values.abcClass };
-        const res = await apiFetch<{ bin: { code: string } }>('/api/v1/bins', { method: 'POST', body });
+        const res = await apiFetch<{ bin: { code: string } }>('/api/v1/bins', { method: 'POST', body, headers: { 'Idempotency-Key': requestKey.keyFor(body) } });
         if (!res.ok) {
           helpers.setErrors(toFormikErrors(res.fields));
           setMessage(res.message);
           return;
         }
+        requestKey.done();
         setSaved(`Bin ${res.data.bin.code} added.`);
         helpers.resetForm();
         router.refresh();

@@ -5,6 +5,7 @@ import { useState } from 'react';
 import * as yup from 'yup';
 import type { KitDto } from '@/server/schemas/kits';
 import { apiFetch } from '../../_components/api-client';
+import { useRequestKey } from '../../_components/request-key';
 import { FormField, FormMessage } from '../../_components/form-field';
 import { ComponentsEditor, componentsSchema, emptyComponent, toComponentInput, type ComponentRow } from './_components/components-editor';
 
@@ -18,14 +19,19 @@ const schema = yup.object({
 
 export function KitCreateForm({ onCreated, onCancel }: { onCreated: (kit: KitDto) => void; onCancel: () => void }) {
   const [message, setMessage] = useState<string | null>(null);
+  const requestKey = useRequestKey();
   return (
     <Formik
       initialValues={{ code: '', revision: 'A', description: '', components: [emptyComponent()] as ComponentRow[] }}
       validationSchema={schema}
       onSubmit={async (values, helpers) => {
         setMessage(null);
-        const res = await apiFetch<{ kit: KitDto }>('/api/v1/kits', { method: 'POST', body: { code: values.code, revision: values.revision, description: values.description, components: toComponentInput(values.components) } });
-        if (res.ok) return onCreated(res.data.kit);
+        const body = { code: values.code, revision: values.revision, description: values.description, components: toComponentInput(values.components) };
+        const res = await apiFetch<{ kit: KitDto }>('/api/v1/kits', { method: 'POST', body, headers: { 'Idempotency-Key': requestKey.keyFor(body) } });
+        if (res.ok) {
+          requestKey.done();
+          return onCreated(res.data.kit);
+        }
         helpers.setErrors(res.fields);
         setMessage(res.message);
       }}

@@ -6,6 +6,7 @@ import { useState } from 'react';
 import * as yup from 'yup';
 import type { OrderDto } from '@/server/schemas/orders';
 import { apiFetch } from '../../_components/api-client';
+import { useRequestKey } from '../../_components/request-key';
 import { FormField, FormMessage } from '../../_components/form-field';
 
 export interface KitChoice {
@@ -23,6 +24,7 @@ const schema = yup.object({
 export function OrderCreateForm({ kits }: { kits: KitChoice[] }) {
   const router = useRouter();
   const [message, setMessage] = useState<string | null>(null);
+  const requestKey = useRequestKey();
   return (
     <Formik
       initialValues={{ kitId: '', quantity: '', dueDate: '' }}
@@ -30,8 +32,9 @@ export function OrderCreateForm({ kits }: { kits: KitChoice[] }) {
       onSubmit={async (values, helpers) => {
         setMessage(null);
         const body = { kitId: Number(values.kitId), quantity: Number(values.quantity), dueDate: values.dueDate || null };
-        const res = await apiFetch<{ order: OrderDto }>('/api/v1/orders', { method: 'POST', body });
+        const res = await apiFetch<{ order: OrderDto }>('/api/v1/orders', { method: 'POST', body, headers: { 'Idempotency-Key': requestKey.keyFor(body) } });
         if (res.ok) {
+          requestKey.done();
           router.push(`/orders/${res.data.order.id}`);
           return;
         }

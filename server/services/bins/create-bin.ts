@@ -4,13 +4,14 @@ import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
 import type { BinDto, CreateBinInput } from '../../schemas/bins';
+import { oncePerKey } from '../requests/once-per-key';
 import { addOnHand } from '../stock/add-on-hand';
 import { toBinDto } from './bin-dto';
 
 // A new bin brings its opening quantity into stock as an 'initial' movement.
-export async function createBin({ input, by }: { input: CreateBinInput; by: SessionUser }): Promise<BinDto> {
-  const db = getDb();
-  const id = await db.transaction(async (transaction) => {
+export async function createBin({ input, by, idempotencyKey }: { input: CreateBinInput; by: SessionUser; idempotencyKey?: string }): Promise<{ bin: BinDto; replayed: boolean }> {
+  getDb();
+  const { id, replayed } = await oncePerKey({ key: idempotencyKey, userId: by.id, scope: 'bins.create', input }, async (transaction) => {
     if (!(await Part.count({ where: { id: input.partId }, transaction }))) throw new AppError('not_found', 'Part was not found', { fields: { partId: 'no such part' } });
     if (input.containerId && !(await Container.count({ where: { id: input.containerId }, transaction }))) {
       throw new AppError('not_found', 'Container was not found', { fields: { containerId: 'no such container' } });
@@ -22,5 +23,5 @@ export async function createBin({ input, by }: { input: CreateBinInput; by: Sess
     await addOnHand(input.partId, input.bookQuantity, transaction);
     return bin.id;
   });
-  return toBinDto((await Bin.findByPk(id, { include: [{ association: 'part' }] }))!);
+  return { bin: toBinDto((await Bin.findByPk(id, { include: [{ association: 'part' }] }))!), replayed };
 }

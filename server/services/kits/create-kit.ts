@@ -2,13 +2,15 @@ import 'server-only';
 import { Kit } from '@/models';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
+import type { SessionUser } from '../../auth/session';
 import type { CreateKitInput, KitDto } from '../../schemas/kits';
+import { oncePerKey } from '../requests/once-per-key';
 import { KIT_INCLUDE, toKitDto } from './kit-dto';
 import { writeComponents } from './write-components';
 
-export async function createKit({ input }: { input: CreateKitInput }): Promise<KitDto> {
-  const db = getDb();
-  const id = await db.transaction(async (transaction) => {
+export async function createKit({ input, by, idempotencyKey }: { input: CreateKitInput; by: SessionUser; idempotencyKey?: string }): Promise<{ kit: KitDto; replayed: boolean }> {
+  getDb();
+  const { id, replayed } = await oncePerKey({ key: idempotencyKey, userId: by.id, scope: 'kits.create', input }, async (transaction) => {
     if (await Kit.count({ where: { code: input.code, revision: input.revision }, transaction })) {
       throw new AppError('duplicate', `Kit ${input.code} revision ${input.revision} already exists`, { fields: { revision: 'already exists for this kit' } });
     }
@@ -16,5 +18,5 @@ export async function createKit({ input }: { input: CreateKitInput }): Promise<K
     await writeComponents(kit.id, input.components, transaction);
     return kit.id;
   });
-  return toKitDto((await Kit.findByPk(id, { include: KIT_INCLUDE }))!);
+  return { kit: toKitDto((await Kit.findByPk(id, { include: KIT_INCLUDE }))!), replayed };
 }

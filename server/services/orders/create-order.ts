@@ -7,13 +7,15 @@ import { getDb } from '../../db';
 import { AppError } from '../../errors';
 import type { CreateOrderInput, OrderDto } from '../../schemas/orders';
 import { siteTimeZone } from '../settings/get-settings';
+import { oncePerKey } from '../requests/once-per-key';
 import { getOrder } from './get-order';
 
 // A draft order copies the kit revision's bill of material, scaled by the number of kits.
-export async function createOrder({ input, by }: { input: CreateOrderInput; by: SessionUser }): Promise<OrderDto> {
-  const db = getDb();
+// A double submit with the same Idempotency-Key makes one order.
+export async function createOrder({ input, by, idempotencyKey }: { input: CreateOrderInput; by: SessionUser; idempotencyKey?: string }): Promise<{ order: OrderDto; replayed: boolean }> {
+  getDb();
   const timeZone = await siteTimeZone();
-  const id = await db.transaction(async (transaction) => {
+  const { id, replayed } = await oncePerKey({ key: idempotencyKey, userId: by.id, scope: 'orders.create', input }, async (transaction) => {
     const kit = await Kit.findByPk(input.kitId, { transaction });
     if (!kit) throw new AppError('not_found', 'Kit was not found', { fields: { kitId: 'no such kit' } });
     if (!kit.active) throw new AppError('rule_violated', `Kit ${kit.code} revision ${kit.revision} is retired`, { fields: { kitId: 'retired revision' } });
@@ -38,5 +40,5 @@ export async function createOrder({ input, by }: { input: CreateOrderInput; by: 
     );
     return order.id;
   });
-  return getOrder({ orderId: id });
+  return { order: await getOrder({ orderId: id }), replayed };
 }

@@ -25,9 +25,3 @@ export const browserStore = {
   },
 };
 
-/** A random capture key; crypto.randomUUID needs a secure context, getRandomValues does not. */
-export function newCaptureKey(): string {
-  if (typeof crypto.randomUUID === 'function') return crypto.randomUUID();
-  const b = crypto.getRandomValues(new Uint8Array(16));
-  return Array.from(b, (x) => x.toString(16).padStart(2, '0')).join('');
-}

@@ -27,7 +27,8 @@ import { adviseScales, judgeScale, type AdvisedScale } from '../_lib/scale-advic
 import { shortcutFor } from '../_lib/shortcuts';
 import { describeSpread } from '../_lib/spread-note';
 import { sampleStaysOnPan, type WorkItem } from '../_lib/work-item';
-import { browserStore, newCaptureKey } from './browser-store';
+import { newRequestKey } from '@/app/_components/request-key';
+import { browserStore } from './browser-store';
 import type { StepActions } from './StepPanel';
 import { useReadingFeed } from './use-reading-feed';
 
@@ -312,7 +313,7 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
       if (!work || captureBlocked || busy) return;
       const f = settled('capture');
       if (!f) return;
-      const keyed = apply({ action: 'capture', makeKey: newCaptureKey });
+      const keyed = apply({ action: 'capture', makeKey: newRequestKey });
       if (!keyed) return;
       const body = buildCaptureBody(keyed, f.mean);
       setBusy(true);
