@@ -123,6 +123,29 @@ describe('bins and cycle counts', () => {
     expect(mail.text).toContain('the tote was half on the pan');
   });
 
+  it('mails the planners when an approved shortfall leaves released orders holding more than is on hand', async () => {
+    const clerk = await signedIn('clerk');
+    const planner = await signedIn('planner');
+    const part = await createPart({ pieceSpread: 0.001 });
+    const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
+    const bin = await newBin(clerk.agent, part.id, 1000);
+    // A released order holds 800 of the 1 000.
+    const kit = await planner.agent.post('/api/v1/kits').send({ code: `SHORT-${randomUUID().slice(0, 8)}`.toUpperCase(), revision: 'A', description: 'Holds most of a bin', components: [{ partId: part.id, quantity: 8 }] });
+    const order = await planner.agent.post('/api/v1/orders').send({ kitId: kit.body.kit.id, quantity: 100 });
+    expect((await planner.agent.post(`/api/v1/orders/${order.body.order.id}/release`).send({ version: order.body.order.version })).status).toBe(200);
+    // Counted 600, and the shortfall approved: 600 on hand against 800 held.
+    const count = await clerk.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, bin, 600));
+    expect(count.body.binCount.status).toBe('pending');
+    expect((await planner.agent.post(`/api/v1/bin-counts/${count.body.binCount.id}/decision`).send({ decision: 'approve', note: 'tote was split' })).status).toBe(200);
+    testDb();
+    expect(await PartStock.findByPk(part.id)).toMatchObject({ onHand: 600, reserved: 800 });
+    // The planner heard of the variance waiting, then of the shortage its approval made.
+    const short = (await waitForMail(planner.email, 2)).find((m) => m.subject.startsWith('Short of stock'));
+    expect(short?.subject).toBe(`Short of stock: ${part.partNumber} is 200 below what released orders hold`);
+    expect(short?.text).toContain(order.body.order.number);
+    expect(short?.text).toMatch(/600 on hand, while released orders hold 800/);
+  });
+
   it('lets one of two clerks counting the same bin win; the other gets 409 and recounts, and nothing is lost', async () => {
     const a = await signedIn('clerk');
     const b = await signedIn('clerk');

@@ -7,11 +7,13 @@ import { retryOnDeadlock } from '../../retry-deadlock';
 import { log } from '../../log';
 import { getSettings } from '../settings/get-settings';
 import { adjustBin } from '../stock/adjust-bin';
+import { notifyIfStockShort } from '../stock/notify-stock-short';
 import { notifyRejectedVariance } from './notify-rejected-variance';
 
 // Approving books the variance as counted (the difference, so stock that moved since stays right);
 // rejecting leaves the book as it was, puts the bin first on the cycle-count plan again (as if never
-// counted) and mails the clerks after the commit. With four eyes on (the default), the person who
+// counted) and mails the clerks after the commit. An approved shortfall that leaves released orders
+// holding more than is on hand mails the planners. With four eyes on (the default), the person who
 // counted the bin cannot decide: a counter approving their own shortfall is what the rule stops.
 export async function decideVariance({ binCountId, approve, note, by }: { binCountId: number; approve: boolean; note?: string | null; by: SessionUser }) {
   const db = getDb();
@@ -33,10 +35,14 @@ export async function decideVariance({ binCountId, approve, note, by }: { binCou
         bin.lastCountedAt = null;
         await bin.save({ transaction });
       }
-      return { id: row.id, binId: row.binId, binCode: bin.code, status: row.status, variance: row.variance, bookQuantity: bin.bookQuantity, counted: row.counted };
+      return { id: row.id, binId: row.binId, binCode: bin.code, status: row.status, variance: row.variance, bookQuantity: bin.bookQuantity, counted: row.counted, partId: bin.partId };
     }),
   );
   if (!approve) await notifyRejectedVariance({ ...decided, note: note ?? null }, by).catch((err) => log.error({ err }, 'rejected-variance notice failed'));
-  const { counted: _counted, ...answer } = decided;
+  else if (decided.variance < 0) {
+    const cause = `${by.name} approved the count of bin ${decided.binCode}: ${decided.variance} pieces`;
+    await notifyIfStockShort(decided.partId, cause).catch((err) => log.error({ err }, 'stock-short notice failed'));
+  }
+  const { counted: _counted, partId: _partId, ...answer } = decided;
   return answer;
 }
