@@ -1,5 +1,6 @@
 import 'server-only';
 import { AppError } from '../errors';
+import { isWellFormedText } from '@/lib/well-formed-text';
 
 // Request bodies are read against a limit before anything is parsed: a declared length over it is
 // refused at once (413) without reading; a body without one is read until it passes the limit.
@@ -36,14 +37,16 @@ export async function readBodyText(req: Request, limit: number): Promise<string>
   return Buffer.concat(chunks).toString('utf8');
 }
 
-/** JSON nested deeper than any of our bodies, or with more keys than any needs, is refused. */
+/** JSON nested deeper than any of our bodies, with more keys than any needs, or with text that is not well-formed Unicode, is refused. */
 export const JSON_MAX_DEPTH = 20;
 export const JSON_MAX_KEYS = 20_000;
 
 export function assertJsonShape(value: unknown): void {
   let keys = 0;
   const walk = (v: unknown, depth: number): void => {
+    if (typeof v === 'string') return assertWellFormed(v);
     if (v === null || typeof v !== 'object') return;
+    if (!Array.isArray(v)) for (const k of Object.keys(v)) assertWellFormed(k);
     if (depth > JSON_MAX_DEPTH) throw new AppError('bad_request', `The JSON body is nested more than ${JSON_MAX_DEPTH} levels deep`);
     const entries = Array.isArray(v) ? v : Object.values(v);
     keys += entries.length;
@@ -51,4 +54,8 @@ export function assertJsonShape(value: unknown): void {
     for (const e of entries) walk(e, depth + 1);
   };
   walk(value, 1);
+}
+
+function assertWellFormed(text: string): void {
+  if (!isWellFormedText(text)) throw new AppError('bad_request', 'The body holds text that is not well-formed Unicode (half of a surrogate pair)');
 }

@@ -57,6 +57,19 @@ describe('request body limits', () => {
     expect(flood.body.error.message).toMatch(/more than 20000 values/);
   });
 
+  it('refuses text that is not well-formed Unicode instead of storing it as "?", and takes a real pair', async () => {
+    const { agent } = await signedIn('planner');
+    // Written as JSON escapes: a lone low surrogate, then a proper pair (U+1F529).
+    const lone = await agent.post('/api/v1/kits').set('Content-Type', 'application/json').send('{"code":"KX","revision":"A","description":"bolt \\udc00 tray","components":[]}');
+    expect(lone.status).toBe(400);
+    expect(lone.body.error.message).toMatch(/not well-formed Unicode/);
+    const key = await agent.post('/api/v1/kits').set('Content-Type', 'application/json').send('{"\\ud83d":1}');
+    expect(key.status).toBe(400);
+    const pair = await agent.post('/api/v1/kits').set('Content-Type', 'application/json').send('{"code":"KX","description":"bolt \\ud83d\\udd29 tray"}');
+    expect(pair.status).toBe(400);
+    expect(pair.body.error.message).not.toMatch(/Unicode/);
+  });
+
   it('answers API JSON with Cache-Control: no-store', async () => {
     const { agent } = await signedIn('clerk');
     expect((await agent.get('/api/v1/parts')).headers['cache-control']).toBe('no-store');
