@@ -1,6 +1,8 @@
 import http from 'node:http';
+import { QueryTypes } from 'sequelize';
 import { describe, expect, it } from 'vitest';
 import { User } from '../../models';
+import { pruneSignInThrottles } from '../../server/services/auth/sign-in-throttle';
 import { createUser, TEST_PASSWORD, testDb, unique } from '../helpers/db';
 import { startAnotherApp } from '../helpers/app-process';
 import { anonymous, signedIn } from '../helpers/http';
@@ -122,6 +124,22 @@ describe('session API', () => {
     const blocked = await tryPassword(user.email, TEST_PASSWORD, address);
     expect(blocked.status).toBe(429);
     expect((await tryPassword(user.email, TEST_PASSWORD, someAddress('10.97'))).status).toBe(200);
+  });
+
+  it('prunes sign-in counts a day past their window, keeping live ones and blocks still in force', async () => {
+    const db = testDb();
+    const tag = unique('prune');
+    const rows = [
+      [`address:${tag}-old`, 'UTC_TIMESTAMP() - INTERVAL 2 DAY', 'NULL'],
+      [`address:${tag}-fresh`, 'UTC_TIMESTAMP()', 'NULL'],
+      [`address:${tag}-blocked`, 'UTC_TIMESTAMP() - INTERVAL 2 DAY', 'UTC_TIMESTAMP() + INTERVAL 1 HOUR'],
+    ];
+    for (const [key, start, blocked] of rows) {
+      await db.query(`INSERT INTO sign_in_throttles (scope_key, failures, window_start, blocked_until) VALUES (?, 3, ${start}, ${blocked})`, { replacements: [key] });
+    }
+    expect(await pruneSignInThrottles()).toBeGreaterThanOrEqual(1);
+    const left = await db.query<{ scope_key: string }>('SELECT scope_key FROM sign_in_throttles WHERE scope_key LIKE ? ORDER BY scope_key', { replacements: [`address:${tag}%`], type: QueryTypes.SELECT });
+    expect(left.map((r) => r.scope_key)).toEqual([`address:${tag}-blocked`, `address:${tag}-fresh`]);
   });
 
   it('believes X-Forwarded-For only from a trusted proxy: without one, a client cannot pick its address', { timeout: 60_000 }, async () => {

@@ -1,5 +1,6 @@
 import 'server-only';
-import { QueryTypes, type Transaction } from 'sequelize';
+import { Op, QueryTypes, type Transaction } from 'sequelize';
+import { SignInThrottle } from '@/models';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
 
@@ -114,10 +115,8 @@ export async function recordSignedIn(keys: ThrottleKeys): Promise<void> {
 }
 
 /** Rows whose window and block ran out a day ago say nothing any more. */
-export async function pruneSignInThrottles(): Promise<number> {
-  const [, meta] = await getDb().query(
-    `DELETE FROM sign_in_throttles
-      WHERE window_start < UTC_TIMESTAMP() - INTERVAL 1 DAY AND (blocked_until IS NULL OR blocked_until < UTC_TIMESTAMP())`,
-  );
-  return (meta as { affectedRows?: number }).affectedRows ?? 0;
+export async function pruneSignInThrottles(now = new Date()): Promise<number> {
+  getDb();
+  const dayAgo = new Date(now.getTime() - 86_400_000);
+  return SignInThrottle.destroy({ where: { windowStart: { [Op.lt]: dayAgo }, [Op.or]: [{ blockedUntil: null }, { blockedUntil: { [Op.lt]: now } }] } });
 }
