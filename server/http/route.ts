@@ -45,7 +45,10 @@ export function route<A extends Access, B extends z.ZodType | undefined = undefi
       const query = parseWith(spec.query, Object.fromEntries(req.nextUrl.searchParams), 'Bad query');
       const body = spec.body ? parseWith(spec.body, await readJson(req, spec.maxBodyBytes ?? JSON_BODY_LIMIT), 'Some fields need attention') : undefined;
       const result = await handler({ req, user, body, query, params } as RouteContext<A, B, Q, P>);
-      if (result instanceof Response) return result;
+      if (result instanceof Response) {
+        if (!result.headers.has('Cache-Control')) result.headers.set('Cache-Control', 'no-store');
+        return result;
+      }
       if (result === undefined) return new Response(null, { status: 204, headers: NO_STORE });
       return Response.json(result, { headers: NO_STORE });
     } catch (err) {

@@ -73,5 +73,7 @@ describe('request body limits', () => {
   it('answers API JSON with Cache-Control: no-store', async () => {
     const { agent } = await signedIn('clerk');
     expect((await agent.get('/api/v1/parts')).headers['cache-control']).toBe('no-store');
+    // Routes that build their own Response get it too.
+    expect((await anonymous().get('/api/v1/health')).headers['cache-control']).toBe('no-store');
   });
 });
