@@ -10,7 +10,7 @@ const securityHeaders = [
 const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
-  serverExternalPackages: ['sequelize', 'mariadb', 'pino', 'smtp-server', 'mailparser', 'bwip-js', 'pdf-lib', '@pdf-lib/fontkit', 'ipp'],
+  serverExternalPackages: ['sequelize', 'mariadb', 'pino', 'smtp-server', 'mailparser', 'bwip-js', 'pdf-lib', '@pdf-lib/fontkit', 'ipp', 'piscina'],
   async headers() {
     return [{ source: '/:path*', headers: securityHeaders }];
   },

@@ -27,6 +27,8 @@ const envSchema = z.object({
   // Uploaded files (part photos, test-weight certificates) live here, outside the web root.
   UPLOAD_DIR: z.string().default('.data/dev/uploads'),
   MAIL_FROM: z.string().default('Tallyforge <tallyforge@localhost>'),
+  // Label renders waiting for a worker thread before more are refused with 503.
+  LABEL_QUEUE_LIMIT: z.coerce.number().int().positive().default(16),
   // The label printer (IPP; ipps for TLS). The default is the local printer fake that npm start runs.
   PRINTER_URL: z.string().regex(/^ipps?:\/\/[^/]+\/\S*$/, 'PRINTER_URL must be an ipp:// or ipps:// printer URL').default('ipp://127.0.0.1:8631/printers/labels'),
 });

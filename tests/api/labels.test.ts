@@ -1,9 +1,11 @@
+import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { PDFDocument } from 'pdf-lib';
 import { BuildOrder } from '../../models';
 import { decodePdf, isPdf } from '../helpers/decode-pdf';
 import { createPart, stockPart, testDb } from '../helpers/db';
 import { releasedOrder } from '../helpers/orders';
+import { startAnotherApp } from '../helpers/app-process';
 import { baseUrl, signedIn, type Agent } from '../helpers/http';
 
 const GS = '\x1d';
@@ -115,6 +117,35 @@ describe('label PDFs', () => {
     const unknown = await agent.post('/api/v1/labels').send({ template: 'part', stock: '4x2in', ids: [part.id, 99999998, 99999999] });
     expect(unknown.status).toBe(404);
     expect(unknown.body.error.fields.ids).toBe('no such part: 99999998, 99999999');
+  });
+});
+
+describe('label rendering off the request thread', () => {
+  it('renders in a worker pool with a bounded queue: past it a render is refused with 503 and Retry-After, health keeps answering', { timeout: 90_000 }, async () => {
+    const app = await startAnotherApp({ LABEL_QUEUE_LIMIT: '1' });
+    try {
+      const { agent } = await signedIn('clerk', app.url);
+      const bin = await stockPart((await createPart()).id, 1);
+      const body = { template: 'bin', stock: '2x1in', ids: Array.from({ length: 400 }, () => bin.id) };
+      // Warm the pool, so every request below meets a running worker.
+      expect((await binary(agent.post('/api/v1/labels').send({ ...body, ids: [bin.id] }))).status).toBe(200);
+      const renders = Promise.all(Array.from({ length: 5 }, () => binary(agent.post('/api/v1/labels').send(body))));
+      // While they render, the app answers other requests.
+      const health = await request(app.url).get('/api/v1/health');
+      expect(health.status).toBe(200);
+      const answers = await renders;
+      const statuses = answers.map((r) => r.status).sort();
+      expect(statuses.every((st) => st === 200 || st === 503), statuses.join(',')).toBe(true);
+      // One rendering and one waiting at the most: of five sent at once, some were turned away.
+      expect(statuses.filter((st) => st === 503).length).toBeGreaterThan(0);
+      const refused = answers.find((r) => r.status === 503)!;
+      expect(Number(refused.headers['retry-after'])).toBeGreaterThan(0);
+      const done = answers.find((r) => r.status === 200)!;
+      expect(isPdf(done.body)).toBe(true);
+      expect((await PDFDocument.load(done.body)).getPageCount()).toBe(400);
+    } finally {
+      app.child.kill('SIGKILL');
+    }
   });
 });
 
