@@ -18,6 +18,7 @@ import { applyCountToLine, type LineProgress } from '../orders/apply-count-to-li
 import { partSpreadBelief } from '../parts/part-spread-belief';
 import { loadUsableScale, scaleNoise, scaleWeighingAt } from '../scales/usable-scale';
 import { getSettings } from '../settings/get-settings';
+import { siteDay } from '@/lib/time/site-clock';
 import { toCountEventDto } from './count-event-dto';
 import { lockCountTarget } from './lock-count-target';
 
@@ -41,7 +42,8 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
   const requestHash = createHash('sha256').update(JSON.stringify({ input, operator: by.id })).digest('hex');
   const earlier = await CountEvent.findOne({ where: { idempotencyKey } });
   if (earlier) return replay(earlier, requestHash);
-  const { defaultPieceSpread, varianceThresholdPcs, varianceThresholdPct } = await getSettings();
+  const { defaultPieceSpread, varianceThresholdPcs, varianceThresholdPct, timeZone } = await getSettings();
+  const today = siteDay(timeZone);
   let answer: CountAnswer;
   try {
     answer = await retryOnDeadlock(() => db.transaction(async (transaction) => {
@@ -57,8 +59,8 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
       if (input.containerId && !(await Container.count({ where: { id: input.containerId }, transaction }))) {
         throw new AppError('not_found', 'Container was not found', { fields: { containerId: 'no such container' } });
       }
-      const scale = await loadUsableScale(input.scaleId, transaction);
-      const bulkScale = input.bulkScaleId ? await loadBulkScale(input, transaction) : null;
+      const scale = await loadUsableScale(input.scaleId, transaction, today);
+      const bulkScale = input.bulkScaleId ? await loadBulkScale(input, transaction, today) : null;
       const loadScale = bulkScale ?? scale;
       await lockCountTarget(input, transaction);
       const g = (v: number) => toGrams(v, input.unit);
@@ -147,14 +149,14 @@ export async function recordCount({ idempotencyKey, input, by }: RecordCountOpti
 }
 
 // The bulk's own scale: another scale than the sample's, usable, and the sample set apart.
-async function loadBulkScale(input: RecordCountInput, transaction: Transaction): Promise<Scale> {
+async function loadBulkScale(input: RecordCountInput, transaction: Transaction, today: string): Promise<Scale> {
   if (input.bulkScaleId === input.scaleId) {
     throw new AppError('validation_failed', 'Some fields need attention', { fields: { bulkScaleId: 'the bulk scale must be another scale than the sample\'s' } });
   }
   if (input.sampleOnPan) {
     throw new AppError('validation_failed', 'Some fields need attention', { fields: { sampleOnPan: 'with the bulk on another scale the sample is weighed apart: sampleOnPan must be false' } });
   }
-  return loadUsableScale(input.bulkScaleId!, transaction);
+  return loadUsableScale(input.bulkScaleId!, transaction, today);
 }
 
 // An empty pan tared a hair below zero (−0.0048 g on a 0.001 g scale) is zero: within one division

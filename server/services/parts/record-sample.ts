@@ -7,6 +7,8 @@ import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
 import type { PartDto, RecordSampleInput, SampleDto } from '../../schemas/parts';
 import { loadUsableScale, scaleNoise } from '../scales/usable-scale';
+import { siteDay } from '@/lib/time/site-clock';
+import { siteTimeZone } from '../settings/get-settings';
 import { partSpreadBelief } from './part-spread-belief';
 import { relearnPart } from './relearn-part';
 import { toPartDto, toSampleDto } from './part-dto';
@@ -25,11 +27,12 @@ const HISTORY = 50;
 // far from the part's history is kept but held for review and changes nothing about the part.
 export async function recordSample({ partId, input, by }: RecordSampleOptions): Promise<{ sample: SampleDto; part: PartDto; held: boolean }> {
   const db = getDb();
+  const today = siteDay(await siteTimeZone());
   return db.transaction(async (transaction) => {
     const part = await Part.findByPk(partId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!part) throw notFound('Part');
     if (part.countingMethod === 'hand') throw new AppError('rule_violated', `${part.partNumber} is counted by hand, not by weight`);
-    const scale = await loadUsableScale(input.scaleId, transaction);
+    const scale = await loadUsableScale(input.scaleId, transaction, today);
     const noise = scaleNoise(scale);
     const net = toGrams(input.netWeight, input.unit);
     const problems = sampleProblems({ quantity: input.quantity, netWeight: net }, { division: noise.division, max: Number(scale.capacityG), min: Number(scale.minLoadG) });
