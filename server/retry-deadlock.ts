@@ -11,8 +11,8 @@ function isRetryable(err: unknown): boolean {
 }
 
 /** Waits before try `i` + 1: "full jitter" backoff, a random time up to a doubling cap (common practice). */
-export function backoffMs(i: number, random = Math.random): number {
-  return Math.round(random() * Math.min(400, 25 * 2 ** i));
+function backoffMs(i: number): number {
+  return Math.round(Math.random() * Math.min(400, 25 * 2 ** i));
 }
 
 // InnoDB may pick a transaction as a deadlock victim and roll it back whole; running it again is

@@ -12,9 +12,9 @@ import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import { Bin, Part, User } from '../../models';
 import { hashPassword } from '../../server/auth/passwords';
-import { SESSION_COOKIE } from '../../server/auth/session-options';
 import { getDb } from '../../server/db';
 import { freePort, startApp } from '../next-start';
+import { signIn } from './bench-sign-in';
 
 const RESULTS = 'bench-results/abuse.json';
 const IDLE_S = 8;
@@ -76,11 +76,6 @@ function hugeBody(): string {
   return `{"email":"a@example.test","password":"x",${keys.join(',')}}`;
 }
 
-async function signIn(url: string, email: string, password: string): Promise<string> {
-  const res = await fetch(`${url}/api/v1/session`, { method: 'POST', headers: { 'content-type': 'application/json', origin: url }, body: JSON.stringify({ email, password }) });
-  if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${await res.text()}`);
-  return res.headers.getSetCookie().map((c) => c.split(';')[0]).find((c) => c.startsWith(`${SESSION_COOKIE}=`))!;
-}
 
 async function binsForLabels(count: number): Promise<number[]> {
   const part = await Part.create({ partNumber: `ABUSE-${randomUUID().slice(0, 8)}`.toUpperCase(), description: 'label flood part', countingMethod: 'scale', apwG: null, apwSampleSize: null, pieceSpread: null, photoFile: null });

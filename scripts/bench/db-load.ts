@@ -13,10 +13,11 @@ import os from 'node:os';
 import path from 'node:path';
 import { Part, Scale, User } from '../../models';
 import { hashPassword } from '../../server/auth/passwords';
-import { REFRESH_AFTER_MS, SESSION_COOKIE } from '../../server/auth/session-options';
+import { REFRESH_AFTER_MS } from '../../server/auth/session-options';
 import { getDb } from '../../server/db';
 import { getEnv } from '../../server/env';
 import { freePort, startApp } from '../next-start';
+import { signIn } from './bench-sign-in';
 
 const CONNECTIONS = 32;
 const WARMUP_S = 2;
@@ -76,13 +77,6 @@ async function benchWorld(password: string): Promise<{ email: string; partId: nu
 }
 
 // Signs in once through the public API (the sign-in throttle counts failures per e-mail and address).
-async function signIn(url: string, email: string, password: string): Promise<string> {
-  const res = await fetch(`${url}/api/v1/session`, { method: 'POST', headers: { 'content-type': 'application/json', origin: url }, body: JSON.stringify({ email, password }) });
-  if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${await res.text()}`);
-  const cookie = res.headers.getSetCookie().map((c) => c.split(';')[0]).find((c) => c.startsWith(`${SESSION_COOKIE}=`));
-  if (!cookie) throw new Error('sign-in answered without a session cookie');
-  return cookie;
-}
 
 async function startPrimaryKeyServer(partId: number): Promise<{ url: string; child: ChildProcess }> {
   const port = await freePort();

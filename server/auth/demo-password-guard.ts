@@ -5,7 +5,7 @@ import { getDb } from '../db';
 import { verifyPassword } from './passwords';
 
 /** The demo's active accounts that anyone who read the README can still sign in to. */
-export async function demoAccountsOnKnownPassword(): Promise<string[]> {
+async function demoAccountsOnKnownPassword(): Promise<string[]> {
   getDb();
   const known = [...new Set([DEFAULT_DEMO_PASSWORD, process.env.DEMO_PASSWORD].filter((p): p is string => Boolean(p)))];
   const users = await User.findAll({ where: { email: DEMO_EMAILS as string[], active: true } });

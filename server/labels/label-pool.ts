@@ -18,7 +18,8 @@ function labelPool(): Piscina {
     // The worker is TypeScript, loaded through tsx (as scripts/serve.ts is), whatever started this process.
     filename: path.join(process.cwd(), 'labels/render-worker.ts'),
     execArgv: ['--import', 'tsx'],
-    minThreads: 0,
+    // One worker stays up once the first label is drawn: starting one (and tsx in it) takes about a second.
+    minThreads: 1,
     maxThreads: Math.max(1, os.availableParallelism() - 1),
     idleTimeout: 60_000,
   });

@@ -26,3 +26,8 @@ export const pagingSchema = z.object({
   page: z.coerce.number().int().min(1).default(1),
   pageSize: z.coerce.number().int().min(1).max(500).default(100),
 });
+
+// Chosen by the client once per capture or create and reused on every retry of it.
+export const idempotencyKeySchema = z
+  .string({ error: 'The Idempotency-Key header is required' })
+  .regex(/^[A-Za-z0-9_.:-]{8,100}$/, { error: 'Idempotency-Key must be 8–100 letters, digits or _ . : -' });

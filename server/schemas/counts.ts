@@ -4,11 +4,6 @@ import type { CountingWarning } from '@/lib/weighing';
 import { pagingSchema, recordIdSchema } from './common';
 import { nonNegativeNumber, positiveNumber, unitSchema, weightReading, wholeCount } from './weights';
 
-// Chosen by the client once per capture and reused on every retry of it.
-export const idempotencyKeySchema = z
-  .string({ error: 'The Idempotency-Key header is required' })
-  .regex(/^[A-Za-z0-9_.:-]{8,100}$/, { error: 'Idempotency-Key must be 8–100 letters, digits or _ . : -' });
-
 const purposeSchema = z.enum(COUNT_PURPOSES as unknown as [CountPurpose, ...CountPurpose[]], { error: `Purpose must be one of ${COUNT_PURPOSES.join(', ')}` });
 
 // The bench sends what the scale said; the server computes the count itself.

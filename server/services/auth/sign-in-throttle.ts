@@ -8,7 +8,7 @@ import { AppError } from '../../errors';
 // pair before the password is checked, so concurrent tries cannot slip past a limit; past it, that pair
 // or address is blocked. Across addresses an account is only slowed, never blocked, so wrong passwords
 // sent from elsewhere cannot keep its owner out.
-export const THROTTLE = {
+const THROTTLE = {
   windowMinutes: 15,
   blockMinutes: 15,
   pairLimit: 5,
@@ -71,7 +71,7 @@ function refuse(seconds: number): never {
 }
 
 /** How long a try at an account that wrong passwords from anywhere have been hitting waits first. */
-export function accountDelayMs(recentFailures: number): number {
+function accountDelayMs(recentFailures: number): number {
   const over = recentFailures - THROTTLE.accountQuietLimit;
   return over <= 0 ? 0 : Math.min(THROTTLE.accountDelayMaxMs, over * THROTTLE.accountDelayStepMs);
 }

@@ -23,7 +23,7 @@ interface StockRow {
  * two of them cannot each hold a row the other waits for. Only part_stock is locked, not the rows a join
  * would read beside it (parts, which captures update).
  */
-export async function lockStockRows(partIds: number[], transaction: Transaction): Promise<Map<number, StockRow>> {
+async function lockStockRows(partIds: number[], transaction: Transaction): Promise<Map<number, StockRow>> {
   const ids = [...new Set(partIds)].sort((a, b) => a - b);
   if (!ids.length) return new Map();
   const rows = await getDb().query<StockRow>('SELECT part_id, on_hand, reserved FROM part_stock WHERE part_id IN (:ids) ORDER BY part_id FOR UPDATE', {
