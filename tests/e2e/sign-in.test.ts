@@ -60,6 +60,25 @@ describe('signing in (browser)', () => {
     }
   });
 
+  it('keeps the sign-in fields closed until the page script runs, so the browser never posts a password itself', async () => {
+    const scriptless = await openBrowser(undefined, { javaScriptEnabled: false });
+    try {
+      const page = await scriptless.newPage();
+      await page.goto('/sign-in');
+      for (const field of [page.getByLabel('E-mail'), page.getByLabel('Password'), page.getByRole('button', { name: 'Sign in' })]) {
+        expect(await field.isDisabled()).toBe(true);
+      }
+      expect(await page.locator('form').getAttribute('method')).toBe('post');
+    } finally {
+      await scriptless.close();
+    }
+    const page = await browser.newPage();
+    await page.goto('/sign-in');
+    await expect.poll(() => page.getByLabel('E-mail').isEnabled()).toBe(true);
+    await expect.poll(() => page.evaluate(() => document.activeElement?.getAttribute('name'))).toBe('email');
+    await page.close();
+  });
+
   it('shows a role without the right an explanation instead of the page', async () => {
     const page = await browser.newPage();
     await signInThroughPage(page, 'operator');

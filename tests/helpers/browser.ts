@@ -10,12 +10,13 @@ import { baseUrl } from './http';
 export const SCREENSHOT_DIR = path.resolve(__dirname, '../../test-results/screenshots');
 
 // The profile folder goes when the browser closes, so runs do not pile them up in /tmp.
-export async function openBrowser(viewport = { width: 1280, height: 800 }): Promise<BrowserContext> {
+export async function openBrowser(viewport = { width: 1280, height: 800 }, { javaScriptEnabled = true } = {}): Promise<BrowserContext> {
   const profile = mkdtempSync(path.join(os.tmpdir(), 'tallyforge-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: '/usr/bin/chromium',
     headless: true,
     viewport,
+    javaScriptEnabled,
     baseURL: baseUrl(),
     args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
   });

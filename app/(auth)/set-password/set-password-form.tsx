@@ -1,6 +1,7 @@
 'use client';
 
-import { Form, Formik } from 'formik';
+import { Formik } from 'formik';
+import { ReadyForm } from '../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { apiFetch } from '../../_components/api-client';
@@ -34,14 +35,14 @@ export function SetPasswordForm({ token }: { token: string }) {
         }}
       >
         {({ isSubmitting }) => (
-          <Form noValidate className="space-y-4">
+          <ReadyForm noValidate className="space-y-4">
             <FormField name="password" type="password" label="New password" autoComplete="new-password" autoFocus />
             <FormField name="confirm" type="password" label="Same password again" autoComplete="new-password" />
             <FormMessage message={message} />
             <button type="submit" className="btn-primary w-full" disabled={isSubmitting || !token}>
               {isSubmitting ? 'Saving…' : 'Save and sign in'}
             </button>
-          </Form>
+          </ReadyForm>
         )}
       </Formik>
     </div>

@@ -1,6 +1,7 @@
 'use client';
 
-import { Form, Formik } from 'formik';
+import { Formik } from 'formik';
+import { ReadyForm } from '../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { apiFetch } from '../../_components/api-client';
@@ -32,14 +33,14 @@ export function SignInForm({ next }: { next: string }) {
         }}
       >
         {({ isSubmitting }) => (
-          <Form noValidate className="space-y-4">
+          <ReadyForm noValidate className="space-y-4">
             <FormField name="email" type="email" label="E-mail" autoComplete="username" autoFocus />
             <FormField name="password" type="password" label="Password" autoComplete="current-password" />
             <FormMessage message={message} />
             <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
               {isSubmitting ? 'Signing in…' : 'Sign in'}
             </button>
-          </Form>
+          </ReadyForm>
         )}
       </Formik>
     </div>

@@ -1,6 +1,7 @@
 'use client';
 
-import { Form, Formik } from 'formik';
+import { Formik } from 'formik';
+import { ReadyForm } from '../../_components/ready-form';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import * as yup from 'yup';
@@ -44,7 +45,7 @@ export function BinForm({ parts, containers }: { parts: Array<{ id: number; part
       }}
     >
       {({ isSubmitting }) => (
-        <Form noValidate className="card grid gap-4 sm:grid-cols-2 lg:grid-cols-5 lg:items-start" aria-label="Add a bin">
+        <ReadyForm noValidate className="card grid gap-4 sm:grid-cols-2 lg:grid-cols-5 lg:items-start" aria-label="Add a bin">
           <FormField name="code" label="Bin code" autoComplete="off" hint={BIN_CODE_HINT} />
           <SelectField name="partId" label="Part" options={[['', 'Choose a part'], ...parts.map((p) => [String(p.id), p.partNumber] as const)]} />
           <SelectField name="containerId" label="Container" options={[['', 'None'], ...containers.map((c) => [String(c.id), c.name] as const)]} />
@@ -57,7 +58,7 @@ export function BinForm({ parts, containers }: { parts: Array<{ id: number; part
           <div className="sm:col-span-2 lg:col-span-5">
             <FormMessage message={message} />
           </div>
-        </Form>
+        </ReadyForm>
       )}
     </Formik>
   );

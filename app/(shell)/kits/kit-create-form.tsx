@@ -1,6 +1,7 @@
 'use client';
 
-import { Form, Formik } from 'formik';
+import { Formik } from 'formik';
+import { ReadyForm } from '../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
 import type { KitDto } from '@/server/schemas/kits';
@@ -37,7 +38,7 @@ export function KitCreateForm({ onCreated, onCancel }: { onCreated: (kit: KitDto
       }}
     >
       {({ isSubmitting }) => (
-        <Form noValidate className="card space-y-4" aria-label="New kit">
+        <ReadyForm noValidate className="card space-y-4" aria-label="New kit">
           <h2 className="font-bold">New kit</h2>
           <div className="grid gap-4 md:grid-cols-[12rem_8rem_1fr]">
             <FormField name="code" label="Kit code" autoComplete="off" />
@@ -50,7 +51,7 @@ export function KitCreateForm({ onCreated, onCancel }: { onCreated: (kit: KitDto
             <button type="button" className="btn-quiet" onClick={onCancel}>Close</button>
             <FormMessage message={message} />
           </div>
-        </Form>
+        </ReadyForm>
       )}
     </Formik>
   );

@@ -1,6 +1,7 @@
 'use client';
 
-import { Field, Form, Formik } from 'formik';
+import { Field, Formik } from 'formik';
+import { ReadyForm } from '../../_components/ready-form';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import * as yup from 'yup';
@@ -43,7 +44,7 @@ export function OrderCreateForm({ kits }: { kits: KitChoice[] }) {
       }}
     >
       {({ isSubmitting, errors, touched }) => (
-        <Form noValidate className="card grid gap-4 lg:grid-cols-[minmax(0,1fr)_9rem_11rem_auto] lg:items-start" aria-label="New build order">
+        <ReadyForm noValidate className="card grid gap-4 lg:grid-cols-[minmax(0,1fr)_9rem_11rem_auto] lg:items-start" aria-label="New build order">
           <h2 className="lg:col-span-4 font-bold">New build order</h2>
           <div>
             <label htmlFor="f-kitId" className="field-label">Kit revision</label>
@@ -63,7 +64,7 @@ export function OrderCreateForm({ kits }: { kits: KitChoice[] }) {
           <div className="lg:col-span-4">
             <FormMessage message={message} />
           </div>
-        </Form>
+        </ReadyForm>
       )}
     </Formik>
   );

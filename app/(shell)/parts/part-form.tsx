@@ -1,6 +1,7 @@
 'use client';
 
-import { Field, Form, Formik } from 'formik';
+import { Field, Formik } from 'formik';
+import { ReadyForm } from '../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
 import type { PartDto } from '@/server/schemas/parts';
@@ -42,7 +43,7 @@ export function PartForm({ part, onSaved, onPhotoSaved, onCancel }: { part: Part
       }}
     >
       {({ isSubmitting }) => (
-        <Form noValidate className="card grid gap-4 md:grid-cols-[12rem_1fr_10rem] md:items-start" aria-label={part ? `Edit ${part.partNumber}` : 'New part'}>
+        <ReadyForm noValidate className="card grid gap-4 md:grid-cols-[12rem_1fr_10rem] md:items-start" aria-label={part ? `Edit ${part.partNumber}` : 'New part'}>
           <h2 className="md:col-span-3 font-bold">{part ? `Edit ${part.partNumber}` : 'New part'}</h2>
           <FormField name="partNumber" label="Part number" autoComplete="off" disabled={Boolean(part)} />
           <FormField name="description" label="Description" autoComplete="off" />
@@ -59,7 +60,7 @@ export function PartForm({ part, onSaved, onPhotoSaved, onCancel }: { part: Part
             <button type="button" className="btn-quiet" onClick={onCancel}>Close</button>
             <FormMessage message={message} />
           </div>
-        </Form>
+        </ReadyForm>
       )}
     </Formik>
   );

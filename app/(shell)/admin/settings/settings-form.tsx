@@ -1,6 +1,7 @@
 'use client';
 
-import { Field, Form, Formik } from 'formik';
+import { Field, Formik } from 'formik';
+import { ReadyForm } from '../../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { WEIGHT_UNITS } from '@/lib/weighing/units';
@@ -50,7 +51,7 @@ export function SettingsForm({ initial, zones, serverZone }: { initial: Settings
       }}
     >
       {({ isSubmitting }) => (
-        <Form noValidate className="card space-y-4">
+        <ReadyForm noValidate className="card space-y-4">
           <FormField name="siteName" label="Site name" />
           <div>
             <label htmlFor="f-displayUnit" className="field-label">Display unit</label>
@@ -88,7 +89,7 @@ export function SettingsForm({ initial, zones, serverZone }: { initial: Settings
           <FormMessage message={message} />
           <p role="status" aria-live="polite" className="text-sm text-ok">{saved ? 'Saved.' : ''}</p>
           <button type="submit" className="btn-primary" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Save settings'}</button>
-        </Form>
+        </ReadyForm>
       )}
     </Formik>
   );

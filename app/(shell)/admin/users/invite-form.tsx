@@ -1,6 +1,7 @@
 'use client';
 
-import { Field, Form, Formik } from 'formik';
+import { Field, Formik } from 'formik';
+import { ReadyForm } from '../../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { ROLE_LABELS, ROLES, type Role } from '@/lib/roles';
@@ -33,7 +34,7 @@ export function InviteForm({ onInvited }: { onInvited: (user: UserDto, mail: str
       }}
     >
       {({ isSubmitting }) => (
-        <Form noValidate className="card grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)_12rem_auto] lg:items-start" aria-label="Invite someone">
+        <ReadyForm noValidate className="card grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)_12rem_auto] lg:items-start" aria-label="Invite someone">
           <FormField name="name" label="Name" autoComplete="off" />
           <FormField name="email" type="email" label="E-mail" autoComplete="off" />
           <div>
@@ -52,7 +53,7 @@ export function InviteForm({ onInvited }: { onInvited: (user: UserDto, mail: str
           <div className="lg:col-span-4">
             <FormMessage message={message} />
           </div>
-        </Form>
+        </ReadyForm>
       )}
     </Formik>
   );

@@ -1,6 +1,7 @@
 'use client';
 
-import { Form, Formik } from 'formik';
+import { Formik } from 'formik';
+import { ReadyForm } from '../../../_components/ready-form';
 import { useRef, useState } from 'react';
 import * as yup from 'yup';
 import type { PendingVariance } from '@/server/services/bins/pending-variances';
@@ -42,7 +43,7 @@ export function VarianceDecision({ variance, onDecided }: { variance: PendingVar
       }}
     >
       {({ isSubmitting, submitForm }) => (
-        <Form noValidate className="space-y-2" aria-label={`Decide on ${variance.binCode}`}>
+        <ReadyForm noValidate className="space-y-2" aria-label={`Decide on ${variance.binCode}`}>
           <FormField name="note" id={`note-${variance.id}`} label="Note (optional)" autoComplete="off" placeholder="e.g. found a torn bag" />
           <FormMessage message={message} />
           <div className="flex flex-wrap gap-2">
@@ -50,7 +51,7 @@ export function VarianceDecision({ variance, onDecided }: { variance: PendingVar
             <button type="button" className="btn-danger" disabled={isSubmitting || pending !== null} onClick={() => ask('reject', submitForm)}>Reject</button>
           </div>
           <ConfirmBar pending={pending} onDone={() => setPending(null)} tone={decision.current === 'approve' ? 'primary' : 'danger'} />
-        </Form>
+        </ReadyForm>
       )}
     </Formik>
   );

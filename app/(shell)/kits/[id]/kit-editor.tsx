@@ -1,6 +1,7 @@
 'use client';
 
-import { Form, Formik } from 'formik';
+import { Formik } from 'formik';
+import { ReadyForm } from '../../../_components/ready-form';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import * as yup from 'yup';
@@ -48,7 +49,7 @@ export function KitEditor({ kit, canEdit }: { kit: KitDto; canEdit: boolean }) {
         }}
       >
         {({ isSubmitting }) => (
-          <Form noValidate className="card space-y-4" aria-label="Bill of material">
+          <ReadyForm noValidate className="card space-y-4" aria-label="Bill of material">
             <FormField name="description" label="Description" autoComplete="off" />
             <ComponentsEditor />
             <div className="flex flex-wrap gap-3 items-center">
@@ -56,7 +57,7 @@ export function KitEditor({ kit, canEdit }: { kit: KitDto; canEdit: boolean }) {
               <p role="status" aria-live="polite" className="text-sm text-ok">{saved ? 'Saved.' : ''}</p>
               <FormMessage message={message} />
             </div>
-          </Form>
+          </ReadyForm>
         )}
       </Formik>
       <KitRevisionActions kit={current} onChanged={setCurrent} />

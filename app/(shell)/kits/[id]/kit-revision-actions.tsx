@@ -1,6 +1,7 @@
 'use client';
 
-import { Form, Formik } from 'formik';
+import { Formik } from 'formik';
+import { ReadyForm } from '../../../_components/ready-form';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import * as yup from 'yup';
@@ -41,12 +42,12 @@ export function KitRevisionActions({ kit, onChanged }: { kit: KitDto; onChanged:
         }}
       >
         {({ isSubmitting }) => (
-          <Form noValidate className="flex flex-wrap items-start gap-3" aria-label="Copy to a new revision">
+          <ReadyForm noValidate className="flex flex-wrap items-start gap-3" aria-label="Copy to a new revision">
             <div className="w-40">
               <FormField name="revision" label="New revision" autoComplete="off" />
             </div>
             <button type="submit" className="btn-quiet md:mt-6" disabled={isSubmitting}>Copy to new revision</button>
-          </Form>
+          </ReadyForm>
         )}
       </Formik>
       <div className="flex flex-wrap items-center gap-3">

@@ -1,6 +1,7 @@
 'use client';
 
-import { Form, Formik } from 'formik';
+import { Formik } from 'formik';
+import { ReadyForm } from '../../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
 import type { OrderDto } from '@/server/schemas/orders';
@@ -64,7 +65,7 @@ export function OrderActions({ order, onChanged }: { order: OrderDto; onChanged:
           }}
         >
           {({ errors, touched, getFieldProps }) => (
-            <Form noValidate className="space-y-2" aria-label="Complete the order">
+            <ReadyForm noValidate className="space-y-2" aria-label="Complete the order">
               {notIn ? (
                 <div>
                   <label htmlFor="f-overrideReason" className="field-label">
@@ -77,7 +78,7 @@ export function OrderActions({ order, onChanged }: { order: OrderDto; onChanged:
                 <p className="text-ok">Every line is in tolerance.</p>
               )}
               <button type="submit" className={notIn ? 'btn-quiet' : 'btn-primary'} disabled={busy}>{notIn ? 'Complete with this reason' : 'Complete the order'}</button>
-            </Form>
+            </ReadyForm>
           )}
         </Formik>
       ) : null}

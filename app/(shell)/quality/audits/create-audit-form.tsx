@@ -1,6 +1,7 @@
 'use client';
 
-import { Form, Formik } from 'formik';
+import { Formik } from 'formik';
+import { ReadyForm } from '../../../_components/ready-form';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import * as yup from 'yup';
@@ -48,7 +49,7 @@ export function CreateAuditForm({ parts, operators, scales, today, monthAgo }: {
       }}
     >
       {({ isSubmitting }) => (
-        <Form noValidate className="card space-y-4" aria-label="Start an audit">
+        <ReadyForm noValidate className="card space-y-4" aria-label="Start an audit">
           <h2 className="font-bold">Start an audit</h2>
           <p className="text-sm text-ink-soft">The lot is every count captured in the period that matches the filters; the sample is drawn at random with a recorded seed.</p>
           <div className="grid gap-4 grid-cols-2 lg:grid-cols-4">
@@ -64,7 +65,7 @@ export function CreateAuditForm({ parts, operators, scales, today, monthAgo }: {
           </div>
           <FormMessage message={message} />
           <button type="submit" className="btn-primary" disabled={isSubmitting}>{isSubmitting ? 'Drawing the sample…' : 'Draw the sample'}</button>
-        </Form>
+        </ReadyForm>
       )}
     </Formik>
   );

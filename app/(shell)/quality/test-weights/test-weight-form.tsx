@@ -1,6 +1,7 @@
 'use client';
 
-import { Form, Formik } from 'formik';
+import { Formik } from 'formik';
+import { ReadyForm } from '../../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { NOMINAL_VALUES_G, WEIGHT_CLASSES } from '@/lib/metrology/weight-classes';
@@ -39,7 +40,7 @@ export function TestWeightForm({ onCreated }: { onCreated: (w: TestWeightDto) =>
       }}
     >
       {({ isSubmitting }) => (
-        <Form noValidate className="card grid gap-4 sm:grid-cols-2 lg:grid-cols-[1fr_9rem_7rem_1fr_10rem_auto] lg:items-start" aria-label="Add a test weight">
+        <ReadyForm noValidate className="card grid gap-4 sm:grid-cols-2 lg:grid-cols-[1fr_9rem_7rem_1fr_10rem_auto] lg:items-start" aria-label="Add a test weight">
           <FormField name="identifier" label="Identifier" autoComplete="off" placeholder="e.g. TW-1K-03" />
           <SelectField name="nominal" label="Nominal" options={NOMINAL_VALUES_G.map((g) => [String(g), formatGrams(g)])} />
           <SelectField name="weightClass" label="Class" options={WEIGHT_CLASSES.map((c) => [c, c])} />
@@ -51,7 +52,7 @@ export function TestWeightForm({ onCreated }: { onCreated: (w: TestWeightDto) =>
           <div className="sm:col-span-2 lg:col-span-6">
             <FormMessage message={message} />
           </div>
-        </Form>
+        </ReadyForm>
       )}
     </Formik>
   );

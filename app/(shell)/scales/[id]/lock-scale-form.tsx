@@ -1,6 +1,7 @@
 'use client';
 
-import { Form, Formik } from 'formik';
+import { Formik } from 'formik';
+import { ReadyForm } from '../../../_components/ready-form';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import * as yup from 'yup';
@@ -42,14 +43,14 @@ export function LockScaleForm({ scaleId, locked }: { scaleId: number; locked: bo
       }}
     >
       {({ isSubmitting }) => (
-        <Form noValidate className="card space-y-3 border-fault/40" aria-label="Lock out this scale">
+        <ReadyForm noValidate className="card space-y-3 border-fault/40" aria-label="Lock out this scale">
           <h2 className="font-bold">{locked ? 'Change the lock-out reason' : 'Lock out this scale'}</h2>
           <p className="text-sm text-ink-soft">No one can capture counts on a locked scale. It returns to service when a passing test is recorded.</p>
           <FormField name="reason" label="Reason" autoComplete="off" placeholder="e.g. dropped while moving the bench" />
           <FormMessage message={message} />
           <button type="submit" className="btn-danger" disabled={isSubmitting || pending !== null}>Lock out…</button>
           <ConfirmBar pending={pending} onDone={() => setPending(null)} />
-        </Form>
+        </ReadyForm>
       )}
     </Formik>
   );

@@ -1,6 +1,7 @@
 'use client';
 
-import { Field, FieldArray, Form, Formik, useFormikContext } from 'formik';
+import { Field, FieldArray, Formik, useFormikContext } from 'formik';
+import { ReadyForm } from '../../../_components/ready-form';
 import { useRouter } from 'next/navigation';
 import { useState, type ReactNode } from 'react';
 import type { CalibrationVerdict } from '@/lib/metrology/evaluate-calibration';
@@ -125,7 +126,7 @@ export function RecordTestForm({ scale, weights }: { scale: ScaleDto; weights: T
       {({ isSubmitting, values }) => (
         <TestForm scale={scale} values={values}>
           {(verdict, problem) => (
-            <Form noValidate className="card space-y-4" aria-label="Record a test">
+            <ReadyForm noValidate className="card space-y-4" aria-label="Record a test">
               <div className="grid gap-4 lg:grid-cols-3">
                 <SelectField name="stage" label="Limits" options={[['in_service', 'In service (2 × MPE)'], ['initial', 'Initial verification']]} />
                 <FormField name="performedAt" type="date" label="Tested on" />
@@ -147,7 +148,7 @@ export function RecordTestForm({ scale, weights }: { scale: ScaleDto; weights: T
               <FormMessage message={message} />
               <p role="status" aria-live="polite" className="text-sm font-medium" data-testid="test-outcome">{outcome}</p>
               <button type="submit" className="btn-primary" disabled={isSubmitting || !usable.length}>{isSubmitting ? 'Saving…' : 'Save test record'}</button>
-            </Form>
+            </ReadyForm>
           )}
         </TestForm>
       )}

@@ -1,6 +1,7 @@
 'use client';
 
-import { Field, Form, Formik, useFormikContext } from 'formik';
+import { Field, Formik, useFormikContext } from 'formik';
+import { ReadyForm } from '../../../_components/ready-form';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import * as yup from 'yup';
@@ -112,7 +113,7 @@ export function ScaleProfileForm({ scale }: { scale?: ScaleDto }) {
       }}
     >
       {({ isSubmitting }) => (
-        <Form noValidate className="card space-y-4" aria-label={scale ? 'Scale profile' : 'New scale'}>
+        <ReadyForm noValidate className="card space-y-4" aria-label={scale ? 'Scale profile' : 'New scale'}>
           <div className="grid gap-4 sm:grid-cols-2">
             <FormField name="name" label="Name" autoComplete="off" />
             <FormField name="location" label="Location" autoComplete="off" />
@@ -133,7 +134,7 @@ export function ScaleProfileForm({ scale }: { scale?: ScaleDto }) {
           <button type="submit" className="btn-primary" disabled={isSubmitting}>
             {isSubmitting ? 'Saving…' : scale ? 'Save profile' : 'Add scale'}
           </button>
-        </Form>
+        </ReadyForm>
       )}
     </Formik>
   );
