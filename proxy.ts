@@ -2,6 +2,7 @@ import { NextResponse, type NextRequest } from 'next/server';
 import { sealData, unsealData } from 'iron-session';
 import { isIdleExpired, REFRESH_AFTER_MS, SESSION_COOKIE, sessionOptions, type SessionData } from '@/server/auth/session-options';
 import { isCrossSite } from '@/server/http/reject-cross-site';
+import { requestIdOf } from '@/server/http/request-id';
 
 const PUBLIC_PAGES = ['/sign-in', '/set-password'];
 
@@ -22,19 +23,12 @@ export async function proxy(req: NextRequest): Promise<NextResponse> {
   }
   // A cookie that looks live; the server still checks its session row on every request.
   const live = Boolean(data.sid) && !isIdleExpired(data, now);
-  const isApi = pathname.startsWith('/api/');
-  // Next's router answers a bare text 500 for a path that is not valid percent-encoded UTF-8
-  // (it fails decoding the [id] before any handler runs): API callers get the usual JSON 400.
-  if (isApi && !decodes(pathname)) {
-    return NextResponse.json({ error: { code: 'bad_request', message: 'The address is not valid (bad percent-encoding)' } }, { status: 400 });
-  }
-
   // A server action posted from another site: refused here with 403 (Next's own check would answer 500).
-  if (!isApi && req.headers.has('next-action') && isCrossSite(req)) {
+  if (req.headers.has('next-action') && isCrossSite(req)) {
     return new NextResponse('Cross-site requests are not accepted', { status: 403, headers: { 'content-type': 'text/plain; charset=utf-8' } });
   }
 
-  if (!live && !isApi && !PUBLIC_PAGES.includes(pathname)) {
+  if (!live && !PUBLIC_PAGES.includes(pathname)) {
     const target = new URL('/sign-in', req.url);
     if (pathname !== '/') target.searchParams.set('next', pathname + search);
     const res = NextResponse.redirect(target);
@@ -42,25 +36,14 @@ export async function proxy(req: NextRequest): Promise<NextResponse> {
     return res;
   }
 
-  // A caller's own id is kept when it is a plain token, so a retry can be traced end to end.
-  const offered = req.headers.get('x-request-id');
-  const requestId = offered && /^[\w.:-]{1,100}$/.test(offered) ? offered : crypto.randomUUID();
-  const res = isApi ? NextResponse.next({ request: { headers: withHeader(req.headers, 'x-request-id', requestId) } }) : withContentSecurityPolicy(req, requestId);
+  const requestId = requestIdOf(req.headers);
+  const res = withContentSecurityPolicy(req, requestId);
   res.headers.set('x-request-id', requestId);
   if (live && now - (data.seenAt ?? 0) > REFRESH_AFTER_MS) {
     const fresh = await sealData({ ...data, seenAt: now }, { password: options.password, ttl: options.ttl });
     res.cookies.set(SESSION_COOKIE, fresh, { ...options.cookieOptions, maxAge: (options.ttl ?? 0) - 60 });
   }
   return res;
-}
-
-function decodes(pathname: string): boolean {
-  try {
-    decodeURIComponent(pathname);
-    return true;
-  } catch {
-    return false;
-  }
 }
 
 // A fresh nonce per page: Next puts it on its own scripts, and nothing else may run.
@@ -93,6 +76,9 @@ function withContentSecurityPolicy(req: NextRequest, requestId: string): NextRes
   return res;
 }
 
+// Pages only. Next hands a request to the proxy only after buffering its body (up to 10 MB), so API
+// addresses, which take bodies and refuse oversized ones themselves, never pass through here: route()
+// gives them their request id and session refresh, and scripts/serve.ts their bad-address answer.
 export const config = {
-  matcher: ['/((?!_next/static|_next/image|favicon.ico|icon.svg).*)'],
+  matcher: ['/((?!api/|_next/static|_next/image|favicon.ico|icon.svg).*)'],
 };

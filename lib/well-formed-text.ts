@@ -5,3 +5,14 @@ const LONE_SURROGATE = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[
 export function isWellFormedText(text: string): boolean {
   return !LONE_SURROGATE.test(text);
 }
+
+// A path whose %XX escapes do not spell UTF-8 ("%E0%A4%A", "%FF") names nothing (RFC 3986 §2.1 with
+// RFC 3629); decodeURIComponent throws a URIError on exactly those.
+export function isWellFormedPath(path: string): boolean {
+  try {
+    decodeURIComponent(path);
+    return true;
+  } catch {
+    return false;
+  }
+}

@@ -6,6 +6,7 @@ import http from 'node:http';
 import path from 'node:path';
 import next from 'next';
 import { PEER_HEADER } from '../lib/peer-header';
+import { isWellFormedPath } from '../lib/well-formed-text';
 
 const port = Number(process.env.PORT ?? 3000);
 const hostname = process.env.HOST ?? '127.0.0.1';
@@ -20,6 +21,7 @@ async function main(): Promise<void> {
   const handle = app.getRequestHandler();
   const server = http.createServer((req, res) => {
     req.headers[PEER_HEADER] = req.socket.remoteAddress ?? '';
+    if (isMalformedApiAddress(req.url ?? '/')) return refuseMalformedAddress(res);
     void handle(req, res);
   });
   server.listen(port, hostname, () => console.log(`Tallyforge serving on http://${hostname}:${port}`));
@@ -36,6 +38,19 @@ async function main(): Promise<void> {
   };
   process.once('SIGTERM', () => stop(143));
   process.once('SIGINT', () => stop(130));
+}
+
+// Next's router fails decoding such a path before any handler runs and answers a bare text 500; API
+// callers get the JSON error shape instead. (Pages are left to Next.)
+function isMalformedApiAddress(url: string): boolean {
+  const pathname = url.split('?', 1)[0];
+  return pathname.startsWith('/api/') && !isWellFormedPath(pathname);
+}
+
+function refuseMalformedAddress(res: http.ServerResponse): void {
+  const body = JSON.stringify({ error: { code: 'bad_request', message: 'The address is not valid (bad percent-encoding)' } });
+  res.writeHead(400, { 'Content-Type': 'application/json', 'Cache-Control': 'no-store', 'Content-Length': Buffer.byteLength(body) });
+  res.end(body);
 }
 
 main().catch((err) => {

@@ -72,3 +72,15 @@ export async function endSessionsOf(userId: number, reason: SessionEndReason, tr
   const [ended] = await UserSession.update({ endedAt: new Date(), endReason: reason }, { where: { userId, endedAt: null, expiresAt: { [Op.gt]: new Date() } }, transaction });
   return ended;
 }
+
+/**
+ * Rolls the cookie's idle clock forward, at most once a minute, for a signed-in request to the API (pages
+ * get theirs in proxy.ts): a bench that only talks to the API all shift keeps its session.
+ */
+export async function keepSessionFresh(): Promise<void> {
+  const session = await getSession();
+  const now = Date.now();
+  if (!session.sid || now - (session.seenAt ?? 0) <= REFRESH_AFTER_MS) return;
+  session.seenAt = now;
+  await session.save();
+}

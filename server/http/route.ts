@@ -3,11 +3,12 @@ import type { NextRequest } from 'next/server';
 import type { z } from 'zod';
 import type { Permission } from '@/lib/roles';
 import { requirePermission, requireUser } from '../auth/authorize';
-import { getCurrentUser, type SessionUser } from '../auth/session';
+import { getCurrentUser, keepSessionFresh, type SessionUser } from '../auth/session';
 import { AppError } from '../errors';
 import { errorResponse } from './errors-to-response';
 import { assertJsonShape, JSON_BODY_LIMIT, readBodyText } from './read-body';
 import { rejectCrossSite } from './reject-cross-site';
+import { requestIdOf } from './request-id';
 import { zodFields } from './zod-fields';
 
 type Access = Permission | 'signed-in' | 'public';
@@ -30,33 +31,39 @@ export interface RouteContext<A extends Access, B, Q, P> {
   params: Parsed<P>;
 }
 
-// Thin wrapper: reject cross-site writes, authorize, parse with zod, run one service, answer.
+// Thin wrapper: reject cross-site writes, authorize, parse with zod, run one service, answer. Every answer
+// carries the request's id and no-store unless the handler chose its own caching: answers about people
+// and stock are never kept by a browser or a proxy on the way.
 // A handler returns a Response, a plain object (200 JSON) or nothing (204).
 export function route<A extends Access, B extends z.ZodType | undefined = undefined, Q extends z.ZodType | undefined = undefined, P extends z.ZodType | undefined = undefined>(
   spec: RouteSpec<A, B, Q, P>,
   handler: (ctx: RouteContext<A, B, Q, P>) => Promise<unknown>,
 ) {
   return async (req: NextRequest, ctx: { params: Promise<Record<string, string | string[]>> }): Promise<Response> => {
+    const requestId = requestIdOf(req.headers);
+    const res = await answer(req, ctx, requestId);
+    res.headers.set('x-request-id', requestId);
+    if (!res.headers.has('Cache-Control')) res.headers.set('Cache-Control', 'no-store');
+    return res;
+  };
+
+  async function answer(req: NextRequest, ctx: { params: Promise<Record<string, string | string[]>> }, requestId: string): Promise<Response> {
     try {
       rejectCrossSite(req);
       const user =
         spec.access === 'public' ? await getCurrentUser() : spec.access === 'signed-in' ? await requireUser() : await requirePermission(spec.access as Permission);
+      if (user) await keepSessionFresh();
       const params = parseWith(spec.params, await ctx.params, 'Bad address');
       const query = parseWith(spec.query, Object.fromEntries(req.nextUrl.searchParams), 'Bad query');
       const body = spec.body ? parseWith(spec.body, await readJson(req, spec.maxBodyBytes ?? JSON_BODY_LIMIT), 'Some fields need attention') : undefined;
       const result = await handler({ req, user, body, query, params } as RouteContext<A, B, Q, P>);
-      if (result instanceof Response) {
-        if (!result.headers.has('Cache-Control')) result.headers.set('Cache-Control', 'no-store');
-        return result;
-      }
-      if (result === undefined) return new Response(null, { status: 204, headers: NO_STORE });
-      return Response.json(result, { headers: NO_STORE });
+      if (result instanceof Response) return result;
+      if (result === undefined) return new Response(null, { status: 204 });
+      return Response.json(result);
     } catch (err) {
-      const res = errorResponse(err, req.headers.get('x-request-id'));
-      res.headers.set('Cache-Control', 'no-store');
-      return res;
+      return errorResponse(err, requestId);
     }
-  };
+  }
 }
 
 function parseWith(schema: z.ZodType | undefined, value: unknown, message: string): unknown {
@@ -65,9 +72,6 @@ function parseWith(schema: z.ZodType | undefined, value: unknown, message: strin
   if (!parsed.success) throw new AppError('validation_failed', message, { fields: zodFields(parsed.error) });
   return parsed.data;
 }
-
-// Answers about people and stock are never kept by a browser or a proxy on the way.
-const NO_STORE = { 'Cache-Control': 'no-store' };
 
 async function readJson(req: NextRequest, limit: number): Promise<unknown> {
   const text = await readBodyText(req, limit);
@@ -88,7 +92,7 @@ async function readJson(req: NextRequest, limit: number): Promise<unknown> {
 }
 
 export function created(data: unknown): Response {
-  return Response.json(data, { status: 201, headers: NO_STORE });
+  return Response.json(data, { status: 201 });
 }
 
 // application/json or a +json type (RFC 6839), in UTF-8: the only charset JSON text may use on the wire (RFC 8259 §8.1).

@@ -1,11 +1,12 @@
 import http from 'node:http';
 import { describe, expect, it } from 'vitest';
+import { createPart, createUser, TEST_PASSWORD } from '../helpers/db';
 import { anonymous, baseUrl, signedIn } from '../helpers/http';
 
 // A raw request, so the body can be sent without a declared length (chunked), as an attacker may.
-function chunkedPost(path: string, chunks: number, chunkBytes: number): Promise<{ status: number; body: string }> {
+function chunkedPost(path: string, chunks: number, chunkBytes: number, { method = 'POST', headers = {} as Record<string, string> } = {}): Promise<{ status: number; body: string }> {
   return new Promise((resolve, reject) => {
-    const req = http.request(new URL(path, baseUrl()), { method: 'POST', headers: { 'Content-Type': 'application/json', 'Transfer-Encoding': 'chunked' } }, (res) => {
+    const req = http.request(new URL(path, baseUrl()), { method, headers: { 'Content-Type': 'application/json', 'Transfer-Encoding': 'chunked', ...headers } }, (res) => {
       let body = '';
       res.on('data', (d) => (body += d));
       res.on('end', () => resolve({ status: res.statusCode ?? 0, body }));
@@ -35,6 +36,26 @@ describe('request body limits', () => {
 
   it('stops reading a body sent without a length once it passes the limit', async () => {
     const res = await chunkedPost('/api/v1/session', 200, 1024);
+    expect(res.status).toBe(413);
+  });
+
+  it('stops reading an upload sent without a length once it passes the upload limit, before parsing it', async () => {
+    const user = await createUser('clerk');
+    const signIn = await anonymous().post('/api/v1/session').send({ email: user.email, password: TEST_PASSWORD });
+    const cookie = ([] as string[]).concat(signIn.headers['set-cookie'] ?? []).map((c) => c.split(';')[0]).join('; ');
+    const part = await createPart();
+    const res = await chunkedPost(`/api/v1/parts/${part.id}/photo`, 6 * 1024, 1024, {
+      method: 'PUT',
+      headers: { Cookie: cookie, 'Content-Type': 'multipart/form-data; boundary=x' },
+    });
+    expect(res.status).toBe(413);
+    expect(JSON.parse(res.body).error.code).toBe('payload_too_large');
+  });
+
+  it('gets its 413 to a client that writes the whole oversized body before reading, on a connection that then closes', async () => {
+    // supertest asks for Connection: close and reads only once its 6 MB are written.
+    const { agent } = await signedIn('planner');
+    const res = await agent.post('/api/v1/kits').set('Content-Type', 'application/json').send(`${' '.repeat(6_000_000)}{}`);
     expect(res.status).toBe(413);
   });
 

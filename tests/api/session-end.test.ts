@@ -1,3 +1,4 @@
+import { sealData, unsealData } from 'iron-session';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { User, UserSession } from '../../models';
@@ -98,5 +99,23 @@ describe('sessions the server ends', () => {
     const bad = await admin.patch('/api/v1/settings').send({ sessionHours: 0, version: settings.version });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields.sessionHours).toMatch(/At least 1/);
+  });
+
+  it('rolls the cookie forward for a client that only talks to the API, at most once a minute', async () => {
+    const user = await createUser('operator');
+    const cookie = await signInCookie(user.email);
+    const password = process.env.SESSION_SECRET!;
+    const data = await unsealData<{ sid: string; seenAt: number }>(decodeURIComponent(cookie.split('=')[1]), { password });
+    // A fresh cookie is left as it is.
+    expect((await whoAmI(cookie)).headers['set-cookie']).toBeUndefined();
+    // Last rolled five minutes ago: the answer carries a cookie whose clock reads now.
+    const older = `tf_session=${await sealData({ ...data, seenAt: Date.now() - 5 * 60_000 }, { password })}`;
+    const res = await whoAmI(older);
+    expect(res.status).toBe(200);
+    const rolled = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('tf_session='));
+    expect(rolled).toMatch(/HttpOnly/i);
+    const fresh = await unsealData<{ sid: string; seenAt: number }>(decodeURIComponent(rolled!.split(';')[0].split('=')[1]), { password });
+    expect(fresh.sid).toBe(data.sid);
+    expect(Math.abs(fresh.seenAt - Date.now())).toBeLessThan(30_000);
   });
 });

@@ -1,6 +1,4 @@
-import { AppError } from '@/server/errors';
-import { MAX_UPLOAD_BYTES } from '@/lib/file-kind';
-import { assertDeclaredSize, UPLOAD_ENVELOPE_BYTES } from '@/server/http/read-body';
+import { readUploadForm } from '@/server/http/read-body';
 import { route } from '@/server/http/route';
 import { idParamSchema } from '@/server/schemas/common';
 import { readPartPhoto, savePartPhoto } from '@/server/services/parts/part-photo';
@@ -13,9 +11,6 @@ export const GET = route({ access: 'catalog.read', params: idParamSchema }, asyn
 
 // multipart/form-data with one field "photo" (JPEG, PNG or WebP, at most 5 MB).
 export const PUT = route({ access: 'parts.edit', params: idParamSchema }, async ({ req, params }) => {
-  assertDeclaredSize(req, MAX_UPLOAD_BYTES + UPLOAD_ENVELOPE_BYTES);
-  const form = await req.formData().catch(() => {
-    throw new AppError('validation_failed', 'Send the photo as multipart/form-data', { fields: { photo: 'a file is required' } });
-  });
+  const form = await readUploadForm(req, 'photo', 'photo');
   return { part: await savePartPhoto({ partId: params.id, file: form.get('photo') }) };
 });
