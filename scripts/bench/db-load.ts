@@ -6,11 +6,10 @@
 //   primaryKey   a bare MariaDB primary-key lookup behind a plain node:http server (primary-key-server.ts).
 // Appends the figures and the ratios of the two routes to the two floors to bench-results/load.json.
 import autocannon from 'autocannon';
-import { execSync, spawn, type ChildProcess } from 'node:child_process';
+import { execSync, type ChildProcess } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
-import path from 'node:path';
 import { Part, Scale, User } from '../../models';
 import { hashPassword } from '../../server/auth/passwords';
 import { REFRESH_AFTER_MS } from '../../server/auth/session-options';
@@ -18,6 +17,7 @@ import { getDb } from '../../server/db';
 import { getEnv } from '../../server/env';
 import { freePort, startApp } from '../next-start';
 import { signIn } from './bench-sign-in';
+import { startPrimaryKeyServer } from './primary-key-floor';
 
 const CONNECTIONS = 32;
 const WARMUP_S = 2;
@@ -74,25 +74,6 @@ async function benchWorld(password: string): Promise<{ email: string; partId: nu
     calibrationDueAt: null,
   });
   return { email: user.email, partId: part.id, scaleId: scale.id };
-}
-
-// Signs in once through the public API (the sign-in throttle counts failures per e-mail and address).
-
-async function startPrimaryKeyServer(partId: number): Promise<{ url: string; child: ChildProcess }> {
-  const port = await freePort();
-  const url = `http://127.0.0.1:${port}`;
-  const child = spawn(path.join(__dirname, '../../node_modules/.bin/tsx'), ['--conditions=react-server', path.join(__dirname, 'primary-key-server.ts'), String(port), String(partId)], { stdio: ['ignore', 'inherit', 'inherit'] });
-  for (let i = 0; i < 100; i++) {
-    if (child.exitCode !== null) throw new Error('the primary-key server exited early');
-    try {
-      if ((await fetch(url)).ok) return { url, child };
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  child.kill('SIGKILL');
-  throw new Error('the primary-key server did not answer in time');
 }
 
 function fire(target: Target, seconds: number): Promise<Measured> {
