@@ -10,6 +10,8 @@ const securityHeaders = [
 const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
+  // forbidden(): a page a role may not see answers 403 with its explanation, not a redirect.
+  experimental: { authInterrupts: true },
   serverExternalPackages: ['sequelize', 'mariadb', 'pino', 'smtp-server', 'mailparser', 'bwip-js', 'pdf-lib', '@pdf-lib/fontkit', 'ipp', 'piscina'],
   async headers() {
     return [{ source: '/:path*', headers: securityHeaders }];

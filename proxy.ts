@@ -3,6 +3,7 @@ import { sealData, unsealData } from 'iron-session';
 import { isIdleExpired, REFRESH_AFTER_MS, SESSION_COOKIE, sessionOptions, type SessionData } from '@/server/auth/session-options';
 import { isCrossSite } from '@/server/http/reject-cross-site';
 import { requestIdOf } from '@/server/http/request-id';
+import { PAGE_PATH_HEADER } from '@/lib/internal-headers';
 
 const PUBLIC_PAGES = ['/sign-in', '/set-password'];
 
@@ -69,6 +70,7 @@ function withContentSecurityPolicy(req: NextRequest, requestId: string): NextRes
     "frame-ancestors 'none'",
   ].join('; ');
   const headers = withHeader(req.headers, 'x-request-id', requestId);
+  headers.set(PAGE_PATH_HEADER, req.nextUrl.pathname);
   headers.set('x-nonce', nonce);
   headers.set('Content-Security-Policy', policy);
   const res = NextResponse.next({ request: { headers } });

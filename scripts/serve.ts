@@ -5,8 +5,10 @@
 import http from 'node:http';
 import path from 'node:path';
 import next from 'next';
-import { PEER_HEADER } from '../lib/peer-header';
+import { PEER_HEADER } from '../lib/internal-headers';
 import { isWellFormedPath } from '../lib/well-formed-text';
+import { watchDatabase } from '../server/http/database-watch';
+import { UNAVAILABLE_CSP, UNAVAILABLE_RETRY_S, unavailablePage } from '../server/http/unavailable-page';
 
 const port = Number(process.env.PORT ?? 3000);
 const hostname = process.env.HOST ?? '127.0.0.1';
@@ -19,9 +21,12 @@ async function main(): Promise<void> {
   const app = next({ dev: false, dir: path.resolve(__dirname, '..'), hostname, port });
   await app.prepare();
   const handle = app.getRequestHandler();
+  const ownAddress = hostname === '0.0.0.0' || hostname === '::' ? '127.0.0.1' : hostname;
+  const database = watchDatabase(`http://${ownAddress.includes(':') ? `[${ownAddress}]` : ownAddress}:${port}/api/v1/health`);
   const server = http.createServer((req, res) => {
     req.headers[PEER_HEADER] = req.socket.remoteAddress ?? '';
     if (isMalformedApiAddress(req.url ?? '/')) return refuseMalformedAddress(res);
+    if (database.isDown() && isPageRequest(req)) return answerUnavailable(res);
     void handle(req, res);
   });
   server.listen(port, hostname, () => console.log(`Tallyforge serving on http://${hostname}:${port}`));
@@ -29,6 +34,7 @@ async function main(): Promise<void> {
   // Stop as `next start` does: take no new connections, let requests in flight finish, then exit with the
   // signal's code. Kept-alive connections are closed as soon as they fall idle.
   const stop = (code: number) => {
+    database.stop();
     const idle = setInterval(() => server.closeIdleConnections(), 100);
     server.close(() => {
       clearInterval(idle);
@@ -50,6 +56,25 @@ function isMalformedApiAddress(url: string): boolean {
 function refuseMalformedAddress(res: http.ServerResponse): void {
   const body = JSON.stringify({ error: { code: 'bad_request', message: 'The address is not valid (bad percent-encoding)' } });
   res.writeHead(400, { 'Content-Type': 'application/json', 'Cache-Control': 'no-store', 'Content-Length': Buffer.byteLength(body) });
+  res.end(body);
+}
+
+// A page (not the API, which answers its own JSON 503, nor the built assets) asked for by a browser.
+function isPageRequest(req: http.IncomingMessage): boolean {
+  const pathname = (req.url ?? '/').split('?', 1)[0];
+  return (req.method === 'GET' || req.method === 'HEAD') && !pathname.startsWith('/api/') && !pathname.startsWith('/_next/') && !/\.\w+$/.test(pathname);
+}
+
+function answerUnavailable(res: http.ServerResponse): void {
+  const body = unavailablePage();
+  res.writeHead(503, {
+    'Content-Type': 'text/html; charset=utf-8',
+    'Content-Length': Buffer.byteLength(body),
+    'Retry-After': String(UNAVAILABLE_RETRY_S),
+    'Cache-Control': 'no-store',
+    'Content-Security-Policy': UNAVAILABLE_CSP,
+    'X-Content-Type-Options': 'nosniff',
+  });
   res.end(body);
 }
 

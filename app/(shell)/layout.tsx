@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { navFor } from '@/lib/navigation';
 import { ROLE_LABELS } from '@/lib/roles';
-import { requirePageUser } from '@/server/auth/authorize';
+import { requireShellUser } from '@/server/auth/authorize';
 import { siteTimeZone } from '@/server/services/settings/get-settings';
 import { Wordmark } from '../_components/mark';
 import { SiteTimeProvider } from '../_components/site-time';
@@ -33,7 +33,7 @@ function WhoIsHere({ name, role, timeZone }: { name: string; role: string; timeZ
 
 // At desk width a sidebar; below it (portrait tablets) a bar whose Menu folds the same links out.
 export default async function ShellLayout({ children }: { children: ReactNode }) {
-  const user = await requirePageUser();
+  const user = await requireShellUser();
   const items = navFor(user.role);
   const timeZone = await siteTimeZone();
   const who = <WhoIsHere name={user.name} role={ROLE_LABELS[user.role]} timeZone={timeZone} />;

@@ -1,7 +1,7 @@
 import 'server-only';
 import type { NextRequest } from 'next/server';
 import proxyaddr from 'proxy-addr';
-import { PEER_HEADER } from '@/lib/peer-header';
+import { PEER_HEADER } from '@/lib/internal-headers';
 import { getEnv } from '../env';
 
 let trust: ((addr: string, i: number) => boolean) | undefined;

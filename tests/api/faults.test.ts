@@ -75,9 +75,16 @@ describe('faults: the database crashes, the app is killed', () => {
     const down = await anonymous().get('/api/v1/health');
     expect(down.status).toBe(503);
     expect(down.body).toEqual({ app: 'ok', database: 'unreachable' });
+    // Pages too, once the app's server has seen it gone (it asks every 2 s): its own 503 page, not a 500.
+    await expect.poll(async () => (await planner.agent.get('/orders')).status, { timeout: 10_000, interval: 250 }).toBe(503);
+    const page = await planner.agent.get('/orders');
+    expect(page.headers['retry-after']).toBe('10');
+    expect(page.headers['content-type']).toMatch(/^text\/html/);
+    expect(page.text).toMatch(/The database cannot be reached/);
 
     await startDatabase();
     await expect.poll(async () => (await anonymous().get('/api/v1/health')).status, { timeout: 30_000, interval: 200 }).toBe(200);
+    await expect.poll(async () => (await planner.agent.get('/orders')).status, { timeout: 10_000, interval: 250 }).toBe(200);
 
     // Nothing half-written: the release reserved nothing, the recount booked nothing.
     testDb();

@@ -81,12 +81,14 @@ describe('signing in (browser)', () => {
     await page.close();
   });
 
-  it('shows a role without the right an explanation instead of the page', async () => {
+  it('answers a role without the right 403 with an explanation, at the address it asked for', async () => {
     const page = await browser.newPage();
     await signInThroughPage(page, 'operator');
-    await page.goto('/admin/users');
-    await page.waitForURL((url) => url.pathname === '/forbidden');
+    const res = await page.goto('/admin/users');
+    expect(res?.status()).toBe(403);
+    expect(new URL(page.url()).pathname).toBe('/admin/users');
     expect(await page.getByTestId('forbidden').textContent()).toMatch(/Manage scales' profiles, users and site settings/i);
+    await screenshot(page, 'forbidden');
     await page.close();
   });
 });
