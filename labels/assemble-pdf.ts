@@ -9,7 +9,13 @@ import type { LabelStock } from './stocks';
 
 export interface LabelPdfWriter {
   add(label: PreparedLabel): Promise<void>;
-  finish(): Promise<Uint8Array>;
+  finish(): Promise<LabelPdfFile>;
+}
+
+export interface LabelPdfFile {
+  pdf: Uint8Array;
+  /** Characters the label fonts have no glyph for, each printed as the stand-in, in first-seen order. */
+  unprintable: string[];
 }
 
 // Writes prepared labels into one PDF as they come: a page per roll label, or a grid per sheet. Each page
@@ -34,7 +40,7 @@ export async function createLabelsPdf({ stock, title }: { stock: LabelStock; tit
   };
   const fontOnPage = async (name: LabelFont): Promise<{ cache: GlyphCache; key: PDFName }> => {
     let cache = fonts.get(name);
-    if (!cache) fonts.set(name, (cache = new GlyphCache(await doc.embedFont(fontBytes(name), { subset: true }))));
+    if (!cache) fonts.set(name, (cache = new GlyphCache(await doc.embedFont(fontBytes(name), { subset: true }), fontkit.create(fontBytes(name)))));
     let key = pageFonts.get(name);
     if (!key) pageFonts.set(name, (key = page!.node.newFontDictionary(name, cache.font.ref)));
     return { cache, key };
@@ -57,12 +63,13 @@ export async function createLabelsPdf({ stock, title }: { stock: LabelStock; tit
     },
     async finish() {
       flush();
-      return doc.save();
+      const unprintable = [...new Set([...fonts.values()].flatMap((cache) => [...cache.missing]))];
+      return { pdf: await doc.save(), unprintable };
     },
   };
 }
 
-export async function assembleLabelsPdf({ stock, labels, title }: { stock: LabelStock; labels: readonly PreparedLabel[]; title: string }): Promise<Uint8Array> {
+export async function assembleLabelsPdf({ stock, labels, title }: { stock: LabelStock; labels: readonly PreparedLabel[]; title: string }): Promise<LabelPdfFile> {
   const writer = await createLabelsPdf({ stock, title });
   for (const label of labels) await writer.add(label);
   return writer.finish();

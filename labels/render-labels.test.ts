@@ -1,4 +1,7 @@
-import { statSync } from 'node:fs';
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import { PDFDict, PDFDocument, PDFName, PDFRawStream, type PDFRef } from 'pdf-lib';
 import { describe, expect, it } from 'vitest';
 import { decodePdf, isPdf } from '../tests/helpers/decode-pdf';
@@ -74,6 +77,22 @@ describe('rendered label PDFs, read back by an independent decoder (zxing-wasm a
     expect(fontFiles).toHaveLength(3);
     for (const file of fontFiles) expect(file.getContentsSize()).toBeLessThan(statSync('fonts/JetBrainsMono-Regular.ttf').size / 4);
     expect(names('Subtype')).not.toContain('/Image');
+  });
+
+  it('sets a character the label fonts lack as "?" and names it, where it would otherwise print as nothing', async () => {
+    const items = [{ ...bins[1], description: 'Ж-ring 漢字 🔩' }];
+    const { pdf, unprintable } = await renderLabels({ template: 'bin', stock: '4x2in', title: 'Bin labels', items });
+    expect(unprintable).toEqual(['漢', '字', '🔩']);
+    // Read back by poppler's pdftotext, which knows nothing of our stand-in: Cyrillic is in the fonts, CJK and emoji are not.
+    const dir = mkdtempSync(path.join(os.tmpdir(), 'tf-label-text-'));
+    try {
+      writeFileSync(path.join(dir, 'l.pdf'), pdf);
+      expect(execFileSync('pdftotext', [path.join(dir, 'l.pdf'), '-']).toString()).toContain('Ж-ring ?? ?');
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+    const plain = await renderLabels({ template: 'bin', stock: '4x2in', title: 'Bin labels', items: bins });
+    expect(plain.unprintable).toEqual([]);
   });
 
   it('refuses a bin code too long for a Code 128 on the stock instead of shrinking it below 0.25 mm', async () => {

@@ -1,4 +1,4 @@
-import { assembleLabelsPdf } from './assemble-pdf';
+import { assembleLabelsPdf, type LabelPdfFile } from './assemble-pdf';
 import type { PreparedLabel } from './label-content';
 import { LABEL_STOCKS, type StockId } from './stocks';
 import { labelsPerPage } from './sheet-layout';
@@ -27,8 +27,8 @@ export function prepareLabels(batch: LabelBatch): PreparedLabel[] {
   }
 }
 
-export async function renderLabels(batch: LabelBatch & { title: string }): Promise<{ pdf: Uint8Array; pages: number }> {
+export async function renderLabels(batch: LabelBatch & { title: string }): Promise<LabelPdfFile & { pages: number }> {
   const stock = LABEL_STOCKS[batch.stock];
-  const pdf = await assembleLabelsPdf({ stock, labels: prepareLabels(batch), title: batch.title });
-  return { pdf, pages: Math.ceil(batch.items.length / labelsPerPage(stock)) };
+  const file = await assembleLabelsPdf({ stock, labels: prepareLabels(batch), title: batch.title });
+  return { ...file, pages: Math.ceil(batch.items.length / labelsPerPage(stock)) };
 }

@@ -4,13 +4,12 @@ import { KitLabelDataError } from './kit-element-strings';
 import { LabelFitError } from './label-content';
 import { renderLabels, type LabelBatch } from './render-labels';
 
-export type RenderOutcome = { ok: true; pdf: Uint8Array; pages: number } | { ok: false; unfit: string };
+export type RenderOutcome = { ok: true; pdf: Uint8Array; pages: number; unprintable: string[] } | { ok: false; unfit: string };
 
 // Errors lose their class on the way back from a worker: data that cannot go on the stock comes back as an outcome.
 export default async function render(batch: LabelBatch & { title: string }): Promise<RenderOutcome> {
   try {
-    const { pdf, pages } = await renderLabels(batch);
-    return { ok: true, pdf, pages };
+    return { ok: true, ...(await renderLabels(batch)) };
   } catch (err) {
     if (err instanceof LabelFitError || err instanceof KitLabelDataError) return { ok: false, unfit: err.message };
     throw err;

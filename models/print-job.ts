@@ -17,6 +17,7 @@ export class PrintJob extends Model<InferAttributes<PrintJob>, InferCreationAttr
   declare bytes: number | null;
   declare printerJobId: number | null;
   declare error: string | null;
+  declare note: string | null;
   declare requestedBy: number | null; // null when the server printed on its own (a completed order)
   declare sentAt: Date | null;
   declare createdAt: CreationOptional<Date>;
@@ -39,6 +40,7 @@ export class PrintJob extends Model<InferAttributes<PrintJob>, InferCreationAttr
         bytes: { type: DataTypes.INTEGER, allowNull: true },
         printerJobId: { type: DataTypes.INTEGER, allowNull: true },
         error: { type: DataTypes.STRING(500), allowNull: true },
+        note: { type: DataTypes.STRING(500), allowNull: true },
         requestedBy: { type: DataTypes.INTEGER, allowNull: true },
         sentAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: { type: DataTypes.DATE, allowNull: false },

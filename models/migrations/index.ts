@@ -9,6 +9,7 @@ import * as m0008 from './0008-site-time-zone';
 import * as m0009 from './0009-user-sessions';
 import * as m0010 from './0010-mask-mail-links';
 import * as m0011 from './0011-request-keys';
+import * as m0012 from './0012-print-job-notes';
 
 // Ordered list of migrations. Add a file `NNNN-what-it-does.ts` exporting up/down and list it here.
 export const migrations = [
@@ -23,4 +24,5 @@ export const migrations = [
   { name: '0009-user-sessions', ...m0009 },
   { name: '0010-mask-mail-links', ...m0010 },
   { name: '0011-request-keys', ...m0011 },
+  { name: '0012-print-job-notes', ...m0012 },
 ];

@@ -45,7 +45,7 @@ function encodeOnly(items: BinLabelData[]): void {
 async function textOnly(labels: PreparedLabel[]): Promise<Uint8Array> {
   const writer = await createLabelsPdf({ stock: LABEL_STOCKS[STOCK], title: 'text only' });
   for (const label of labels) await writer.add({ symbolOps: '', texts: label.texts });
-  return writer.finish();
+  return (await writer.finish()).pdf;
 }
 
 // The batch: workers encode and lay out chunks of labels; the main thread writes each chunk into the
@@ -80,13 +80,13 @@ async function withWorkers(pool: Worker[], items: BinLabelData[]): Promise<Uint8
       feed(worker);
     }
   });
-  return writer.finish();
+  return (await writer.finish()).pdf;
 }
 
 async function singleThread(items: BinLabelData[]): Promise<Uint8Array> {
   const writer = await createLabelsPdf({ stock: LABEL_STOCKS[STOCK], title: 'bin labels' });
   for (const label of prepareLabels({ template: 'bin', stock: STOCK, items })) await writer.add(label);
-  return writer.finish();
+  return (await writer.finish()).pdf;
 }
 
 async function startPool(size: number): Promise<Worker[]> {

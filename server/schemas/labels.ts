@@ -61,6 +61,8 @@ export interface PrintJobDto {
   bytes: number | null;
   printerJobId: number | null;
   error: string | null;
+  /** Something the printed labels lack (characters the fonts could not print); the job still went. */
+  note: string | null;
   requestedBy: number | null;
   createdAt: string;
   sentAt: string | null;

@@ -63,6 +63,9 @@ const ERA_ROWS: Record<string, (q: QueryInterface) => Promise<void>> = {
   '0011-request-keys': async (q) => {
     await q.bulkInsert('request_keys', [{ id: 901, user_id: 901, scope: 'orders.create', idem_key: 'upgrade-key-901', fingerprint: 'b'.repeat(64), record_id: 901, created_at: now }]);
   },
+  '0012-print-job-notes': async (q) => {
+    await q.bulkInsert('print_jobs', [{ id: 902, batch_id: '00000000-0000-4000-8000-000000000902', batch_index: 0, batch_count: 1, template: 'part', stock: '2x1in', item_ids: '[901]', labels: 1, printer_url: 'ipp://127.0.0.1:631/printers/bench', status: 'sent', pages: 1, bytes: 900, printer_job_id: 8, error: null, note: 'Printed as "?": 漢 (U+6F22).', requested_by: 901, sent_at: now, ...stamps }]);
+  },
 };
 
 describe('migrations on an existing database with data', () => {
@@ -101,7 +104,8 @@ describe('migrations on an existing database with data', () => {
     expect(await Part.findByPk(901)).toMatchObject({ partNumber: 'UPG-M3-8', spreadObservations: 4 });
     expect(await Scale.findByPk(901)).toMatchObject({ name: 'Upgrade bench', calibrationDueAt: '2027-01-31' });
     expect(await Bin.findByPk(901)).toMatchObject({ bookQuantity: 480, abcClass: 'B' });
-    expect(await PrintJob.findByPk(901)).toMatchObject({ status: 'sent', labels: 1 });
+    expect(await PrintJob.findByPk(901)).toMatchObject({ status: 'sent', labels: 1, note: null });
+    expect(await PrintJob.findByPk(902)).toMatchObject({ note: 'Printed as "?": 漢 (U+6F22).' });
     expect(await SiteSettings.findByPk(1)).toMatchObject({ timeZone: 'Europe/Vienna', sessionHours: 10, fourEyesVariances: false });
     expect(await UserSession.findByPk(901)).toMatchObject({ userId: 901, endReason: 'signed_out' });
     expect(await RequestKey.findByPk(901)).toMatchObject({ scope: 'orders.create', recordId: 901 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { PDFDocument } from 'pdf-lib';
-import { PrintJob } from '../../models';
+import { Part, PrintJob } from '../../models';
 import { failInterruptedPrintJobs, INTERRUPTED_MESSAGE } from '../../server/services/print-jobs/fail-interrupted-print-jobs';
 import { printKitLabel } from '../../server/services/print-jobs/print-kit-label';
 import { decodePdf, isPdf } from '../helpers/decode-pdf';
@@ -19,12 +19,27 @@ describe('print jobs over IPP', () => {
     expect(res.status).toBe(202);
     expect(res.body.jobs).toEqual([expect.objectContaining({ status: 'queued', labels: 2, batchCount: 1 })]);
     const [job] = await waitForBatch(agent, res.body.batchId);
-    expect(job).toMatchObject({ status: 'sent', pages: 2, error: null, printer: expect.stringMatching(/^ipp:\/\/127\.0\.0\.1:\d+\/printers\/labels$/) });
+    expect(job).toMatchObject({ status: 'sent', pages: 2, error: null, note: null, printer: expect.stringMatching(/^ipp:\/\/127\.0\.0\.1:\d+\/printers\/labels$/) });
     const received = printedJob(job.printerJobId as number)!;
     expect(received).toMatchObject({ queue: 'labels', documentFormat: 'application/pdf', userName: email, bytes: job.bytes, jobName: 'bin-2-labels-4x2in.pdf' });
     expect(isPdf(received.pdf)).toBe(true);
     const pages = await decodePdf(received.pdf);
     expect(pages.map((p) => p.find((s) => s.format === 'Code128')?.text)).toEqual(bins.map((b) => b.code));
+  });
+
+  it('prints a character the label fonts lack as "?" and says so, on the PDF answer and in the print log', async () => {
+    const { agent } = await signedIn('clerk');
+    const part = await createPart();
+    testDb();
+    await Part.update({ description: '漢字 bracket, zinc' }, { where: { id: part.id } });
+    const bin = await stockPart(part.id, 1);
+    const pdf = await agent.post('/api/v1/labels').send({ template: 'bin', stock: '4x2in', ids: [bin.id] });
+    expect(pdf.status).toBe(200);
+    expect(pdf.headers['x-unprintable-characters']).toBe('U+6F22 U+5B57');
+    const res = await agent.post('/api/v1/print-jobs').send({ template: 'bin', stock: '4x2in', ids: [bin.id] });
+    const [job] = await waitForBatch(agent, res.body.batchId);
+    expect(job.status).toBe('sent');
+    expect(job.note).toMatch(/^Printed as "\?": 漢 \(U\+6F22\), 字 \(U\+5B57\)/);
   });
 
   it('splits a big print into jobs of 100 labels and reports each', async () => {

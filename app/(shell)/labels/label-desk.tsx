@@ -3,6 +3,7 @@
 import type { ColDef } from 'ag-grid-community';
 import { useMemo, useState } from 'react';
 import type { PrintJobDto } from '@/server/schemas/labels';
+import { describeUnprintable, fromCodePointList, UNPRINTABLE_HEADER } from '@/lib/unprintable';
 import { apiFetch } from '../../_components/api-client';
 import { DataGrid, fitHeight } from '../../_components/data-grid';
 import { PrintLog } from './print-log';
@@ -35,7 +36,7 @@ export function LabelDesk({ bins, parts, orders, stocks, jobs }: Props) {
   const [stock, setStock] = useState('4x2in');
   const [printer, setPrinter] = useState('');
   const [busy, setBusy] = useState<'pdf' | 'print' | null>(null);
-  const [message, setMessage] = useState<{ tone: 'ok' | 'fault'; text: string } | null>(null);
+  const [message, setMessage] = useState<{ tone: 'ok' | 'caution' | 'fault'; text: string } | null>(null);
   const [batch, setBatch] = useState<string | null>(null);
 
   // Kit labels offer only the wide stocks; a narrow choice made for bins falls back to the first wide one.
@@ -86,7 +87,8 @@ export function LabelDesk({ bins, parts, orders, stocks, jobs }: Props) {
       link.download = /filename="([^"]+)"/.exec(res.headers.get('Content-Disposition') ?? '')?.[1] ?? `${template}-labels.pdf`;
       link.click();
       setTimeout(() => URL.revokeObjectURL(url), 60_000);
-      setMessage({ tone: 'ok', text: `PDF of ${what} downloaded.` });
+      const unprintable = fromCodePointList(res.headers.get(UNPRINTABLE_HEADER));
+      setMessage(unprintable.length ? { tone: 'caution', text: `PDF of ${what} downloaded. ${describeUnprintable(unprintable)}` } : { tone: 'ok', text: `PDF of ${what} downloaded.` });
     } catch {
       setMessage({ tone: 'fault', text: 'Cannot reach the server. Check the network and try again.' });
     } finally {
@@ -154,7 +156,7 @@ export function LabelDesk({ bins, parts, orders, stocks, jobs }: Props) {
           <button type="button" className="btn-quiet" disabled={!chosen.length || busy !== null} onClick={downloadPdf}>{busy === 'pdf' ? 'Rendering…' : 'Download PDF'}</button>
           <button type="button" className="btn-primary" disabled={!chosen.length || busy !== null} onClick={sendToPrinter}>{busy === 'print' ? 'Queueing…' : 'Send to printer'}</button>
         </div>
-        <p role="status" aria-live="polite" data-testid="label-status" className={`min-h-6 text-sm ${message?.tone === 'fault' ? 'text-fault' : 'text-ink-soft'}`}>
+        <p role="status" aria-live="polite" data-testid="label-status" className={`min-h-6 text-sm ${message?.tone === 'fault' ? 'text-fault' : message?.tone === 'caution' ? 'text-caution font-medium' : 'text-ink-soft'}`}>
           {message?.text ?? (chosen.length ? `${what} chosen.` : 'Tick the rows to label.')}
         </p>
       </section>

@@ -73,6 +73,7 @@ export function PrintLog({ initial, followBatch }: { initial: PrintJobDto[]; fol
             <span className={STATUS_CLASS[p.data.status]}>{STATUS_TEXT[p.data.status]}</span>
             {p.data.batchCount > 1 ? <span className="text-ink-faint"> · part {p.data.batchIndex + 1} of {p.data.batchCount}</span> : null}
             {p.data.error ? <span className="text-ink-soft"> · {p.data.error}</span> : null}
+            {p.data.note ? <span className="text-caution"> · {p.data.note}</span> : null}
           </span>
         ) : null,
     },

@@ -10,6 +10,8 @@ export interface LabelPdf {
   filename: string;
   pages: number;
   labels: number;
+  /** Characters the label fonts lack, printed as "?" (see lib/unprintable.ts). */
+  unprintable: string[];
 }
 
 // One PDF, one label per id, in the order given.
@@ -19,5 +21,5 @@ export async function renderLabelPdf({ template, stock, ids }: { template: Label
   const outcome = await renderInPool({ ...batch, title: `Tallyforge ${name}` });
   // Data that cannot go on this stock (a code too long for its barcode, characters GS1 cannot carry).
   if (!outcome.ok) throw new AppError('rule_violated', outcome.unfit, { fields: { stock: outcome.unfit } });
-  return { pdf: outcome.pdf, filename: `${name}.pdf`, pages: outcome.pages, labels: ids.length };
+  return { pdf: outcome.pdf, filename: `${name}.pdf`, pages: outcome.pages, labels: ids.length, unprintable: outcome.unprintable };
 }

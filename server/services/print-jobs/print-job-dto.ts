@@ -18,6 +18,7 @@ export function toPrintJobDto(job: PrintJob): PrintJobDto {
     bytes: job.bytes,
     printerJobId: job.printerJobId,
     error: job.error,
+    note: job.note,
     requestedBy: job.requestedBy,
     createdAt: job.createdAt.toISOString(),
     sentAt: job.sentAt?.toISOString() ?? null,

@@ -2,6 +2,7 @@ import 'server-only';
 import { Op } from 'sequelize';
 import type { LabelTemplate } from '@/labels/render-labels';
 import type { StockId } from '@/labels/stocks';
+import { describeUnprintable } from '@/lib/unprintable';
 import { PrintJob, User } from '@/models';
 import { getDb } from '../../db';
 import { log } from '../../log';
@@ -17,8 +18,8 @@ export async function sendPrintJobs({ jobIds }: { jobIds: number[] }): Promise<P
   const jobs = await PrintJob.findAll({ where: { id: { [Op.in]: jobIds }, status: 'queued' }, order: [['id', 'ASC']] });
   for (const job of jobs) {
     try {
-      const { pdf, pages, filename } = await renderLabelPdf({ template: job.template as LabelTemplate, stock: job.stock as StockId, ids: JSON.parse(job.itemIds) as number[] });
-      await job.update({ pages, bytes: pdf.length });
+      const { pdf, pages, filename, unprintable } = await renderLabelPdf({ template: job.template as LabelTemplate, stock: job.stock as StockId, ids: JSON.parse(job.itemIds) as number[] });
+      await job.update({ pages, bytes: pdf.length, note: unprintable.length ? describeUnprintable(unprintable).slice(0, 500) : null });
       const user = job.requestedBy ? await User.findByPk(job.requestedBy) : null;
       const jobName = job.batchCount > 1 ? `${filename} (${job.batchIndex + 1} of ${job.batchCount})` : filename;
       const sent = await sendToPrinter({ printerUrl: job.printerUrl, pdf, jobName, userName: user?.email ?? 'tallyforge' });

@@ -5,6 +5,6 @@ import { renderLabelPdf } from '@/server/services/labels/render-label-pdf';
 
 // ids are bin ids, part ids, or build order ids for kit labels.
 export const POST = route({ access: 'labels.print', body: labelRequestSchema }, async ({ body }) => {
-  const { pdf, filename } = await renderLabelPdf(body);
-  return pdfResponse(pdf, filename);
+  const { pdf, filename, unprintable } = await renderLabelPdf(body);
+  return pdfResponse(pdf, filename, unprintable);
 });

@@ -5,6 +5,6 @@ import { binLabelQuerySchema } from '@/server/schemas/labels';
 import { renderLabelPdf } from '@/server/services/labels/render-label-pdf';
 
 export const GET = route({ access: 'labels.print', params: idParamSchema, query: binLabelQuerySchema }, async ({ params, query }) => {
-  const { pdf, filename } = await renderLabelPdf({ template: 'bin', stock: query.stock, ids: [params.id] });
-  return pdfResponse(pdf, filename);
+  const { pdf, filename, unprintable } = await renderLabelPdf({ template: 'bin', stock: query.stock, ids: [params.id] });
+  return pdfResponse(pdf, filename, unprintable);
 });
