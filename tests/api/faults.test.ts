@@ -75,6 +75,9 @@ describe('faults: the database crashes, the app is killed', () => {
     const down = await anonymous().get('/api/v1/health');
     expect(down.status).toBe(503);
     expect(down.body).toEqual({ app: 'ok', database: 'unreachable' });
+    // Liveness does not ask the database: the process is alive, so it must not be restarted for this.
+    const live = await anonymous().get('/api/v1/health/live');
+    expect([live.status, live.body]).toEqual([200, { app: 'ok' }]);
     // Pages too, once the app's server has seen it gone (it asks every 2 s): its own 503 page, not a 500.
     await expect.poll(async () => (await planner.agent.get('/orders')).status, { timeout: 10_000, interval: 250 }).toBe(503);
     const page = await planner.agent.get('/orders');

@@ -28,6 +28,7 @@ const deciders: Role[] = ['planner', 'quality', 'admin'];
 // Every route handler, and who may call it. Add each new route here (see DEVELOPERS.md).
 const MATRIX: Entry[] = [
   { method: 'GET', route: '/api/v1/health', allowed: 'public' },
+  { method: 'GET', route: '/api/v1/health/live', allowed: 'public' },
   { method: 'POST', route: '/api/v1/session', allowed: 'public', body: {} },
   { method: 'GET', route: '/api/v1/session', allowed: 'public' },
   { method: 'DELETE', route: '/api/v1/session', allowed: 'public', endsSession: true },
