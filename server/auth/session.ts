@@ -2,14 +2,14 @@ import 'server-only';
 import { createHash, randomBytes } from 'node:crypto';
 import { cache } from 'react';
 import { cookies } from 'next/headers';
-import { getIronSession, type IronSession } from 'iron-session';
-import { Op, type Transaction } from 'sequelize';
-import { User, UserSession } from '@/models';
+import { getIronSession, unsealData, type IronSession } from 'iron-session';
+import { Op, QueryTypes, type Transaction } from 'sequelize';
+import { UserSession } from '@/models';
 import type { SessionEndReason } from '@/models/user-session';
 import type { Role } from '@/lib/roles';
 import { getDb } from '../db';
 import { getSettings } from '../services/settings/get-settings';
-import { IDLE_LIMIT_MS, isIdleExpired, REFRESH_AFTER_MS, sessionOptions, type SessionData } from './session-options';
+import { IDLE_LIMIT_MS, isIdleExpired, REFRESH_AFTER_MS, SESSION_COOKIE, sessionOptions, type SessionData } from './session-options';
 
 export interface SessionUser {
   id: number;
@@ -29,20 +29,58 @@ export async function getSession(): Promise<IronSession<SessionData>> {
   return getIronSession<SessionData>(await cookies(), sessionOptions());
 }
 
+// Opening a seal costs several WebCrypto calls (key derivation, HMAC, AES) on every request. The same
+// sealed value always opens to the same data, so what a cookie opened to is kept for a minute (the
+// cookie is rolled about as often), in a bounded map. The session row still decides on every request.
+const OPENED_FOR_MS = 60_000;
+const OPENED_MAX = 5_000;
+const opened = new Map<string, { data: SessionData; until: number }>();
+
+async function openSession(): Promise<SessionData> {
+  const sealed = (await cookies()).get(SESSION_COOKIE)?.value;
+  if (!sealed) return {};
+  const now = Date.now();
+  const kept = opened.get(sealed);
+  if (kept && kept.until > now) return kept.data;
+  const options = sessionOptions();
+  const data = await unsealData<SessionData>(sealed, { password: options.password, ttl: options.ttl });
+  if (opened.size >= OPENED_MAX) opened.delete(opened.keys().next().value!);
+  opened.set(sealed, { data, until: now + OPENED_FOR_MS });
+  return data;
+}
+
+interface SessionRow {
+  sessionId: number;
+  endedAt: Date | null;
+  expiresAt: Date;
+  lastSeenAt: Date;
+  userId: number;
+  email: string;
+  name: string;
+  role: Role;
+  active: number;
+  hasPassword: number;
+}
+
 // Read once per request. The cookie only names a session: the row decides. An ended, expired or
 // idle session, or a switched-off person, counts as signed out at once.
 export const getCurrentUser = cache(async (): Promise<CurrentUser | null> => {
-  const session = await getSession();
+  const session = await openSession();
   const now = Date.now();
   if (!session.sid || isIdleExpired(session, now)) return null;
-  getDb();
-  const row = (await UserSession.findOne({ where: { tokenHash: hashSid(session.sid) }, include: [{ model: User, as: 'user' }] })) as (UserSession & { user: User | null }) | null;
+  // One round trip, without building model instances: this runs before every signed-in request.
+  const [row] = await getDb().query<SessionRow>(
+    `SELECT s.id AS sessionId, s.ended_at AS endedAt, s.expires_at AS expiresAt, s.last_seen_at AS lastSeenAt,
+            u.id AS userId, u.email, u.name, u.role, u.active, u.password_hash IS NOT NULL AS hasPassword
+       FROM user_sessions s JOIN users u ON u.id = s.user_id
+      WHERE s.token_hash = ?`,
+    { replacements: [hashSid(session.sid)], type: QueryTypes.SELECT },
+  );
   if (!row || row.endedAt || row.expiresAt.getTime() <= now || now - row.lastSeenAt.getTime() > IDLE_LIMIT_MS) return null;
-  const user = row.user;
-  if (!user || !user.active || !user.passwordHash) return null;
+  if (!row.active || !row.hasPassword) return null;
   // The idle clock on the row moves at most once a minute, not with every request.
-  if (now - row.lastSeenAt.getTime() > REFRESH_AFTER_MS) await UserSession.update({ lastSeenAt: new Date(now) }, { where: { id: row.id } });
-  return { id: user.id, email: user.email, name: user.name, role: user.role, sessionId: row.id };
+  if (now - row.lastSeenAt.getTime() > REFRESH_AFTER_MS) await UserSession.update({ lastSeenAt: new Date(now) }, { where: { id: row.sessionId } });
+  return { id: row.userId, email: row.email, name: row.name, role: row.role, sessionId: row.sessionId };
 });
 
 export async function startSession(userId: number): Promise<void> {
@@ -78,9 +116,10 @@ export async function endSessionsOf(userId: number, reason: SessionEndReason, tr
  * get theirs in proxy.ts): a bench that only talks to the API all shift keeps its session.
  */
 export async function keepSessionFresh(): Promise<void> {
-  const session = await getSession();
   const now = Date.now();
-  if (!session.sid || now - (session.seenAt ?? 0) <= REFRESH_AFTER_MS) return;
+  const data = await openSession();
+  if (!data.sid || now - (data.seenAt ?? 0) <= REFRESH_AFTER_MS) return;
+  const session = await getSession();
   session.seenAt = now;
   await session.save();
 }
