@@ -40,14 +40,15 @@ export interface RecordCountOptions {
 export async function recordCount({ idempotencyKey, input, by }: RecordCountOptions): Promise<CountAnswer> {
   const db = getDb();
   const requestHash = createHash('sha256').update(JSON.stringify({ input, operator: by.id })).digest('hex');
-  const earlier = await CountEvent.findOne({ where: { idempotencyKey } });
+  // Three reads that take no lock, side by side on their own connections: one round trip, not three.
+  // The part is read outside the transaction as it would be inside it: unlocked, as of now.
+  const [earlier, settings, part] = await Promise.all([CountEvent.findOne({ where: { idempotencyKey } }), getSettings(), Part.findByPk(input.partId)]);
   if (earlier) return replay(earlier, requestHash);
-  const { defaultPieceSpread, varianceThresholdPcs, varianceThresholdPct, timeZone } = await getSettings();
+  const { defaultPieceSpread, varianceThresholdPcs, varianceThresholdPct, timeZone } = settings;
   const today = siteDay(timeZone);
   let answer: CountAnswer;
   try {
     answer = await retryOnDeadlock(() => db.transaction(async (transaction) => {
-      const part = await Part.findByPk(input.partId, { transaction });
       if (!part) throw new AppError('not_found', 'Part was not found', { fields: { partId: 'no such part' } });
       if (part.countingMethod === 'hand') throw new AppError('rule_violated', `${part.partNumber} is counted by hand, not by weight`);
       if ((input.purpose === 'kit_line') !== Boolean(input.orderLineId)) {
