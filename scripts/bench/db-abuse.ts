@@ -9,16 +9,16 @@
 // at best while the same bytes arrive. Goals (issue 15): health p95 under 100 ms during the body flood
 // (reported beside the floor's own figure and the ratio to it), and under 3× its idle p95 during the label
 // flood. Appends the figures to bench-results/abuse.json.
-import { execSync } from 'node:child_process';
+
 import { randomBytes, randomUUID } from 'node:crypto';
-import { existsSync, readFileSync, writeFileSync } from 'node:fs';
-import os from 'node:os';
+
 import { Bin, Part, User } from '../../models';
 import { hashPassword } from '../../server/auth/passwords';
 import { getDb } from '../../server/db';
 import { freePort, startApp } from '../next-start';
 import { signIn } from './bench-sign-in';
 import { startPrimaryKeyServer } from './primary-key-floor';
+import { appendFigures, runStamp } from './figures';
 
 const RESULTS = 'bench-results/abuse.json';
 const IDLE_S = 8;
@@ -144,11 +144,7 @@ async function main(): Promise<void> {
     const jobs = await batchDone;
 
     const figures = {
-      bench: 'abuse',
-      at: new Date().toISOString(),
-      commit: execSync('git rev-parse --short HEAD').toString().trim(),
-      node: process.version,
-      cores: os.availableParallelism(),
+      ...runStamp('abuse'),
       health: { idle, duringBodies, duringTokens, duringLabels },
       floor: { idle: floorIdle, duringBodies: floorDuringBodies },
       attacks: {
@@ -162,8 +158,7 @@ async function main(): Promise<void> {
       },
       ratios: { bodyFloodOverFloor: round(duringBodies.p95 / floorDuringBodies.p95, 2), bodyFloodOverIdle: round(duringBodies.p95 / idle.p95, 2), tokenFloodOverIdle: round(duringTokens.p95 / idle.p95, 2), labelFloodOverIdle: round(duringLabels.p95 / idle.p95, 2) },
     };
-    const previous = existsSync(RESULTS) ? (JSON.parse(readFileSync(RESULTS, 'utf8')) as unknown[]) : [];
-    writeFileSync(RESULTS, JSON.stringify([...previous, figures], null, 2) + '\n');
+    appendFigures(RESULTS, figures);
     console.log(`abuse: health p50/p95/max ms — idle ${fmt(idle)}; body flood ${fmt(duringBodies)}; token flood ${fmt(duringTokens)}; label flood ${fmt(duringLabels)}`);
     console.log(`  floor (node:http + primary-key lookup): idle ${fmt(floorIdle)}; body flood ${fmt(floorDuringBodies)}; app/floor p95 during the body flood ${figures.ratios.bodyFloodOverFloor}`);
     console.log(`  body flood answers ${JSON.stringify(figures.attacks.bodyFlood.statuses)}; token flood ${JSON.stringify(figures.attacks.tokenFlood.statuses)}; labels ${JSON.stringify(figures.attacks.labelFlood)}`);

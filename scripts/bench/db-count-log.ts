@@ -2,13 +2,13 @@
 // unfiltered, by part, not-exact only, one week, a deep page, and the CSV of one part. The rows are
 // written in bulk by SQL (the capture path has its own figures in load.json); the page and the CSV
 // run the same service the app does.
-import { execSync } from 'node:child_process';
-import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+
 import { performance } from 'node:perf_hooks';
 import { Part, Scale, User } from '../../models';
 import { getDb } from '../../server/db';
 import type { CountLogQuery } from '../../server/schemas/counts';
 import { countLog, countLogTable } from '../../server/services/counting/count-log';
+import { appendFigures, runStamp } from './figures';
 
 const EVENTS = 200_000;
 const PARTS = 40;
@@ -62,10 +62,7 @@ async function main(): Promise<void> {
   const { partNumber, from, to } = await world();
   const page = (q: CountLogQuery) => () => countLog(q);
   const figures = {
-    bench: 'count-log',
-    at: new Date().toISOString(),
-    commit: execSync('git rev-parse --short HEAD').toString().trim(),
-    node: process.version,
+    ...runStamp('count-log'),
     events: EVENTS,
     runs: RUNS,
     ms: {
@@ -78,8 +75,7 @@ async function main(): Promise<void> {
     },
     csvOnePartRows: (await countLogTable({ partNumber })).rows.length,
   };
-  const previous = existsSync(RESULTS) ? (JSON.parse(readFileSync(RESULTS, 'utf8')) as unknown[]) : [];
-  writeFileSync(RESULTS, JSON.stringify([...previous, figures], null, 2) + '\n');
+  appendFigures(RESULTS, figures);
   console.log(JSON.stringify(figures, null, 2));
   await db.close();
 }

@@ -11,9 +11,9 @@
 // Each target is reported as a share of the floor's throughput and a multiple of its p95, measured in the
 // same run, against the goals of issue 16 (GOALS below); the figures are appended to bench-results/load.json.
 import autocannon from 'autocannon';
-import { execSync, type ChildProcess } from 'node:child_process';
+import type { ChildProcess } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
-import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+
 import os from 'node:os';
 import { Part, Scale, User } from '../../models';
 import { hashPassword } from '../../server/auth/passwords';
@@ -23,6 +23,7 @@ import { freePort, startApp } from '../next-start';
 import { signIn } from './bench-sign-in';
 import { startNextFloor } from './next-floor';
 import { startPrimaryKeyServer } from './primary-key-floor';
+import { appendFigures, runStamp } from './figures';
 
 const CONNECTION_LEVELS = [8, 32] as const;
 const WARMUP_S = 2;
@@ -44,6 +45,8 @@ interface Target {
   status: number;
   /** Signs in afresh before each run, so no run outlives the minute after which the cookie is rolled. */
   signedIn?: boolean;
+  /** A new Idempotency-Key per request: the same key again would be answered as a replay. */
+  freshKey?: boolean;
 }
 
 // Issue 16, at 32 connections: a share of the floor's throughput, and at most a multiple of its p95.
@@ -166,6 +169,7 @@ async function main(): Promise<void> {
         spec: { method: 'POST', path: '/api/v1/counts', headers: { ...json, origin: app.url }, body: JSON.stringify(captureBody(world.partId, world.scaleId)) },
         status: 201,
         signedIn: true,
+        freshKey: true,
       },
       estimate: { request: 'POST /api/v1/counting/estimate', url: app.url, spec: { method: 'POST', path: '/api/v1/counting/estimate', headers: { ...json, origin: app.url }, body: JSON.stringify(estimateBody) }, status: 200, signedIn: true },
       primaryKey: { request: 'SELECT id FROM parts WHERE id = ? (mariadb behind node:http)', url: dbFloor.url, spec: { method: 'GET', path: '/' }, status: 200 },
@@ -196,11 +200,7 @@ async function main(): Promise<void> {
       }),
     );
     const figures = {
-      bench: 'load',
-      at: new Date().toISOString(),
-      commit: execSync('git rev-parse --short HEAD').toString().trim(),
-      node: process.version,
-      cores: os.availableParallelism(),
+      ...runStamp('load'),
       loadAverage: { before: loadBefore.map((l) => round(l, 2)), after: os.loadavg().map((l) => round(l, 2)) },
       warmupSeconds: WARMUP_S,
       measuredSeconds: MEASURE_S,
@@ -209,8 +209,7 @@ async function main(): Promise<void> {
       ratios,
       goals,
     };
-    const previous = existsSync(RESULTS) ? (JSON.parse(readFileSync(RESULTS, 'utf8')) as unknown[]) : [];
-    writeFileSync(RESULTS, JSON.stringify([...previous, figures], null, 2) + '\n');
+    appendFigures(RESULTS, figures);
 
     console.log(`load: ${MEASURE_S} s per target after ${WARMUP_S} s warm-up; ${figures.cores} cores, load average ${figures.loadAverage.before.join(' ')}`);
     for (const { connections, targets: m } of levels) {
@@ -238,13 +237,12 @@ async function main(): Promise<void> {
   }
 }
 
-// A signed-in target gets a cookie of its own run, and a capture a new Idempotency-Key per request (the same
-// key again would be answered as a replay).
+// A signed-in target gets a cookie of its own run.
 async function withCookie(target: Target, email: string, password: string): Promise<Target> {
   if (!target.signedIn) return target;
   const cookie = await signIn(target.url, email, password);
   const spec: autocannon.Request = { ...target.spec, headers: { ...target.spec.headers, cookie } };
-  if (target.spec.path === '/api/v1/counts') spec.setupRequest = (req) => ({ ...req, headers: { ...req.headers, 'idempotency-key': randomUUID() } });
+  if (target.freshKey) spec.setupRequest = (req) => ({ ...req, headers: { ...req.headers, 'idempotency-key': randomUUID() } });
   return { ...target, spec };
 }
 

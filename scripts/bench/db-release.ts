@@ -1,7 +1,6 @@
 // Times the release service on one order of 500 kits × 50 lines, with stock for every part, and
 // counts its SQL statements at 5, 50 and 200 lines: release is set-based, so the count must not grow.
-import { execSync } from 'node:child_process';
-import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+
 import { performance } from 'node:perf_hooks';
 import { Part, User } from '../../models';
 import { getDb } from '../../server/db';
@@ -9,6 +8,7 @@ import type { SessionUser } from '../../server/auth/session';
 import { createKit } from '../../server/services/kits/create-kit';
 import { createOrder } from '../../server/services/orders/create-order';
 import { releaseOrder } from '../../server/services/orders/release-order';
+import { appendFigures, runStamp } from './figures';
 
 const KITS = 500;
 const LINES = 50;
@@ -57,10 +57,7 @@ async function main(): Promise<void> {
   }
   const fixed = new Set(Object.values(queriesByLines)).size === 1;
   const figures = {
-    bench: 'release',
-    at: new Date().toISOString(),
-    commit: execSync('git rev-parse --short HEAD').toString().trim(),
-    node: process.version,
+    ...runStamp('release'),
     order: { kits: KITS, lines: LINES, piecesPerLine: 3 * KITS },
     runs: RUNS,
     ms: { median: round(timings[Math.floor(timings.length / 2)]), min: round(timings[0]), max: round(timings[timings.length - 1]) },
@@ -68,8 +65,7 @@ async function main(): Promise<void> {
     fixedQueryCount: fixed,
     statements: sql,
   };
-  const previous = existsSync(RESULTS) ? (JSON.parse(readFileSync(RESULTS, 'utf8')) as unknown[]) : [];
-  writeFileSync(RESULTS, JSON.stringify([...previous, figures], null, 2) + '\n');
+  appendFigures(RESULTS, figures);
   console.log(JSON.stringify({ ...figures, statements: undefined }, null, 2));
   await db.close();
   if (!fixed) {

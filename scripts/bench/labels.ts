@@ -3,7 +3,6 @@
 // barcodes. Appends the figures to bench-results/labels.json and prints a summary.
 import bwipjs from 'bwip-js/node';
 import fontkit from '@pdf-lib/fontkit';
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
@@ -15,6 +14,7 @@ import { fontBytes } from '../../labels/label-fonts';
 import { prepareLabels } from '../../labels/render-labels';
 import { LABEL_STOCKS, type StockId } from '../../labels/stocks';
 import type { BinLabelData } from '../../labels/templates/bin-label';
+import { appendFigures, runStamp } from './figures';
 
 const COUNT = 1000;
 const STOCK: StockId = '4x2in';
@@ -133,10 +133,9 @@ async function main(): Promise<void> {
   await Promise.all(pool.map((w) => w.terminate()));
 
   const figures = {
-    at: new Date().toISOString(),
+    ...runStamp('labels'),
     labels: COUNT,
     stock: STOCK,
-    cores: os.availableParallelism(),
     loadAverage: os.loadavg().map((l) => round(l, 2)),
     workers,
     repeats: REPEATS,
@@ -148,9 +147,7 @@ async function main(): Promise<void> {
     aim: AIM,
     meetsAim: best.parallel.ms <= AIM.ratioToEncodeFloor * best.encode.ms && best.parallel.bytes / COUNT < AIM.bytesPerLabel,
   };
-  mkdirSync('bench-results', { recursive: true });
-  const previous = existsSync(RESULTS) ? (JSON.parse(readFileSync(RESULTS, 'utf8')) as unknown[]) : [];
-  writeFileSync(RESULTS, JSON.stringify([...previous, figures], null, 2) + '\n');
+  appendFigures(RESULTS, figures);
 
   const kb = (n: number) => `${(n / 1024).toFixed(2)} KB`;
   console.log(`labels: ${COUNT} bin labels (Code 128 + QR) on ${STOCK}; ${figures.cores} cores, load average ${figures.loadAverage.join(' ')}; best of ${REPEATS}`);
