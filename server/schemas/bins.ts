@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { BIN_CODE_HINT, formatBinCode, parseBinCode } from '@/lib/bin-code';
 import { ABC_CLASSES, type AbcClass } from '@/models/columns';
-import { recordIdSchema, requiredText } from './common';
+import { pagingSchema, recordIdSchema, requiredText } from './common';
 import { wholeCount } from './weights';
 
 export const binCodeSchema = requiredText('Bin code').transform((text, ctx) => {
@@ -22,7 +22,14 @@ export const createBinSchema = z.object({
 });
 export type CreateBinInput = z.infer<typeof createBinSchema>;
 
-export const listBinsSchema = z.object({ code: z.string().trim().max(20).optional(), partId: recordIdSchema.optional() });
+export const listBinsSchema = pagingSchema.extend({
+  // One bin by its code, as a scan or the bench's lookup sends it.
+  code: z.string().trim().max(20).optional(),
+  partId: recordIdSchema.optional(),
+  // The start of a bin code or of a part number.
+  q: z.string().trim().max(40).optional(),
+});
+export type ListBinsQuery = z.infer<typeof listBinsSchema>;
 
 export interface BinDto {
   id: number;

@@ -22,10 +22,17 @@ export const idParamSchema = z.object({ id: recordIdSchema });
 
 export const versionSchema = z.number({ error: 'version is required (the one you loaded)' }).int().min(0);
 
+// A page of a list; no list route answers more than 500 rows at once. The page is bounded too, so an
+// offset never overflows what the database takes.
 export const pagingSchema = z.object({
-  page: z.coerce.number().int().min(1).default(1),
+  page: z.coerce.number().int().min(1).max(1_000_000, { error: 'page is at most 1000000' }).default(1),
   pageSize: z.coerce.number().int().min(1).max(500).default(100),
 });
+export type Paging = z.infer<typeof pagingSchema>;
+export type { PageOf } from '@/lib/page-range';
+
+// The LIKE pattern of text typed by a user: its wildcards match literally.
+export const startsWithPattern = (text: string) => `${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 
 // Chosen by the client once per capture or create and reused on every retry of it.
 export const idempotencyKeySchema = z

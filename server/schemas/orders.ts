@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { LineVerdict, OrderStatus } from '@/models/columns';
-import { recordIdSchema, versionSchema } from './common';
+import { pagingSchema, recordIdSchema, versionSchema } from './common';
 import { wholeCount } from './weights';
 
 export const createOrderSchema = z.object({
@@ -20,9 +20,13 @@ export const completeOrderSchema = z.object({
 });
 export type CompleteOrderInput = z.infer<typeof completeOrderSchema>;
 
-export const listOrdersSchema = z.object({
-  status: z.enum(['draft', 'released', 'in_progress', 'complete', 'cancelled', 'open']).optional(),
+export const ORDER_LIST_FILTERS = ['draft', 'released', 'in_progress', 'complete', 'cancelled', 'open'] as const;
+export const listOrdersSchema = pagingSchema.extend({
+  status: z.enum(ORDER_LIST_FILTERS).optional(),
+  // The start of an order number or of a kit code.
+  q: z.string().trim().max(40).optional(),
 });
+export type ListOrdersQuery = z.infer<typeof listOrdersSchema>;
 
 export interface OrderLineDto {
   id: number;
@@ -58,6 +62,9 @@ export interface OrderDto {
   progress: { linesDone: number; lines: number };
   version: number;
 }
+
+/** An order as lists show it: its progress without its lines. */
+export type OrderSummaryDto = Omit<OrderDto, 'lines'>;
 
 export interface AvailabilityLine {
   partId: number;

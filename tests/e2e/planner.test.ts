@@ -94,6 +94,10 @@ describe('planner (browser)', () => {
     await expect.poll(() => page.getByTestId('order-status').textContent()).toBe('Complete');
     await screenshot(page, 'order-complete');
     await page.goto('/orders');
+    // Found by the start of its number from the page's own search, one row of one.
+    await page.getByLabel('Find orders').fill(order.number);
+    await page.getByRole('button', { name: 'Search' }).click();
+    await expect.poll(() => page.getByTestId('orders-summary').textContent()).toBe(`1–1 of 1 order starting “${order.number}”.`);
     await expect.poll(() => page.getByRole('link', { name: order.number }).count()).toBe(1);
     await screenshot(page, 'orders-list');
   });

@@ -177,7 +177,9 @@ describe('quality pages (browser)', () => {
     expect(await qualityPage.getByTestId(`variance-${bin.code}`).count()).toBe(0);
 
     await clerkPage.goto('/bins');
-    await clerkPage.getByLabel('Find').fill(bin.code);
+    await clerkPage.getByLabel('Find bins').fill(bin.code);
+    await clerkPage.getByRole('button', { name: 'Search' }).click();
+    await expect.poll(() => clerkPage.getByTestId('bins-summary').textContent()).toBe(`1–1 of 1 bin starting “${bin.code}”.`);
     await expect.poll(() => clerkPage.getByRole('row', { name: new RegExp(bin.code) }).textContent()).toContain('900');
     await clerkPage.close();
     await qualityPage.close();

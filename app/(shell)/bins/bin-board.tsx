@@ -1,10 +1,11 @@
 'use client';
 
 import type { ColDef, ICellRendererParams } from 'ag-grid-community';
-import { useState } from 'react';
+import { rangeText, type PageOf } from '@/lib/page-range';
 import type { BinDto } from '@/server/schemas/bins';
 import type { LastVariance } from '@/server/services/bins/latest-bin-counts';
 import { DataGrid } from '../../_components/data-grid';
+import { SearchForm } from '../../_components/search-form';
 import { useSiteTime } from '../../_components/site-time';
 import { BenchLink } from './bench-link';
 
@@ -22,8 +23,8 @@ function VarianceCell({ value }: { value: LastVariance | null }) {
   );
 }
 
-export function BinBoard({ rows, canCount, canPrint }: { rows: BinRow[]; canCount: boolean; canPrint: boolean }) {
-  const [filter, setFilter] = useState('');
+export function BinBoard({ list, q, canCount, canPrint }: { list: PageOf & { bins: BinRow[] }; q: string; canCount: boolean; canPrint: boolean }) {
+  const rows = list.bins;
   const { when } = useSiteTime();
   const columns: ColDef<BinRow>[] = [
     { field: 'code', headerName: 'Bin', minWidth: 140, cellClass: 'num' },
@@ -63,14 +64,14 @@ export function BinBoard({ rows, canCount, canPrint }: { rows: BinRow[]; canCoun
   ];
   return (
     <section aria-labelledby="bins-title" className="space-y-3">
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <h2 id="bins-title" className="text-lg font-bold">All bins <span className="num text-ink-faint">({rows.length})</span></h2>
-        <div className="flex items-center gap-2">
-          <label htmlFor="bin-filter" className="text-sm text-ink-soft">Find</label>
-          <input id="bin-filter" className="field max-w-xs" value={filter} onChange={(e) => setFilter(e.target.value)} placeholder="Bin code or part" />
-        </div>
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <h2 id="bins-title" className="text-lg font-bold">All bins</h2>
+        <SearchForm action="/bins" id="bin-filter" label="Find bins" defaultValue={q} placeholder="Start of a bin code or part number" />
       </div>
-      <DataGrid label="Bins" rows={rows} columns={columns} rowId={(b) => String(b.id)} quickFilter={filter} height={Math.min(480, 46 + Math.max(rows.length, 3) * 48)} />
+      <p role="status" className="text-sm text-ink-soft" data-testid="bins-summary">
+        {`${rangeText(list, rows.length, ['bin', 'bins'], q ? 'No bins match' : 'No bins yet')}${q ? ` starting “${q}”` : ''}.`}
+      </p>
+      <DataGrid label="Bins" rows={rows} columns={columns} rowId={(b) => String(b.id)} height={Math.min(480, 46 + Math.max(rows.length, 3) * 48)} />
     </section>
   );
 }

@@ -6,30 +6,20 @@ import { zodFields } from '@/server/http/zod-fields';
 import { countLogQuerySchema, type CountLogQuery } from '@/server/schemas/counts';
 import { countLog } from '@/server/services/counting/count-log';
 import { listScales } from '@/server/services/scales/list-scales';
+import { firstValues, pageHref, rangeText } from '@/lib/page-range';
+import { Pager } from '../../_components/pager';
 import { CountLogGrid } from './count-log-grid';
 
 export const metadata = { title: 'Count log' };
 
 type Search = Record<string, string | string[] | undefined>;
 
-// The query string without the page, for the CSV link and the pager.
-function filterQuery(q: CountLogQuery, page?: number): string {
-  const params = new URLSearchParams();
-  for (const [key, value] of Object.entries(q)) if (value !== undefined && key !== 'page') params.set(key, String(value));
-  if (page && page > 1) params.set('page', String(page));
-  const text = params.toString();
-  return text ? `?${text}` : '';
-}
-
 export default async function CountLogPage({ searchParams }: { searchParams: Promise<Search> }) {
   await requirePageUser('catalog.read', '/counts');
-  const raw = Object.fromEntries(Object.entries(await searchParams).map(([k, v]) => [k, Array.isArray(v) ? v[0] : v]));
-  const parsed = countLogQuerySchema.safeParse(raw);
+  const parsed = countLogQuerySchema.safeParse(firstValues(await searchParams));
   const query: CountLogQuery = parsed.success ? parsed.data : {};
   const problems = parsed.success ? [] : Object.values(zodFields(parsed.error));
   const [{ rows, total, page, pageSize }, scales] = await Promise.all([countLog(query), listScales()]);
-  const pages = Math.max(1, Math.ceil(total / pageSize));
-  const first = total === 0 ? 0 : (page - 1) * pageSize + 1;
   return (
     <div className="space-y-5">
       <header>
@@ -77,18 +67,12 @@ export default async function CountLogPage({ searchParams }: { searchParams: Pro
       ) : null}
       <div className="flex flex-wrap items-center gap-3">
         <p role="status" className="text-sm text-ink-soft" data-testid="log-summary">
-          {total === 0 ? 'No counts match.' : `${first}–${first + rows.length - 1} of ${total} count${total === 1 ? '' : 's'}.`}
+          {`${rangeText({ total, page, pageSize }, rows.length, ['count', 'counts'], 'No counts match')}.`}
         </p>
-        <a className="btn-quiet" href={`/api/v1/counts/export${filterQuery(query)}`} download>Download CSV</a>
+        <a className="btn-quiet" href={pageHref('/api/v1/counts/export', query, 1)} download>Download CSV</a>
       </div>
       <CountLogGrid rows={rows} />
-      {pages > 1 ? (
-        <nav aria-label="Pages of the count log" className="flex items-center gap-3 text-sm">
-          {page > 1 ? <Link href={`/counts${filterQuery(query, page - 1)}`} className="btn-quiet">Newer</Link> : null}
-          <span className="text-ink-soft">Page {page} of {pages}</span>
-          {page < pages ? <Link href={`/counts${filterQuery(query, page + 1)}`} className="btn-quiet">Older</Link> : null}
-        </nav>
-      ) : null}
+      <Pager label="Pages of the count log" at={{ total, page, pageSize }} shown={rows.length} hrefFor={(p) => pageHref('/counts', query, p)} earlier="Newer" later="Older" />
       <p className="text-sm text-ink-faint">± is the expanded uncertainty of the count (k = 2, about 95 %). A count is exact when that range is under half a piece. Counts used to sell goods by number need a legally verified scale; see the cautions on Today.</p>
     </div>
   );

@@ -3,14 +3,15 @@
 import type { ColDef, ICellRendererParams } from 'ag-grid-community';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
+import { pageRange, type PageOf } from '@/lib/page-range';
 import type { PartDto, PartImportRow } from '@/server/schemas/parts';
 import { CsvImport } from '../../_components/csv-import';
 import { DataGrid, fitHeight } from '../../_components/data-grid';
+import { SearchForm } from '../../_components/search-form';
 import { PartForm } from './part-form';
 
 interface Props {
-  parts: PartDto[];
-  total: number;
+  list: PageOf & { parts: PartDto[] };
   q: string;
   canEdit: boolean;
   defaultSpread: number;
@@ -18,7 +19,9 @@ interface Props {
 
 const percent = (x: number) => `${(x * 100).toFixed(1)} %`;
 
-export function PartsBoard({ parts, total, q, canEdit, defaultSpread }: Props) {
+export function PartsBoard({ list, q, canEdit, defaultSpread }: Props) {
+  const { parts, total } = list;
+  const shown = pageRange(list, parts.length);
   const router = useRouter();
   const [editing, setEditing] = useState<PartDto | 'new' | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
@@ -76,13 +79,7 @@ export function PartsBoard({ parts, total, q, canEdit, defaultSpread }: Props) {
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-end gap-3">
-        <form method="get" action="/parts" className="flex items-end gap-2" role="search">
-          <div>
-            <label htmlFor="parts-q" className="field-label">Find parts</label>
-            <input id="parts-q" name="q" defaultValue={q} className="field w-64" placeholder="Part number or description" />
-          </div>
-          <button type="submit" className="btn-quiet">Search</button>
-        </form>
+        <SearchForm action="/parts" id="parts-q" label="Find parts" defaultValue={q} placeholder="Part number or description" />
         <a className="btn-quiet" href={`/api/v1/parts/export${q ? `?q=${encodeURIComponent(q)}` : ''}`} download>Download CSV</a>
         {canEdit ? <button type="button" className="btn-primary" onClick={() => setEditing('new')}>New part</button> : null}
       </div>
@@ -102,7 +99,7 @@ export function PartsBoard({ parts, total, q, canEdit, defaultSpread }: Props) {
         />
       ) : null}
       <p role="status" aria-live="polite" className="min-h-6 text-sm text-ink-soft" data-testid="parts-notice">
-        {notice ?? `${total} part${total === 1 ? '' : 's'}${q ? ` matching “${q}”` : ''}${total > parts.length ? `, first ${parts.length} shown` : ''}.`}
+        {notice ?? `${total} part${total === 1 ? '' : 's'}${q ? ` matching “${q}”` : ''}${total > parts.length && parts.length ? `, ${shown.first}–${shown.last} shown` : ''}.`}
       </p>
       <DataGrid label="Parts" rows={parts} columns={columns} rowId={(p) => String(p.id)} height={fitHeight(parts.length)} />
       <p className="text-sm text-ink-faint">Spread is how much single pieces differ in weight. Until a part has learned its own from samples, the site default is assumed.</p>

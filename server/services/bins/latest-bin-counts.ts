@@ -9,10 +9,11 @@ export interface LastVariance {
   countedAt: string;
 }
 
-// The newest cycle count of each bin: what the bins list shows as its last variance.
-export async function latestBinCounts(): Promise<Record<number, LastVariance>> {
+// The newest cycle count of each of these bins: what the bins list shows as its last variance.
+export async function latestBinCounts(binIds: number[]): Promise<Record<number, LastVariance>> {
   getDb();
-  const newest = (await BinCount.findAll({ attributes: [[fn('MAX', col('id')), 'id']], group: ['bin_id'], raw: true })) as unknown as Array<{ id: number }>;
+  if (!binIds.length) return {};
+  const newest = (await BinCount.findAll({ attributes: [[fn('MAX', col('id')), 'id']], where: { binId: binIds }, group: ['bin_id'], raw: true })) as unknown as Array<{ id: number }>;
   if (!newest.length) return {};
   const rows = await BinCount.findAll({ where: { id: { [Op.in]: newest.map((r) => r.id) } } });
   return Object.fromEntries(rows.map((r) => [r.binId, { variance: r.variance, status: r.status, countedAt: r.createdAt.toISOString() }]));

@@ -1,19 +1,28 @@
 import 'server-only';
+import { Op } from 'sequelize';
 import { Bin } from '@/models';
 import { parseBinCode, formatBinCode } from '@/lib/bin-code';
 import { getDb } from '../../db';
-import type { BinDto } from '../../schemas/bins';
+import { pageOfRows } from '../../db-page';
+import { startsWithPattern, type PageOf } from '../../schemas/common';
+import type { BinDto, ListBinsQuery } from '../../schemas/bins';
 import { toBinDto } from './bin-dto';
 
-export async function listBins({ code, partId }: { code?: string; partId?: number }): Promise<BinDto[]> {
+// One page of bins in code order, which is also the walk order of the stockroom.
+export async function listBins(query: ListBinsQuery): Promise<PageOf & { bins: BinDto[] }> {
   getDb();
-  const where: Record<string, unknown> = {};
+  const { code, partId, q, page, pageSize } = query;
+  const where: Record<string | symbol, unknown> = {};
   if (code !== undefined) {
     const location = parseBinCode(code);
-    if (!location) return [];
+    if (!location) return { bins: [], total: 0, page, pageSize };
     where.code = formatBinCode(location);
   }
   if (partId) where.partId = partId;
-  const bins = await Bin.findAll({ where, include: [{ association: 'part' }], order: [['code', 'ASC']], limit: 2000 });
-  return bins.map(toBinDto);
+  if (q) {
+    const pattern = startsWithPattern(q);
+    where[Op.or] = [{ code: { [Op.like]: pattern } }, { '$part.part_number$': { [Op.like]: pattern } }];
+  }
+  const { rows, ...at } = await pageOfRows(Bin, { where, include: [{ association: 'part' }], filterJoins: q ? [{ association: 'part' }] : undefined, order: [['code', 'ASC']], page, pageSize });
+  return { bins: rows.map(toBinDto), ...at };
 }

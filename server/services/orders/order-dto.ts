@@ -1,6 +1,6 @@
 import 'server-only';
 import type { BuildOrder, BuildOrderLine, Kit, Part } from '@/models';
-import type { OrderDto, OrderLineDto } from '../../schemas/orders';
+import type { OrderDto, OrderLineDto, OrderSummaryDto } from '../../schemas/orders';
 import { lineUncertainty } from './line-verdict';
 
 type LoadedOrder = BuildOrder & { kit?: Kit; lines?: Array<BuildOrderLine & { part?: Part }> };
@@ -27,6 +27,10 @@ function toLineDto(l: BuildOrderLine & { part?: Part }): OrderLineDto {
 
 export function toOrderDto(o: LoadedOrder): OrderDto {
   const lines = (o.lines ?? []).map(toLineDto).sort((a, b) => a.partNumber.localeCompare(b.partNumber));
+  return { ...toOrderSummaryDto(o, { linesDone: lines.filter((l) => l.verdict === 'in').length, lines: lines.length }), lines };
+}
+
+export function toOrderSummaryDto(o: LoadedOrder, progress: OrderSummaryDto['progress']): OrderSummaryDto {
   return {
     id: o.id,
     number: o.number,
@@ -40,8 +44,7 @@ export function toOrderDto(o: LoadedOrder): OrderDto {
     releasedAt: o.releasedAt?.toISOString() ?? null,
     completedAt: o.completedAt?.toISOString() ?? null,
     overrideReason: o.overrideReason,
-    lines,
-    progress: { linesDone: lines.filter((l) => l.verdict === 'in').length, lines: lines.length },
+    progress,
     version: o.version,
   };
 }

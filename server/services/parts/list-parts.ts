@@ -1,6 +1,7 @@
 import 'server-only';
 import { Part } from '@/models';
 import { getDb } from '../../db';
+import { pageOfRows } from '../../db-page';
 import { notFound } from '../../errors';
 import type { ListPartsQuery, PartDto } from '../../schemas/parts';
 import { toPartDto } from './part-dto';
@@ -8,13 +9,8 @@ import { partSearch } from './part-search';
 
 export async function listParts(query: ListPartsQuery): Promise<{ parts: PartDto[]; total: number; page: number; pageSize: number }> {
   getDb();
-  const { rows, count } = await Part.findAndCountAll({
-    where: partSearch(query.q),
-    order: [[query.sort, query.dir.toUpperCase()]],
-    limit: query.pageSize,
-    offset: (query.page - 1) * query.pageSize,
-  });
-  return { parts: rows.map(toPartDto), total: count, page: query.page, pageSize: query.pageSize };
+  const { rows, ...at } = await pageOfRows(Part, { where: partSearch(query.q), order: [[query.sort, query.dir.toUpperCase()], ['id', 'ASC']], page: query.page, pageSize: query.pageSize });
+  return { parts: rows.map(toPartDto), ...at };
 }
 
 export async function getPart({ partId }: { partId: number }): Promise<PartDto> {
