@@ -1,14 +1,19 @@
 // The app's HTTP server in production: Next.js's own request handler behind a plain Node server, so that
 // every request carries the address of the socket it came in on. Next keeps a client's X-Forwarded-For
 // as sent, which would let anyone choose the address the sign-in limits count against.
-// Run with `node --import tsx scripts/serve.ts`; PORT and HOST as for `next start`.
+// Run with `node --import tsx scripts/serve.ts`; PORT and HOST as for `next start`, APP_PROCESSES for how
+// many processes serve the port (serve-processes.ts).
+import cluster from 'node:cluster';
 import http from 'node:http';
+import os from 'node:os';
 import path from 'node:path';
 import next from 'next';
+import { appProcesses } from '../lib/app-processes';
 import { PEER_HEADER } from '../lib/internal-headers';
 import { isWellFormedPath } from '../lib/well-formed-text';
 import { watchDatabase } from '../server/http/database-watch';
 import { UNAVAILABLE_CSP, UNAVAILABLE_RETRY_S, unavailablePage } from '../server/http/unavailable-page';
+import { runProcesses } from './serve-processes';
 
 const port = Number(process.env.PORT ?? 3000);
 const hostname = process.env.HOST ?? '127.0.0.1';
@@ -33,7 +38,11 @@ async function main(): Promise<void> {
 
   // Stop as `next start` does: take no new connections, let requests in flight finish, then exit with the
   // signal's code. Kept-alive connections are closed as soon as they fall idle.
+  let stopping = false;
   const stop = (code: number) => {
+    // A terminal's Ctrl-C reaches every process of the group, and the primary passes a stop on as well.
+    if (stopping) return;
+    stopping = true;
     database.stop();
     const idle = setInterval(() => server.closeIdleConnections(), 100);
     server.close(() => {
@@ -78,7 +87,15 @@ function answerUnavailable(res: http.ServerResponse): void {
   res.end(body);
 }
 
-main().catch((err) => {
-  console.error(err);
+const setting = appProcesses(process.env.APP_PROCESSES, os.availableParallelism());
+if ('error' in setting) {
+  console.error(setting.error);
   process.exit(1);
-});
+} else if (cluster.isPrimary && setting.processes > 1) {
+  runProcesses(setting.processes, STOP_GRACE_MS);
+} else {
+  main().catch((err) => {
+    console.error(err);
+    process.exit(1);
+  });
+}
