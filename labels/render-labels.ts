@@ -6,9 +6,6 @@ import { prepareBinLabel, type BinLabelData } from './templates/bin-label';
 import { prepareKitLabel, type KitLabelData } from './templates/kit-label';
 import { preparePartLabel, type PartLabelData } from './templates/part-label';
 
-export const LABEL_TEMPLATES = ['bin', 'part', 'kit'] as const;
-export type LabelTemplate = (typeof LABEL_TEMPLATES)[number];
-
 export type LabelBatch =
   | { template: 'bin'; stock: StockId; items: BinLabelData[] }
   | { template: 'part'; stock: StockId; items: PartLabelData[] }

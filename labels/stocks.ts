@@ -1,4 +1,5 @@
 import { inches, millimetres } from './units';
+import { LABEL_STOCK_IDS, type StockId } from '../lib/domain/labels';
 
 // Label stocks as data. Thermal rolls print one label per page; a sheet prints a grid per page.
 // Sizes are all in PDF points.
@@ -49,11 +50,11 @@ const STOCKS = {
     moduleSizes: [MODULE_SIZES.medium, MODULE_SIZES.small],
     sheet: { pageWidth: inches(8.5), pageHeight: inches(11), columns: 3, rows: 10, left: inches(0.1875), top: inches(0.5), pitchX: inches(2.75), pitchY: inches(1) },
   },
-} as const satisfies Record<string, LabelStock>;
+} as const satisfies Record<StockId, LabelStock>;
 
-export type StockId = keyof typeof STOCKS;
+export type { StockId };
 export const LABEL_STOCKS: Record<StockId, LabelStock> = STOCKS;
-export const STOCK_IDS = Object.keys(LABEL_STOCKS) as [StockId, ...StockId[]];
+export const STOCK_IDS = LABEL_STOCK_IDS;
 
 export function isStockId(value: string): value is StockId {
   return Object.hasOwn(LABEL_STOCKS, value);

@@ -1,4 +1,4 @@
-import type { CountPurpose } from '@/models/columns';
+import type { CountPurpose } from './domain/counting';
 
 // What each kind of capture was for, in the words the pages use.
 export const COUNT_PURPOSE_LABELS: Readonly<Record<CountPurpose, string>> = {

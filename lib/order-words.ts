@@ -1,5 +1,5 @@
 // Words for order states and line verdicts: colour is never the only signal.
-import type { LineVerdict, OrderStatus } from '../models/columns';
+import type { LineVerdict, OrderStatus } from './domain/orders';
 
 export const ORDER_STATUS_WORDS: Record<OrderStatus, string> = {
   draft: 'Draft',

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { AUDIT_STATUSES, AUDIT_VERDICTS, INSPECTION_LEVELS } from './columns';
+import { AUDIT_STATUSES, AUDIT_VERDICTS, INSPECTION_LEVELS } from '../lib/domain/quality';
 
 export class Audit extends Model<InferAttributes<Audit>, InferCreationAttributes<Audit>> {
   declare id: CreationOptional<number>;

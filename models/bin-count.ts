@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { BIN_COUNT_STATUSES, type BinCountStatus } from './columns';
+import { BIN_COUNT_STATUSES, type BinCountStatus } from '../lib/domain/stock';
 
 // A cycle count of one bin: what the book said, what the scale counted, and what was decided.
 export class BinCount extends Model<InferAttributes<BinCount>, InferCreationAttributes<BinCount>> {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { ABC_CLASSES, type AbcClass } from './columns';
+import { ABC_CLASSES, type AbcClass } from '../lib/domain/stock';
 
 export class Bin extends Model<InferAttributes<Bin>, InferCreationAttributes<Bin>> {
   declare id: CreationOptional<number>;

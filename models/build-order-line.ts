@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { LINE_VERDICTS, type LineVerdict } from './columns';
+import { LINE_VERDICTS, type LineVerdict } from '../lib/domain/orders';
 
 export class BuildOrderLine extends Model<InferAttributes<BuildOrderLine>, InferCreationAttributes<BuildOrderLine>> {
   declare id: CreationOptional<number>;

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { ORDER_STATUSES, type OrderStatus } from './columns';
+import { ORDER_STATUSES, type OrderStatus } from '../lib/domain/orders';
 
 export class BuildOrder extends Model<InferAttributes<BuildOrder>, InferCreationAttributes<BuildOrder>> {
   declare id: CreationOptional<number>;

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { VERIFICATION_STAGES } from './columns';
+import { VERIFICATION_STAGES } from '../lib/domain/scales';
 
 export class CalibrationRecord extends Model<InferAttributes<CalibrationRecord>, InferCreationAttributes<CalibrationRecord>> {
   declare id: CreationOptional<number>;

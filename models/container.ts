@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { CONTAINER_KINDS, grams, type ContainerKind } from './columns';
+import { grams } from './columns';
+import { CONTAINER_KINDS, type ContainerKind } from '../lib/domain/stock';
 
 // Bags, trays, totes and bins with a known empty weight (preset tare).
 export class Container extends Model<InferAttributes<Container>, InferCreationAttributes<Container>> {

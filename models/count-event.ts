@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { COUNT_PURPOSES, grams, pieceWeight, ratio, type CountPurpose } from './columns';
+import { grams, pieceWeight, ratio } from './columns';
+import { COUNT_PURPOSES, type CountPurpose } from '../lib/domain/counting';
 
 // Append-only record of one capture: the submitted weights and the server's own recomputation.
 export class CountEvent extends Model<InferAttributes<CountEvent>, InferCreationAttributes<CountEvent>> {

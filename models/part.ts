@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { COUNTING_METHODS, pieceWeight, ratio, type CountingMethod } from './columns';
+import { pieceWeight, ratio } from './columns';
+import { COUNTING_METHODS, type CountingMethod } from '../lib/domain/counting';
 
 export class Part extends Model<InferAttributes<Part>, InferCreationAttributes<Part>> {
   declare id: CreationOptional<number>;

@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { SAMPLE_STATUSES, grams, pieceWeight, type SampleStatus } from './columns';
+import { grams, pieceWeight } from './columns';
+import { SAMPLE_STATUSES, type SampleStatus } from '../lib/domain/counting';
 
 // History of samples per part: what was weighed, and the piece increments when built piece by piece.
 export class PieceWeightSample extends Model<InferAttributes<PieceWeightSample>, InferCreationAttributes<PieceWeightSample>> {

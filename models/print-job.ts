@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { PRINT_JOB_STATUSES, type PrintJobStatus } from './columns';
+import { PRINT_JOB_STATUSES, type PrintJobStatus } from '../lib/domain/labels';
 
 // The print log: what the server sent to a label printer, and how it went.
 export class PrintJob extends Model<InferAttributes<PrintJob>, InferCreationAttributes<PrintJob>> {

@@ -1,5 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { ACCURACY_CLASSES, grams, SCALE_STATUSES, type AccuracyClass, type ScaleStatus } from './columns';
+import { grams } from './columns';
+import { ACCURACY_CLASSES, type AccuracyClass } from '../lib/metrology/accuracy-class';
+import { SCALE_STATUSES, type ScaleStatus } from '../lib/domain/scales';
 
 export class Scale extends Model<InferAttributes<Scale>, InferCreationAttributes<Scale>> {
   declare id: CreationOptional<number>;

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { MOVEMENT_REASONS, type MovementReason } from './columns';
+import { MOVEMENT_REASONS, type MovementReason } from '../lib/domain/stock';
 
 // Append-only: every change of a bin's book quantity, with why and what caused it.
 export class StockMovement extends Model<InferAttributes<StockMovement>, InferCreationAttributes<StockMovement>> {

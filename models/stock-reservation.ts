@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { RESERVATION_STATUSES, type ReservationStatus } from './columns';
+import { RESERVATION_STATUSES, type ReservationStatus } from '../lib/domain/orders';
 
 export class StockReservation extends Model<InferAttributes<StockReservation>, InferCreationAttributes<StockReservation>> {
   declare id: CreationOptional<number>;

@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { grams, WEIGHT_CLASSES, type WeightClass } from './columns';
+import { grams } from './columns';
+import { WEIGHT_CLASSES, type WeightClass } from '../lib/metrology/weight-classes';
 
 export class TestWeight extends Model<InferAttributes<TestWeight>, InferCreationAttributes<TestWeight>> {
   declare id: CreationOptional<number>;

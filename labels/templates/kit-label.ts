@@ -10,9 +10,6 @@ export interface KitLabelData extends KitIdentity {
   description: string;
 }
 
-// Kit labels carry two GS1-128 rows and a DataMatrix: only the 4 in wide stocks have the room.
-export const KIT_LABEL_STOCKS: readonly StockId[] = ['4x6in', '4x2in'];
-
 // A kit label for a build order: the kit, its revision, the order and how many kits it made, as
 // GS1-128 (two symbols, each with its bracketed text below, as GS1 asks for human-readable AIs) and one
 // GS1 DataMatrix carrying all of it.

@@ -1,5 +1,14 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
-import { ACCURACY_CLASSES, CONTAINER_KINDS, COUNT_PURPOSES, COUNTING_METHODS, grams, pieceWeight, ratio, SCALE_STATUSES } from '../columns';
+
+// The ENUM values and column types as this migration shipped: never edit them, add a migration.
+const ACCURACY_CLASSES = ['I', 'II', 'III', 'IIII'];
+const CONTAINER_KINDS = ['bag', 'tray', 'tote', 'bin', 'other'];
+const COUNT_PURPOSES = ['kit_line', 'bin', 'audit', 'part'];
+const COUNTING_METHODS = ['scale', 'hand'];
+const grams = () => DataTypes.DECIMAL(14, 6);
+const pieceWeight = () => DataTypes.DECIMAL(16, 9);
+const ratio = () => DataTypes.DECIMAL(10, 8);
+const SCALE_STATUSES = ['in_service', 'due', 'locked'];
 
 const timestamps = {
   created_at: { type: DataTypes.DATE, allowNull: false },

@@ -1,5 +1,11 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
-import { ABC_CLASSES, LINE_VERDICTS, MOVEMENT_REASONS, ORDER_STATUSES, RESERVATION_STATUSES } from '../columns';
+
+// The ENUM values and column types as this migration shipped: never edit them, add a migration.
+const ABC_CLASSES = ['A', 'B', 'C'];
+const LINE_VERDICTS = ['open', 'in', 'uncertain', 'out'];
+const MOVEMENT_REASONS = ['initial', 'receipt', 'adjustment', 'consumption'];
+const ORDER_STATUSES = ['draft', 'released', 'in_progress', 'complete', 'cancelled'];
+const RESERVATION_STATUSES = ['active', 'consumed', 'released'];
 
 const timestamps = {
   created_at: { type: DataTypes.DATE, allowNull: false },

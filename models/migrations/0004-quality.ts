@@ -1,5 +1,12 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
-import { AUDIT_STATUSES, AUDIT_VERDICTS, grams, INSPECTION_LEVELS, VERIFICATION_STAGES, WEIGHT_CLASSES } from '../columns';
+
+// The ENUM values and column types as this migration shipped: never edit them, add a migration.
+const AUDIT_STATUSES = ['open', 'closed'];
+const AUDIT_VERDICTS = ['accepted', 'rejected'];
+const grams = () => DataTypes.DECIMAL(14, 6);
+const INSPECTION_LEVELS = ['I', 'II', 'III'];
+const VERIFICATION_STAGES = ['initial', 'in_service'];
+const WEIGHT_CLASSES = ['E2', 'F1', 'F2', 'M1', 'M2', 'M3'];
 
 const timestamps = {
   created_at: { type: DataTypes.DATE, allowNull: false },

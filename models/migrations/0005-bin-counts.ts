@@ -1,5 +1,7 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
-import { BIN_COUNT_STATUSES } from '../columns';
+
+// The ENUM values and column types as this migration shipped: never edit them, add a migration.
+const BIN_COUNT_STATUSES = ['applied', 'pending', 'approved', 'rejected'];
 
 export async function up({ context: q }: { context: QueryInterface }): Promise<void> {
   await q.createTable('bin_counts', {

@@ -1,5 +1,7 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
-import { PRINT_JOB_STATUSES } from '../columns';
+
+// The ENUM values and column types as this migration shipped: never edit them, add a migration.
+const PRINT_JOB_STATUSES = ['queued', 'sent', 'failed'];
 
 // The print log: every label job the server sent (or failed to send) to a printer.
 export async function up({ context: q }: { context: QueryInterface }): Promise<void> {

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { AQLS, type Aql } from '@/lib/sampling/iso2859';
-import { COUNT_PURPOSES, type CountPurpose } from '@/models/columns';
+import { COUNT_PURPOSES, type CountPurpose } from '@/lib/domain/counting';
 import { wholeCount } from './weights';
 
 const levelSchema = z.enum(['I', 'II', 'III'], { error: 'Inspection level must be I, II or III' });

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { BIN_CODE_HINT, formatBinCode, parseBinCode } from '@/lib/bin-code';
-import { ABC_CLASSES, type AbcClass } from '@/models/columns';
+import { ABC_CLASSES, type AbcClass } from '@/lib/domain/stock';
 import { pagingSchema, recordIdSchema, requiredText } from './common';
 import { wholeCount } from './weights';
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { CONTAINER_KINDS, type ContainerKind } from '@/models/columns';
+import { CONTAINER_KINDS, type ContainerKind } from '@/lib/domain/stock';
 import { requiredText, versionSchema } from './common';
 import { nonNegativeNumber, unitSchema } from './weights';
 

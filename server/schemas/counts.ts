@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { COUNT_PURPOSES, type CountPurpose } from '@/models/columns';
+import { COUNT_PURPOSES, type CountPurpose } from '@/lib/domain/counting';
 import type { CountingWarning } from '@/lib/weighing';
 import { pagingSchema, recordIdSchema } from './common';
 import { nonNegativeNumber, positiveNumber, unitSchema, weightReading, wholeCount } from './weights';

@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { LABEL_TEMPLATES, type LabelTemplate } from '@/labels/render-labels';
+import { LABEL_TEMPLATES, type LabelTemplate } from '@/lib/domain/labels';
 import { STOCK_IDS } from '@/labels/stocks';
-import { KIT_LABEL_STOCKS } from '@/labels/templates/kit-label';
-import type { PrintJobStatus } from '@/models/columns';
+import { KIT_LABEL_STOCKS } from '@/lib/domain/labels';
+import type { PrintJobStatus } from '@/lib/domain/labels';
 
 export const MAX_LABELS_PER_PDF = 1000;
 export const MAX_LABELS_PER_PRINT = 5000;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { LineVerdict, OrderStatus } from '@/models/columns';
+import type { LineVerdict, OrderStatus } from '@/lib/domain/orders';
 import { pagingSchema, recordIdSchema, versionSchema } from './common';
 import { wholeCount } from './weights';
 

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { SpreadBelief } from '@/lib/weighing/spread-belief';
-import { COUNTING_METHODS, type CountingMethod, type SampleStatus } from '@/models/columns';
+import { COUNTING_METHODS, type CountingMethod, type SampleStatus } from '@/lib/domain/counting';
 import { pagingSchema, recordIdSchema, requiredText, versionSchema } from './common';
 import { positiveNumber, unitSchema, weightReading, wholeCount } from './weights';
 

@@ -1,6 +1,6 @@
 import Link from 'next/link';
 import { COUNT_PURPOSE_LABELS } from '@/lib/count-purposes';
-import { COUNT_PURPOSES } from '@/models/columns';
+import { COUNT_PURPOSES } from '@/lib/domain/counting';
 import { requirePageUser } from '@/server/auth/authorize';
 import { zodFields } from '@/server/http/zod-fields';
 import { countLogQuerySchema, type CountLogQuery } from '@/server/schemas/counts';

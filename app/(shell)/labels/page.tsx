@@ -1,5 +1,5 @@
 import { LABEL_STOCKS, STOCK_IDS } from '@/labels/stocks';
-import { KIT_LABEL_STOCKS } from '@/labels/templates/kit-label';
+import { KIT_LABEL_STOCKS } from '@/lib/domain/labels';
 import { requirePageUser } from '@/server/auth/authorize';
 import { listBins } from '@/server/services/bins/list-bins';
 import { listOrders } from '@/server/services/orders/list-orders';

@@ -1,7 +1,7 @@
 import 'server-only';
 import { Op, type WhereOptions } from 'sequelize';
 import type { CountEvent } from '@/models';
-import type { CountPurpose } from '@/models/columns';
+import type { CountPurpose } from '@/lib/domain/counting';
 import { dayStart, shiftDay } from '@/lib/time/site-clock';
 
 export interface CountEventFilter {

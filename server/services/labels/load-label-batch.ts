@@ -1,5 +1,6 @@
 import 'server-only';
-import type { LabelBatch, LabelTemplate } from '@/labels/render-labels';
+import type { LabelBatch } from '@/labels/render-labels';
+import type { LabelTemplate } from '@/lib/domain/labels';
 import type { StockId } from '@/labels/stocks';
 import { loadBinLabels } from './load-bin-labels';
 import { loadKitLabels } from './load-kit-labels';

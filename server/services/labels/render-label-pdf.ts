@@ -1,5 +1,5 @@
 import 'server-only';
-import type { LabelTemplate } from '@/labels/render-labels';
+import type { LabelTemplate } from '@/lib/domain/labels';
 import type { StockId } from '@/labels/stocks';
 import { AppError } from '../../errors';
 import { renderInPool } from '../../labels/label-pool';

@@ -1,6 +1,6 @@
 import 'server-only';
 import { randomUUID } from 'node:crypto';
-import type { LabelTemplate } from '@/labels/render-labels';
+import type { LabelTemplate } from '@/lib/domain/labels';
 import type { StockId } from '@/labels/stocks';
 import { PrintJob } from '@/models';
 import { getDb } from '../../db';

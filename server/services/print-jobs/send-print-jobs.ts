@@ -1,6 +1,6 @@
 import 'server-only';
 import { Op } from 'sequelize';
-import type { LabelTemplate } from '@/labels/render-labels';
+import type { LabelTemplate } from '@/lib/domain/labels';
 import type { StockId } from '@/labels/stocks';
 import { describeUnprintable } from '@/lib/unprintable';
 import { PrintJob, User } from '@/models';
