@@ -6,7 +6,7 @@
 import { performance } from 'node:perf_hooks';
 import { Part, Scale, User } from '../../models';
 import { getDb } from '../../server/db';
-import type { CountLogQuery } from '../../server/schemas/counts';
+import type { CountLogQuery } from '../../lib/contracts/counts';
 import { countLog, countLogTable } from '../../server/services/counting/count-log';
 import { appendFigures, runStamp } from './figures';
 

@@ -1,7 +1,7 @@
 import 'server-only';
 import type { NextRequest } from 'next/server';
 import { AppError } from '../errors';
-import { idempotencyKeySchema } from '../schemas/common';
+import { idempotencyKeySchema } from '@/lib/contracts/common';
 
 /** The request's Idempotency-Key header, checked; `required` refuses a request without one. */
 export function idempotencyKeyOf(req: NextRequest, { required }: { required: boolean }): string | undefined {

@@ -2,8 +2,8 @@
 
 import type { ColDef, ICellRendererParams } from 'ag-grid-community';
 import { rangeText, type PageOf } from '@/lib/page-range';
-import type { BinDto } from '@/server/schemas/bins';
-import type { LastVariance } from '@/server/services/bins/latest-bin-counts';
+import type { BinDto } from '@/lib/contracts/bins';
+import type { LastVariance } from '@/lib/contracts/bins';
 import { DataGrid } from '../../_components/data-grid';
 import { SearchForm } from '../../_components/search-form';
 import { useSiteTime } from '../../_components/site-time';

@@ -1,7 +1,7 @@
 'use client';
 
 import { CYCLE_DAYS } from '@/lib/variance';
-import type { BinDto } from '@/server/schemas/bins';
+import type { BinDto } from '@/lib/contracts/bins';
 import { useSiteTime } from '../../_components/site-time';
 import { BenchLink } from './bench-link';
 

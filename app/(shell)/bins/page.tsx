@@ -1,7 +1,7 @@
 import { firstValues, pageHref } from '@/lib/page-range';
 import { can } from '@/lib/roles';
 import { requirePageUser } from '@/server/auth/authorize';
-import { listBinsSchema } from '@/server/schemas/bins';
+import { listBinsSchema } from '@/lib/contracts/bins';
 import { binsDue } from '@/server/services/bins/bins-due';
 import { latestBinCounts } from '@/server/services/bins/latest-bin-counts';
 import { listBins } from '@/server/services/bins/list-bins';

@@ -5,7 +5,7 @@ import Link from 'next/link';
 import { useMemo } from 'react';
 import { COUNT_PURPOSE_LABELS } from '@/lib/count-purposes';
 import { describeWarning } from '@/lib/weighing/warnings';
-import type { CountLogRow } from '@/server/schemas/counts';
+import type { CountLogRow } from '@/lib/contracts/counts';
 import { DataGrid, fitHeight } from '../../_components/data-grid';
 import { formatGrams } from '../../_components/format';
 import { useSiteTime } from '../../_components/site-time';

@@ -3,7 +3,7 @@ import { COUNT_PURPOSE_LABELS } from '@/lib/count-purposes';
 import { COUNT_PURPOSES } from '@/lib/domain/counting';
 import { requirePageUser } from '@/server/auth/authorize';
 import { zodFields } from '@/server/http/zod-fields';
-import { countLogQuerySchema, type CountLogQuery } from '@/server/schemas/counts';
+import { countLogQuerySchema, type CountLogQuery } from '@/lib/contracts/counts';
 import { countLog } from '@/server/services/counting/count-log';
 import { listScales } from '@/server/services/scales/list-scales';
 import { firstValues, pageHref, rangeText } from '@/lib/page-range';

@@ -4,7 +4,7 @@ import { Formik } from 'formik';
 import { ReadyForm } from '../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
-import type { KitDto } from '@/server/schemas/kits';
+import type { KitDto } from '@/lib/contracts/kits';
 import { apiFetch } from '../../_components/api-client';
 import { useRequestKey } from '../../_components/request-key';
 import { FormField, FormMessage } from '../../_components/form-field';

@@ -4,7 +4,7 @@ import type { ColDef, ICellRendererParams } from 'ag-grid-community';
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import type { BomImportRow, KitDto } from '@/server/schemas/kits';
+import type { BomImportRow, KitDto } from '@/lib/contracts/kits';
 import { CsvImport } from '../../_components/csv-import';
 import { DataGrid, fitHeight } from '../../_components/data-grid';
 import { KitCreateForm } from './kit-create-form';

@@ -2,7 +2,7 @@
 
 import type { ColDef } from 'ag-grid-community';
 import { useMemo, useState } from 'react';
-import type { PrintJobDto } from '@/server/schemas/labels';
+import type { PrintJobDto } from '@/lib/contracts/labels';
 import { describeUnprintable, fromCodePointList, UNPRINTABLE_HEADER } from '@/lib/unprintable';
 import { apiFetch } from '../../_components/api-client';
 import { DataGrid, fitHeight } from '../../_components/data-grid';

@@ -2,7 +2,7 @@
 
 import type { ColDef, ICellRendererParams } from 'ag-grid-community';
 import { useEffect, useState } from 'react';
-import type { PrintJobDto } from '@/server/schemas/labels';
+import type { PrintJobDto } from '@/lib/contracts/labels';
 import { apiFetch } from '../../_components/api-client';
 import { DataGrid, fitHeight } from '../../_components/data-grid';
 import { useSiteTime } from '../../_components/site-time';

@@ -5,7 +5,7 @@ import { ReadyForm } from '../../_components/ready-form';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import * as yup from 'yup';
-import type { OrderDto } from '@/server/schemas/orders';
+import type { OrderDto } from '@/lib/contracts/orders';
 import { apiFetch } from '../../_components/api-client';
 import { useRequestKey } from '../../_components/request-key';
 import { FormField, FormMessage } from '../../_components/form-field';

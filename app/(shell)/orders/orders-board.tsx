@@ -4,7 +4,7 @@ import type { ColDef, ICellRendererParams } from 'ag-grid-community';
 import Link from 'next/link';
 import { ORDER_STATUS_WORDS, STATUS_STYLE } from '@/lib/order-words';
 import { pageHref, rangeText, type PageOf } from '@/lib/page-range';
-import type { OrderSummaryDto } from '@/server/schemas/orders';
+import type { OrderSummaryDto } from '@/lib/contracts/orders';
 import { DataGrid, fitHeight } from '../../_components/data-grid';
 import { SearchForm } from '../../_components/search-form';
 import { OrderCreateForm, type KitChoice } from './order-create-form';

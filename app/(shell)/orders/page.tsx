@@ -2,7 +2,7 @@ import { can } from '@/lib/roles';
 import { firstValues, pageHref } from '@/lib/page-range';
 import { siteDay } from '@/lib/time/site-clock';
 import { requirePageUser } from '@/server/auth/authorize';
-import { listOrdersSchema } from '@/server/schemas/orders';
+import { listOrdersSchema } from '@/lib/contracts/orders';
 import { listKits } from '@/server/services/kits/list-kits';
 import { listOrders } from '@/server/services/orders/list-orders';
 import { siteTimeZone } from '@/server/services/settings/get-settings';

@@ -2,7 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import type { HeldSample } from '@/server/services/parts/held-samples';
+import type { HeldSample } from '@/lib/contracts/parts';
 import { apiFetch } from '../../_components/api-client';
 import { ConfirmBar, type PendingConfirm } from '../../_components/confirm-bar';
 

@@ -1,7 +1,7 @@
 import { can } from '@/lib/roles';
 import { firstValues, pageHref } from '@/lib/page-range';
 import { requirePageUser } from '@/server/auth/authorize';
-import { listPartsSchema } from '@/server/schemas/parts';
+import { listPartsSchema } from '@/lib/contracts/parts';
 import { listHeldSamples } from '@/server/services/parts/held-samples';
 import { listParts } from '@/server/services/parts/list-parts';
 import { getSettings } from '@/server/services/settings/get-settings';

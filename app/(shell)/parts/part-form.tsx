@@ -4,7 +4,7 @@ import { Field, Formik } from 'formik';
 import { ReadyForm } from '../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
-import type { PartDto } from '@/server/schemas/parts';
+import type { PartDto } from '@/lib/contracts/parts';
 import { apiFetch } from '../../_components/api-client';
 import { FormField, FormMessage } from '../../_components/form-field';
 import { PartPhoto } from './part-photo';

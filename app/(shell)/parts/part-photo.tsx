@@ -2,7 +2,7 @@
 
 import { useRef, useState } from 'react';
 import { CONTENT_TYPES, MAX_UPLOAD_BYTES } from '@/lib/file-kind';
-import type { PartDto } from '@/server/schemas/parts';
+import type { PartDto } from '@/lib/contracts/parts';
 import { apiFetch } from '../../_components/api-client';
 
 const ACCEPT = [CONTENT_TYPES.jpeg, CONTENT_TYPES.png, CONTENT_TYPES.webp].join(',');

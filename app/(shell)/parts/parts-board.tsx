@@ -4,7 +4,7 @@ import type { ColDef, ICellRendererParams } from 'ag-grid-community';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { pageRange, type PageOf } from '@/lib/page-range';
-import type { PartDto, PartImportRow } from '@/server/schemas/parts';
+import type { PartDto, PartImportRow } from '@/lib/contracts/parts';
 import { CsvImport } from '../../_components/csv-import';
 import { DataGrid, fitHeight } from '../../_components/data-grid';
 import { SearchForm } from '../../_components/search-form';

@@ -1,7 +1,7 @@
 import 'server-only';
 import type { Audit, AuditItem, CountEvent, Part } from '@/models';
 import { judgeAuditItem } from '@/lib/sampling/judge-audit';
-import type { AuditDto, AuditItemDto, Population } from '../../schemas/audits';
+import type { AuditDto, AuditItemDto, Population } from '@/lib/contracts/audits';
 import { wholePieceRangeOf } from '../counting/count-event-dto';
 
 type LoadedItem = AuditItem & { event?: CountEvent & { part?: Part } };

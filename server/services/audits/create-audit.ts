@@ -6,7 +6,7 @@ import { selectSample } from '@/lib/sampling/select-sample';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
-import type { AuditDto, CreateAuditInput } from '../../schemas/audits';
+import type { AuditDto, CreateAuditInput } from '@/lib/contracts/audits';
 import { countEventWhere } from '../counting/count-event-filter';
 import { siteTimeZone } from '../settings/get-settings';
 import { getAudit } from './get-audit';

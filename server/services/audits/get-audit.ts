@@ -2,7 +2,7 @@ import 'server-only';
 import { Audit } from '@/models';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
-import type { AuditDto } from '../../schemas/audits';
+import type { AuditDto } from '@/lib/contracts/audits';
 import { AUDIT_INCLUDE, toAuditDto } from './audit-dto';
 
 export async function getAudit({ auditId }: { auditId: number }): Promise<AuditDto> {

@@ -6,7 +6,7 @@ import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
 import { sendMail } from '../../mail/send-mail';
-import type { AuditDto } from '../../schemas/audits';
+import type { AuditDto } from '@/lib/contracts/audits';
 import { getAudit } from './get-audit';
 
 // Keys in one recount. When the last item is in, the lot is judged (ISO 2859-1 Ac/Re);

@@ -1,6 +1,6 @@
 import 'server-only';
 import type { Bin, Part } from '@/models';
-import type { BinDto } from '../../schemas/bins';
+import type { BinDto } from '@/lib/contracts/bins';
 
 export function toBinDto(b: Bin & { part?: Part }): BinDto {
   return {

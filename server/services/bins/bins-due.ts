@@ -2,7 +2,7 @@ import 'server-only';
 import { Bin } from '@/models';
 import { isDue } from '@/lib/variance';
 import { getDb } from '../../db';
-import type { BinDto } from '../../schemas/bins';
+import type { BinDto } from '@/lib/contracts/bins';
 import { toBinDto } from './bin-dto';
 
 // The cycle-count plan: bins never counted, then the longest overdue, by their ABC class interval.

@@ -3,7 +3,7 @@ import { Bin, Container, Part, StockMovement } from '@/models';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
-import type { BinDto, CreateBinInput } from '../../schemas/bins';
+import type { BinDto, CreateBinInput } from '@/lib/contracts/bins';
 import { oncePerKey } from '../requests/once-per-key';
 import { addOnHand } from '../stock/add-on-hand';
 import { toBinDto } from './bin-dto';

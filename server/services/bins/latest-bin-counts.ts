@@ -2,12 +2,7 @@ import 'server-only';
 import { fn, col, Op } from 'sequelize';
 import { BinCount } from '@/models';
 import { getDb } from '../../db';
-
-export interface LastVariance {
-  variance: number;
-  status: string;
-  countedAt: string;
-}
+import type { LastVariance } from '@/lib/contracts/bins';
 
 // The newest cycle count of each of these bins: what the bins list shows as its last variance.
 export async function latestBinCounts(binIds: number[]): Promise<Record<number, LastVariance>> {

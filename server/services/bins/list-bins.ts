@@ -4,8 +4,8 @@ import { Bin } from '@/models';
 import { parseBinCode, formatBinCode } from '@/lib/bin-code';
 import { getDb } from '../../db';
 import { pageOfRows } from '../../db-page';
-import { startsWithPattern, type PageOf } from '../../schemas/common';
-import type { BinDto, ListBinsQuery } from '../../schemas/bins';
+import { startsWithPattern, type PageOf } from '@/lib/contracts/common';
+import type { BinDto, ListBinsQuery } from '@/lib/contracts/bins';
 import { toBinDto } from './bin-dto';
 
 // One page of bins in code order, which is also the walk order of the stockroom.

@@ -2,19 +2,7 @@ import 'server-only';
 import { BinCount } from '@/models';
 import { variancePercent } from '@/lib/variance';
 import { getDb } from '../../db';
-
-export interface PendingVariance {
-  id: number;
-  binCode: string;
-  partNumber: string;
-  bookQuantity: number;
-  counted: number;
-  variance: number;
-  percent: number | null;
-  countedBy: string;
-  countedById: number;
-  countedAt: string;
-}
+import type { PendingVariance } from '@/lib/contracts/bins';
 
 // Variances beyond the site limits waiting for a planner, quality or an admin, oldest first.
 export async function pendingVariances(): Promise<PendingVariance[]> {

@@ -1,6 +1,6 @@
 import 'server-only';
 import type { CalibrationRecord } from '@/models';
-import type { CalibrationRecordDto } from '../../schemas/calibration';
+import type { CalibrationRecordDto } from '@/lib/contracts/calibration';
 
 export function toCalibrationRecordDto(r: CalibrationRecord): CalibrationRecordDto {
   const verdict = r.verdict as { weightProblems?: string[] };

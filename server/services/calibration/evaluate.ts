@@ -1,7 +1,7 @@
 import 'server-only';
 import { evaluateCalibration, type CalibrationVerdict } from '@/lib/metrology/evaluate-calibration';
 import { fromGrams, toGrams } from '@/lib/weighing/units';
-import type { EvaluateCalibrationInput } from '../../schemas/calibration';
+import type { EvaluateCalibrationInput } from '@/lib/contracts/calibration';
 
 // The pure verdict in the request's unit: converted to grams, judged, converted back.
 export function evaluateInUnit(input: EvaluateCalibrationInput): CalibrationVerdict {

@@ -2,7 +2,7 @@ import 'server-only';
 import { CalibrationRecord, Scale } from '@/models';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
-import type { CalibrationRecordDto } from '../../schemas/calibration';
+import type { CalibrationRecordDto } from '@/lib/contracts/calibration';
 import { toCalibrationRecordDto } from './calibration-record-dto';
 
 export async function listCalibrations({ scaleId }: { scaleId: number }): Promise<CalibrationRecordDto[]> {

@@ -3,7 +3,7 @@ import { Scale } from '@/models';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
-import type { ScaleDto } from '../../schemas/scales';
+import type { ScaleDto } from '@/lib/contracts/scales';
 import { toScaleDto } from '../scales/scale-dto';
 
 // A manual lock-out (dropped, damaged, suspect). Only a passing calibration record lifts it.

@@ -6,7 +6,7 @@ import { toGrams } from '@/lib/weighing/units';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
-import type { CalibrationRecordDto, RecordCalibrationInput } from '../../schemas/calibration';
+import type { CalibrationRecordDto, RecordCalibrationInput } from '@/lib/contracts/calibration';
 import { siteTimeZone } from '../settings/get-settings';
 import { checkTestWeights } from './check-test-weights';
 import { toCalibrationRecordDto } from './calibration-record-dto';

@@ -3,7 +3,7 @@ import { TestWeight } from '@/models';
 import { siteDay } from '@/lib/time/site-clock';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
-import type { TestWeightDto } from '../../schemas/calibration';
+import type { TestWeightDto } from '@/lib/contracts/calibration';
 import { readUpload, storeAttachedUpload } from '../../uploads/store-upload';
 import { siteTimeZone } from '../settings/get-settings';
 import { toTestWeightDto } from './test-weights';

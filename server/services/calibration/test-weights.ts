@@ -5,7 +5,7 @@ import { siteDay } from '@/lib/time/site-clock';
 import { toGrams } from '@/lib/weighing/units';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
-import type { CreateTestWeightInput, TestWeightDto } from '../../schemas/calibration';
+import type { CreateTestWeightInput, TestWeightDto } from '@/lib/contracts/calibration';
 import { siteTimeZone } from '../settings/get-settings';
 
 // `today` is the site's day: a weight due today is still in date.

@@ -2,7 +2,7 @@ import 'server-only';
 import { Container } from '@/models';
 import { toGrams } from '@/lib/weighing/units';
 import { getDb } from '../../db';
-import type { ContainerDto, CreateContainerInput } from '../../schemas/containers';
+import type { ContainerDto, CreateContainerInput } from '@/lib/contracts/containers';
 import { toContainerDto } from './container-dto';
 
 export async function createContainer({ input }: { input: CreateContainerInput }): Promise<ContainerDto> {

@@ -3,7 +3,7 @@ import { Container } from '@/models';
 import { toGrams } from '@/lib/weighing/units';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
-import type { ContainerDto, UpdateContainerInput } from '../../schemas/containers';
+import type { ContainerDto, UpdateContainerInput } from '@/lib/contracts/containers';
 import { toContainerDto } from './container-dto';
 
 export async function updateContainer({ containerId, input }: { containerId: number; input: UpdateContainerInput }): Promise<ContainerDto> {

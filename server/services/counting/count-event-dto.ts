@@ -1,7 +1,7 @@
 import 'server-only';
 import type { CountEvent } from '@/models';
 import { toWholePieces, type CountingWarning } from '@/lib/weighing';
-import type { CountEventDto } from '../../schemas/counts';
+import type { CountEventDto } from '@/lib/contracts/counts';
 
 // Captures from before the range was kept: exact ones are 0, others U in whole pieces.
 export function wholePieceRangeOf(e: Pick<CountEvent, 'wholePieceRange' | 'exact' | 'expandedUncertainty'>): number {

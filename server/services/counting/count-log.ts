@@ -4,7 +4,7 @@ import { Bin, BuildOrder, BuildOrderLine, CountEvent, Part, Scale, User } from '
 import type { WarningCode } from '@/lib/weighing/warnings';
 import { formatSiteDateTime } from '@/lib/time/site-clock';
 import { getDb } from '../../db';
-import type { CountLogQuery, CountLogRow } from '../../schemas/counts';
+import type { CountLogQuery, CountLogRow } from '@/lib/contracts/counts';
 import { siteTimeZone } from '../settings/get-settings';
 import { countEventWhere } from './count-event-filter';
 import { wholePieceRangeOf } from './count-event-dto';

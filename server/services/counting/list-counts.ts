@@ -3,7 +3,7 @@ import { CountEvent } from '@/models';
 import { getDb } from '../../db';
 import { pageOfRows } from '../../db-page';
 import { siteTimeZone } from '../settings/get-settings';
-import type { CountEventDto, ListCountsQuery } from '../../schemas/counts';
+import type { CountEventDto, ListCountsQuery } from '@/lib/contracts/counts';
 import { toCountEventDto } from './count-event-dto';
 import { countEventWhere } from './count-event-filter';
 

@@ -1,7 +1,7 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
 import { Bin, BuildOrderLine } from '@/models';
-import type { RecordCountInput } from '../../schemas/counts';
+import type { RecordCountInput } from '@/lib/contracts/counts';
 
 // Takes the exclusive lock on the bin or order line a capture fills before the capture row is
 // written: the row's foreign key would otherwise take a shared lock first, and two captures

@@ -11,7 +11,7 @@ import { getDb } from '../../db';
 import { log } from '../../log';
 import { AppError } from '../../errors';
 import { retryOnDeadlock } from '../../retry-deadlock';
-import type { CountEventDto, RecordCountInput } from '../../schemas/counts';
+import type { CountEventDto, RecordCountInput } from '@/lib/contracts/counts';
 import { applyBinCount, type BinCountResult } from '../bins/apply-bin-count';
 import { notifyPendingVariance } from '../bins/notify-pending-variance';
 import { applyCountToLine, type LineProgress } from '../orders/apply-count-to-line';

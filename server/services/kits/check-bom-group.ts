@@ -1,6 +1,6 @@
 import 'server-only';
 import type { z } from 'zod';
-import type { bomCsvRowSchema, BomImportRow } from '../../schemas/kits';
+import type { bomCsvRowSchema, BomImportRow } from '@/lib/contracts/kits';
 
 export interface BomGroup {
   kitCode: string;

@@ -2,7 +2,7 @@ import 'server-only';
 import { Kit } from '@/models';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
-import type { KitDto } from '../../schemas/kits';
+import type { KitDto } from '@/lib/contracts/kits';
 import { KIT_INCLUDE, toKitDto } from './kit-dto';
 import { writeComponents } from './write-components';
 

@@ -3,7 +3,7 @@ import { Kit } from '@/models';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
 import type { SessionUser } from '../../auth/session';
-import type { CreateKitInput, KitDto } from '../../schemas/kits';
+import type { CreateKitInput, KitDto } from '@/lib/contracts/kits';
 import { oncePerKey } from '../requests/once-per-key';
 import { KIT_INCLUDE, toKitDto } from './kit-dto';
 import { writeComponents } from './write-components';

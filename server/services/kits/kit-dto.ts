@@ -1,6 +1,6 @@
 import 'server-only';
 import type { Kit, KitComponent, Part } from '@/models';
-import type { KitDto } from '../../schemas/kits';
+import type { KitDto } from '@/lib/contracts/kits';
 
 type LoadedKit = Kit & { components?: Array<KitComponent & { part?: Part }> };
 

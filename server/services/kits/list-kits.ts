@@ -2,7 +2,7 @@ import 'server-only';
 import { Kit } from '@/models';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
-import type { KitDto } from '../../schemas/kits';
+import type { KitDto } from '@/lib/contracts/kits';
 import { KIT_INCLUDE, toKitDto } from './kit-dto';
 
 export async function listKits(): Promise<KitDto[]> {

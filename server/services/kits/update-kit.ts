@@ -3,7 +3,7 @@ import { BuildOrder, Kit } from '@/models';
 import { Op } from 'sequelize';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
-import type { KitDto, UpdateKitInput } from '../../schemas/kits';
+import type { KitDto, UpdateKitInput } from '@/lib/contracts/kits';
 import { KIT_INCLUDE, toKitDto } from './kit-dto';
 import { writeComponents } from './write-components';
 

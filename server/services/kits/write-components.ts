@@ -2,7 +2,7 @@ import 'server-only';
 import { Op, type Transaction } from 'sequelize';
 import { KitComponent, Part } from '@/models';
 import { AppError } from '../../errors';
-import type { CreateKitInput } from '../../schemas/kits';
+import type { CreateKitInput } from '@/lib/contracts/kits';
 
 // Replaces a kit's bill of material in the caller's transaction; every part must exist.
 export async function writeComponents(kitId: number, components: CreateKitInput['components'], transaction: Transaction): Promise<void> {

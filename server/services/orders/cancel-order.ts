@@ -2,7 +2,7 @@ import 'server-only';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
 import { retryOnDeadlock } from '../../retry-deadlock';
-import type { OrderDto } from '../../schemas/orders';
+import type { OrderDto } from '@/lib/contracts/orders';
 import { getOrder } from './get-order';
 import { lockOrder } from './lock-order';
 import { lockOrderStock } from './order-availability';

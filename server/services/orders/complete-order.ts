@@ -5,7 +5,7 @@ import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
 import { retryOnDeadlock } from '../../retry-deadlock';
-import type { CompleteOrderInput, OrderDto } from '../../schemas/orders';
+import type { CompleteOrderInput, OrderDto } from '@/lib/contracts/orders';
 import { log } from '../../log';
 import { printKitLabel } from '../print-jobs/print-kit-label';
 import { getOrder } from './get-order';

@@ -5,7 +5,7 @@ import { siteYear } from '@/lib/time/site-clock';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
-import type { CreateOrderInput, OrderDto } from '../../schemas/orders';
+import type { CreateOrderInput, OrderDto } from '@/lib/contracts/orders';
 import { siteTimeZone } from '../settings/get-settings';
 import { oncePerKey } from '../requests/once-per-key';
 import { getOrder } from './get-order';

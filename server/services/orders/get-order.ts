@@ -2,7 +2,7 @@ import 'server-only';
 import { BuildOrder } from '@/models';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
-import type { OrderDto } from '../../schemas/orders';
+import type { OrderDto } from '@/lib/contracts/orders';
 import { ORDER_INCLUDE, toOrderDto } from './order-dto';
 
 export async function getOrder({ orderId }: { orderId: number }): Promise<OrderDto> {

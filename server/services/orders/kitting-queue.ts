@@ -2,26 +2,7 @@ import 'server-only';
 import { QueryTypes } from 'sequelize';
 import { getDb } from '../../db';
 import { lineUncertainty } from './line-verdict';
-
-export interface QueueLine {
-  orderLineId: number;
-  orderId: number;
-  orderNumber: string;
-  kitCode: string;
-  kitRevision: string;
-  dueDate: string | null;
-  partId: number;
-  partNumber: string;
-  description: string;
-  required: number;
-  counted: number;
-  remaining: number;
-  toleranceBelow: number;
-  toleranceAbove: number;
-  expandedUncertainty: number;
-  wholePieceRange: number;
-  verdict: string;
-}
+import type { QueueLine } from '@/lib/contracts/orders';
 
 // Lines of released orders with pieces still to count, the most urgent order first. A line counted in
 // full but not in tolerance (over, or an uncertain total) is the planner's to decide, not the bench's:

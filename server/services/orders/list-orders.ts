@@ -3,8 +3,8 @@ import { col, fn, literal, Op, type WhereOptions } from 'sequelize';
 import { BuildOrder, BuildOrderLine } from '@/models';
 import { getDb } from '../../db';
 import { pageOfRows } from '../../db-page';
-import { startsWithPattern, type PageOf } from '../../schemas/common';
-import type { ListOrdersQuery, OrderSummaryDto } from '../../schemas/orders';
+import { startsWithPattern, type PageOf } from '@/lib/contracts/common';
+import type { ListOrdersQuery, OrderSummaryDto } from '@/lib/contracts/orders';
 import { toOrderSummaryDto } from './order-dto';
 
 const OPEN = ['draft', 'released', 'in_progress'];

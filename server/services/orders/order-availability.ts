@@ -1,7 +1,7 @@
 import 'server-only';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { getDb } from '../../db';
-import type { AvailabilityLine } from '../../schemas/orders';
+import type { AvailabilityLine } from '@/lib/contracts/orders';
 
 interface Row {
   part_id: number;

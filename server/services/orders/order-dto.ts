@@ -1,6 +1,6 @@
 import 'server-only';
 import type { BuildOrder, BuildOrderLine, Kit, Part } from '@/models';
-import type { OrderDto, OrderLineDto, OrderSummaryDto } from '../../schemas/orders';
+import type { OrderDto, OrderLineDto, OrderSummaryDto } from '@/lib/contracts/orders';
 import { lineUncertainty } from './line-verdict';
 
 type LoadedOrder = BuildOrder & { kit?: Kit; lines?: Array<BuildOrderLine & { part?: Part }> };

@@ -1,5 +1,5 @@
 import 'server-only';
-import type { AvailabilityLine, OrderDto } from '../../schemas/orders';
+import type { AvailabilityLine, OrderDto } from '@/lib/contracts/orders';
 
 export function releaseMail(order: OrderDto, by: string): { kind: string; subject: string; text: string } {
   return {

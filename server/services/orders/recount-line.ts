@@ -3,7 +3,7 @@ import { BuildOrderLine, CountEvent } from '@/models';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
 import { retryOnDeadlock } from '../../retry-deadlock';
-import type { OrderDto } from '../../schemas/orders';
+import type { OrderDto } from '@/lib/contracts/orders';
 import { getOrder } from './get-order';
 import { lockOrder } from './lock-order';
 

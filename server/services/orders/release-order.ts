@@ -5,7 +5,7 @@ import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
 import { retryOnDeadlock } from '../../retry-deadlock';
 import { sendMail } from '../../mail/send-mail';
-import type { AvailabilityLine, OrderDto } from '../../schemas/orders';
+import type { AvailabilityLine, OrderDto } from '@/lib/contracts/orders';
 import { getOrder } from './get-order';
 import { orderAvailability } from './order-availability';
 import { releaseMail, shortageMail } from './order-mails';

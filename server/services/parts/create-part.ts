@@ -1,7 +1,7 @@
 import 'server-only';
 import { Part } from '@/models';
 import { getDb } from '../../db';
-import type { CreatePartInput, PartDto } from '../../schemas/parts';
+import type { CreatePartInput, PartDto } from '@/lib/contracts/parts';
 import { toPartDto } from './part-dto';
 
 export async function createPart({ input }: { input: CreatePartInput }): Promise<PartDto> {

@@ -3,7 +3,7 @@ import { Part, PieceWeightSample } from '@/models';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
-import type { PartDto, SampleDecisionInput, SampleDto } from '../../schemas/parts';
+import type { PartDto, SampleDecisionInput, SampleDto } from '@/lib/contracts/parts';
 import { toPartDto, toSampleDto } from './part-dto';
 import { relearnPart } from './relearn-part';
 

@@ -1,7 +1,7 @@
 import 'server-only';
 import { Part } from '@/models';
 import { getDb } from '../../db';
-import type { ExportPartsQuery } from '../../schemas/parts';
+import type { ExportPartsQuery } from '@/lib/contracts/parts';
 import { toPartDto } from './part-dto';
 import { partSearch } from './part-search';
 

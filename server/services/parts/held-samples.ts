@@ -1,20 +1,7 @@
 import 'server-only';
 import { Part, PieceWeightSample, Scale, User } from '@/models';
 import { getDb } from '../../db';
-
-export interface HeldSample {
-  id: number;
-  partId: number;
-  partNumber: string;
-  /** The part's APW now (g), which accepting would replace. */
-  partApw: number | null;
-  quantity: number;
-  averagePieceWeight: number;
-  holdReason: string;
-  scaleName: string;
-  takenBy: string;
-  takenAt: string;
-}
+import type { HeldSample } from '@/lib/contracts/parts';
 
 // Samples far from their part's history, oldest first: what a planner or quality engineer decides.
 export async function listHeldSamples(): Promise<HeldSample[]> {

@@ -2,8 +2,8 @@ import 'server-only';
 import { Op } from 'sequelize';
 import { Part } from '@/models';
 import { getDb } from '../../db';
-import type { ImportCsvInput, ImportResult } from '../../schemas/imports';
-import { createPartSchema, type PartImportRow } from '../../schemas/parts';
+import type { ImportCsvInput, ImportResult } from '@/lib/contracts/imports';
+import { createPartSchema, type PartImportRow } from '@/lib/contracts/parts';
 import { readCsvRecords } from '../imports/read-csv-records';
 import { rowErrors } from '../imports/row-errors';
 

@@ -3,7 +3,7 @@ import { Part } from '@/models';
 import { getDb } from '../../db';
 import { pageOfRows } from '../../db-page';
 import { notFound } from '../../errors';
-import type { ListPartsQuery, PartDto } from '../../schemas/parts';
+import type { ListPartsQuery, PartDto } from '@/lib/contracts/parts';
 import { toPartDto } from './part-dto';
 import { partSearch } from './part-search';
 

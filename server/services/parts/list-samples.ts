@@ -2,7 +2,7 @@ import 'server-only';
 import { Part, PieceWeightSample } from '@/models';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
-import type { SampleDto } from '../../schemas/parts';
+import type { SampleDto } from '@/lib/contracts/parts';
 import { toSampleDto } from './part-dto';
 
 export async function listSamples({ partId, limit = 100 }: { partId: number; limit?: number }): Promise<SampleDto[]> {

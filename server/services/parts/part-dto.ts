@@ -1,6 +1,6 @@
 import 'server-only';
 import type { Part, PieceWeightSample } from '@/models';
-import type { PartDto, SampleDto } from '../../schemas/parts';
+import type { PartDto, SampleDto } from '@/lib/contracts/parts';
 import { partSpreadBelief } from './part-spread-belief';
 
 export function toPartDto(p: Part): PartDto {

@@ -3,7 +3,7 @@ import { Part } from '@/models';
 import { CONTENT_TYPES, type FileKind } from '@/lib/file-kind';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
-import type { PartDto } from '../../schemas/parts';
+import type { PartDto } from '@/lib/contracts/parts';
 import { readUpload, removeUpload, storeAttachedUpload } from '../../uploads/store-upload';
 import { toPartDto } from './part-dto';
 

@@ -5,7 +5,7 @@ import { toGrams } from '@/lib/weighing/units';
 import type { SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
-import type { PartDto, RecordSampleInput, SampleDto } from '../../schemas/parts';
+import type { PartDto, RecordSampleInput, SampleDto } from '@/lib/contracts/parts';
 import { loadUsableScale, scaleNoise } from '../scales/usable-scale';
 import { siteDay } from '@/lib/time/site-clock';
 import { siteTimeZone } from '../settings/get-settings';

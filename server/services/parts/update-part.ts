@@ -2,7 +2,7 @@ import 'server-only';
 import { Part } from '@/models';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
-import type { PartDto, UpdatePartInput } from '../../schemas/parts';
+import type { PartDto, UpdatePartInput } from '@/lib/contracts/parts';
 import { toPartDto } from './part-dto';
 
 export async function updatePart({ partId, input }: { partId: number; input: UpdatePartInput }): Promise<PartDto> {

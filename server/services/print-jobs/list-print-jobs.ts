@@ -1,7 +1,7 @@
 import 'server-only';
 import { PrintJob } from '@/models';
 import { getDb } from '../../db';
-import type { PrintJobDto } from '../../schemas/labels';
+import type { PrintJobDto } from '@/lib/contracts/labels';
 import { toPrintJobDto } from './print-job-dto';
 
 // The print log, newest first; one batch in order when asked for (the progress of a big print).

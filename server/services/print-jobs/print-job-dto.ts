@@ -1,6 +1,6 @@
 import 'server-only';
 import type { PrintJob } from '@/models';
-import type { PrintJobDto } from '../../schemas/labels';
+import type { PrintJobDto } from '@/lib/contracts/labels';
 
 export function toPrintJobDto(job: PrintJob): PrintJobDto {
   return {

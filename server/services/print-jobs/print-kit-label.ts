@@ -1,6 +1,6 @@
 import 'server-only';
 import type { StockId } from '@/labels/stocks';
-import type { PrintJobDto } from '../../schemas/labels';
+import type { PrintJobDto } from '@/lib/contracts/labels';
 import { queuePrintJobs } from './queue-print-jobs';
 import { sendPrintJobs } from './send-print-jobs';
 

@@ -5,7 +5,7 @@ import type { StockId } from '@/labels/stocks';
 import { PrintJob } from '@/models';
 import { getDb } from '../../db';
 import { printerUrlFor } from '../../print/printer-url';
-import type { PrintJobDto } from '../../schemas/labels';
+import type { PrintJobDto } from '@/lib/contracts/labels';
 import { loadLabelBatch } from '../labels/load-label-batch';
 import { toPrintJobDto } from './print-job-dto';
 

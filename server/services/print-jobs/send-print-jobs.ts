@@ -7,7 +7,7 @@ import { PrintJob, User } from '@/models';
 import { getDb } from '../../db';
 import { log } from '../../log';
 import { sendToPrinter } from '../../print/send-to-printer';
-import type { PrintJobDto } from '../../schemas/labels';
+import type { PrintJobDto } from '@/lib/contracts/labels';
 import { renderLabelPdf } from '../labels/render-label-pdf';
 import { toPrintJobDto } from './print-job-dto';
 

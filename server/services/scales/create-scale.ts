@@ -2,7 +2,7 @@ import 'server-only';
 import { Scale } from '@/models';
 import { toGrams } from '@/lib/weighing/units';
 import { getDb } from '../../db';
-import type { CreateScaleInput, ScaleDto } from '../../schemas/scales';
+import type { CreateScaleInput, ScaleDto } from '@/lib/contracts/scales';
 import { toScaleDto } from './scale-dto';
 import { checkScaleMetrology } from './scale-metrology';
 

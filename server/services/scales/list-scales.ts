@@ -2,7 +2,7 @@ import 'server-only';
 import { Scale } from '@/models';
 import { getDb } from '../../db';
 import { notFound } from '../../errors';
-import type { ScaleDto } from '../../schemas/scales';
+import type { ScaleDto } from '@/lib/contracts/scales';
 import { toScaleDto } from './scale-dto';
 
 export async function listScales(): Promise<ScaleDto[]> {

@@ -1,8 +1,8 @@
 import 'server-only';
 import type { Scale } from '@/models';
 import { intervalCount } from '@/lib/metrology/accuracy-class';
-import type { ScaleConnection } from '../../schemas/scale-connection';
-import type { ScaleDto } from '../../schemas/scales';
+import type { ScaleConnection } from '@/lib/contracts/scale-connection';
+import type { ScaleDto } from '@/lib/contracts/scales';
 
 export function toScaleDto(s: Scale): ScaleDto {
   const e = Number(s.verificationIntervalG);

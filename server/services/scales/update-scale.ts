@@ -3,7 +3,7 @@ import { Scale } from '@/models';
 import { toGrams } from '@/lib/weighing/units';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
-import type { ScaleDto, UpdateScaleInput } from '../../schemas/scales';
+import type { ScaleDto, UpdateScaleInput } from '@/lib/contracts/scales';
 import { toScaleDto } from './scale-dto';
 import { checkScaleMetrology } from './scale-metrology';
 

@@ -1,7 +1,7 @@
 import 'server-only';
 import { SiteSettings } from '@/models';
 import { getDb } from '../../db';
-import type { SettingsDto } from '../../schemas/settings';
+import type { SettingsDto } from '@/lib/contracts/settings';
 import { serverTimeZone } from './server-time-zone';
 
 export function toSettingsDto(s: SiteSettings): SettingsDto {

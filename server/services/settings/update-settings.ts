@@ -2,7 +2,7 @@ import 'server-only';
 import { SiteSettings } from '@/models';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
-import type { SettingsDto, UpdateSettingsInput } from '../../schemas/settings';
+import type { SettingsDto, UpdateSettingsInput } from '@/lib/contracts/settings';
 import { toSettingsDto } from './get-settings';
 
 export async function updateSettings({ input }: { input: UpdateSettingsInput }): Promise<SettingsDto> {

@@ -5,7 +5,7 @@ import { hashPassword } from '../../auth/passwords';
 import { endSessionsOf, type SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError } from '../../errors';
-import type { AcceptInvitationInput } from '../../schemas/session';
+import type { AcceptInvitationInput } from '@/lib/contracts/session';
 import { hashToken } from './issue-password-token';
 
 const expired = () =>

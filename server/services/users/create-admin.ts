@@ -4,7 +4,7 @@ import { getDb } from '../../db';
 import { getEnv } from '../../env';
 import { AppError } from '../../errors';
 import { zodFields } from '../../http/zod-fields';
-import { inviteUserSchema } from '../../schemas/users';
+import { inviteUserSchema } from '@/lib/contracts/users';
 import { issuePasswordToken } from './issue-password-token';
 
 export interface CreateAdminResult {

@@ -7,7 +7,7 @@ import { getEnv } from '../../env';
 import { AppError } from '../../errors';
 import { sendMail } from '../../mail/send-mail';
 import { invitationMail } from '../../mail/templates/invitation';
-import type { InviteUserInput, UserDto } from '../../schemas/users';
+import type { InviteUserInput, UserDto } from '@/lib/contracts/users';
 import { siteTimeZone } from '../settings/get-settings';
 import { issuePasswordToken } from './issue-password-token';
 import { toUserDto } from './user-dto';

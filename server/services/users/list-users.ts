@@ -1,7 +1,7 @@
 import 'server-only';
 import { User } from '@/models';
 import { getDb } from '../../db';
-import type { UserDto } from '../../schemas/users';
+import type { UserDto } from '@/lib/contracts/users';
 import { toUserDto } from './user-dto';
 
 export async function listUsers(): Promise<UserDto[]> {

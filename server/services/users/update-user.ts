@@ -3,7 +3,7 @@ import { User } from '@/models';
 import { endSessionsOf, type SessionUser } from '../../auth/session';
 import { getDb } from '../../db';
 import { AppError, notFound } from '../../errors';
-import type { UpdateUserInput, UserDto } from '../../schemas/users';
+import type { UpdateUserInput, UserDto } from '@/lib/contracts/users';
 import { toUserDto } from './user-dto';
 
 export interface UpdateUserOptions {

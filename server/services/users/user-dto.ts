@@ -1,6 +1,6 @@
 import 'server-only';
 import type { User } from '@/models';
-import type { UserDto } from '../../schemas/users';
+import type { UserDto } from '@/lib/contracts/users';
 
 export function toUserDto(user: User): UserDto {
   return {

@@ -5,7 +5,7 @@ import { ReadyForm } from '../../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { WEIGHT_UNITS } from '@/lib/weighing/units';
-import type { SettingsDto } from '@/server/schemas/settings';
+import type { SettingsDto } from '@/lib/contracts/settings';
 import { apiFetch } from '../../../_components/api-client';
 import { FormField, FormMessage } from '../../../_components/form-field';
 import { SelectField } from '../../../_components/select-field';

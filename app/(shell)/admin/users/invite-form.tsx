@@ -5,7 +5,7 @@ import { ReadyForm } from '../../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { ROLE_LABELS, ROLES, type Role } from '@/lib/roles';
-import type { UserDto } from '@/server/schemas/users';
+import type { UserDto } from '@/lib/contracts/users';
 import { apiFetch } from '../../../_components/api-client';
 import { FormField, FormMessage } from '../../../_components/form-field';
 

@@ -3,7 +3,7 @@
 import type { ColDef, ICellRendererParams } from 'ag-grid-community';
 import { useState } from 'react';
 import { ROLE_LABELS, ROLES, type Role } from '@/lib/roles';
-import type { UserDto } from '@/server/schemas/users';
+import type { UserDto } from '@/lib/contracts/users';
 import { apiFetch } from '../../../_components/api-client';
 import { ConfirmBar, type PendingConfirm } from '../../../_components/confirm-bar';
 import { DataGrid } from '../../../_components/data-grid';

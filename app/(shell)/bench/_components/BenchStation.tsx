@@ -1,8 +1,8 @@
 'use client';
 
 import { useState } from 'react';
-import type { ContainerDto } from '@/server/schemas/containers';
-import type { ScaleDto } from '@/server/schemas/scales';
+import type { ContainerDto } from '@/lib/contracts/containers';
+import type { ScaleDto } from '@/lib/contracts/scales';
 import { ConfirmBar, type PendingConfirm } from '@/app/_components/confirm-bar';
 import type { BenchWork } from '../_lib/bench-work';
 import { CaptureResult } from './CaptureResult';

@@ -1,4 +1,4 @@
-import type { CountEventDto } from '@/server/schemas/counts';
+import type { CountEventDto } from '@/lib/contracts/counts';
 import { formatGrams } from '../../../_components/format';
 import { describeBinOutcome } from '../_lib/bin-outcome';
 import type { CaptureAnswer } from './use-bench';

@@ -4,7 +4,7 @@ import { useEffect, useRef, useState } from 'react';
 import { createSimulatorSource } from '@/lib/scale/simulator-source';
 import type { SimulatedScale } from '@/lib/scale/simulator';
 import type { ReadingSource } from '@/lib/scale/reading';
-import type { ScaleDto } from '@/server/schemas/scales';
+import type { ScaleDto } from '@/lib/contracts/scales';
 import { applyPanAction, buildSimulatedScale, containerOnPan, DEMO_PIECE_WEIGHT_G, piecesOnPan, type PanAction, type PracticePan } from '../_lib/practice-pan';
 import { browserStore } from './browser-store';
 import { WarningRecipes } from './WarningRecipes';

@@ -5,7 +5,7 @@ import { findLineProfile } from '@/lib/scale/line-format';
 import { rawToReading, type AdcCalibration } from '@/lib/scale/raw-adc';
 import { createReadingHub, type Reading, type ReadingSource } from '@/lib/scale/reading';
 import { createSerialSource, type SerialPortLike, type SerialSource } from '@/lib/scale/serial-source';
-import type { ScaleDto } from '@/server/schemas/scales';
+import type { ScaleDto } from '@/lib/contracts/scales';
 import { calibrate, effectiveDivisionOf, parseCalibration, zeroFrom, type AdcSetup } from '../_lib/adc-calibration';
 import { browserStore } from './browser-store';
 

@@ -1,6 +1,6 @@
 'use client';
 
-import type { ScaleDto } from '@/server/schemas/scales';
+import type { ScaleDto } from '@/lib/contracts/scales';
 import { ScaleFacts, ScaleStatus } from './ScaleStatus';
 
 const KIND_TEXT: Record<ScaleDto['connection']['kind'], string> = {

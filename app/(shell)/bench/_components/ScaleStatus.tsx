@@ -1,4 +1,4 @@
-import type { ScaleDto } from '@/server/schemas/scales';
+import type { ScaleDto } from '@/lib/contracts/scales';
 
 const STATUS: Record<ScaleDto['status'], { text: string; cls: string }> = {
   in_service: { text: 'In service', cls: 'bg-ok-light text-ok' },

@@ -4,7 +4,7 @@ import { useEffect, useRef, useState } from 'react';
 import { findLineProfile, LINE_PROFILES } from '@/lib/scale/line-format';
 import type { ReadingSource } from '@/lib/scale/reading';
 import { createSerialSource, type SerialPortLike, type SerialSource, type SerialStats } from '@/lib/scale/serial-source';
-import type { ScaleDto } from '@/server/schemas/scales';
+import type { ScaleDto } from '@/lib/contracts/scales';
 import { BAUD_RATES, serialSettingsFrom, unescapeRequest, type SerialPortSettings } from '../_lib/serial-settings';
 import { browserStore } from './browser-store';
 

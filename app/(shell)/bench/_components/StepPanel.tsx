@@ -1,6 +1,6 @@
 'use client';
 
-import type { ContainerDto } from '@/server/schemas/containers';
+import type { ContainerDto } from '@/lib/contracts/containers';
 import type { GrowPlan } from '@/lib/weighing/grow-sample';
 import { allows, type BenchAction } from '../_lib/bench-machine';
 import type { BenchWork, KeptSample } from '../_lib/bench-work';

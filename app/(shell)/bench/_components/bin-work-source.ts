@@ -1,7 +1,7 @@
 'use client';
 
 import { parseBinCode } from '@/lib/bin-code';
-import type { BinDto } from '@/server/schemas/bins';
+import type { BinDto } from '@/lib/contracts/bins';
 import { apiFetch } from '@/app/_components/api-client';
 import type { WorkItem, WorkSource } from '../_lib/work-item';
 

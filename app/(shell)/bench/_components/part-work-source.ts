@@ -1,6 +1,6 @@
 'use client';
 
-import type { PartDto } from '@/server/schemas/parts';
+import type { PartDto } from '@/lib/contracts/parts';
 import { apiFetch } from '@/app/_components/api-client';
 import type { WorkItem, WorkPurpose, WorkSource } from '../_lib/work-item';
 

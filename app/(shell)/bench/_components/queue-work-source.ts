@@ -1,6 +1,6 @@
 'use client';
 
-import type { QueueLine } from '@/server/services/orders/kitting-queue';
+import type { QueueLine } from '@/lib/contracts/orders';
 import { apiFetch } from '@/app/_components/api-client';
 import type { WorkItem, WorkSource } from '../_lib/work-item';
 

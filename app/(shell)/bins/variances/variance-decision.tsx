@@ -4,7 +4,7 @@ import { Formik } from 'formik';
 import { ReadyForm } from '../../../_components/ready-form';
 import { useRef, useState } from 'react';
 import * as yup from 'yup';
-import type { PendingVariance } from '@/server/services/bins/pending-variances';
+import type { PendingVariance } from '@/lib/contracts/bins';
 import { apiFetch } from '../../../_components/api-client';
 import { ConfirmBar, type PendingConfirm } from '../../../_components/confirm-bar';
 import { toFormikErrors } from '../../../_components/field-errors';

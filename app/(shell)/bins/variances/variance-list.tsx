@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import type { PendingVariance } from '@/server/services/bins/pending-variances';
+import type { PendingVariance } from '@/lib/contracts/bins';
 import { useSiteTime } from '../../../_components/site-time';
 import { VarianceDecision } from './variance-decision';
 

@@ -5,7 +5,7 @@ import { ReadyForm } from '../../../_components/ready-form';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import * as yup from 'yup';
-import type { KitDto } from '@/server/schemas/kits';
+import type { KitDto } from '@/lib/contracts/kits';
 import { apiFetch } from '../../../_components/api-client';
 import { FormField, FormMessage } from '../../../_components/form-field';
 import { ComponentsEditor, componentsSchema, toComponentInput, type ComponentRow } from '../_components/components-editor';

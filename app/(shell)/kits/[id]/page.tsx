@@ -3,7 +3,7 @@ import { notFound } from 'next/navigation';
 import { can } from '@/lib/roles';
 import { requirePageUser } from '@/server/auth/authorize';
 import { orNotFound } from '@/server/http/or-not-found';
-import { idParamSchema } from '@/server/schemas/common';
+import { idParamSchema } from '@/lib/contracts/common';
 import { getKit, listKits } from '@/server/services/kits/list-kits';
 import { KitEditor } from './kit-editor';
 

@@ -1,7 +1,7 @@
 'use client';
 
 import { useEffect, useId, useRef, useState } from 'react';
-import type { PartDto } from '@/server/schemas/parts';
+import type { PartDto } from '@/lib/contracts/parts';
 import { apiFetch } from '../../../_components/api-client';
 
 interface Props {

@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import type { AvailabilityLine } from '@/server/schemas/orders';
+import type { AvailabilityLine } from '@/lib/contracts/orders';
 import { apiFetch } from '../../../_components/api-client';
 
 // Before release: what each line needs against what is on hand and not held by other orders.

@@ -4,7 +4,7 @@ import { Formik } from 'formik';
 import { ReadyForm } from '../../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
-import type { OrderDto } from '@/server/schemas/orders';
+import type { OrderDto } from '@/lib/contracts/orders';
 import { apiFetch } from '../../../_components/api-client';
 import { ConfirmBar, type PendingConfirm } from '../../../_components/confirm-bar';
 

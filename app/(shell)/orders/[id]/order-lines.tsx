@@ -2,7 +2,7 @@
 
 import { useState } from 'react';
 import { VERDICT_STYLE, VERDICT_WORDS } from '@/lib/order-words';
-import type { OrderDto, OrderLineDto } from '@/server/schemas/orders';
+import type { OrderDto, OrderLineDto } from '@/lib/contracts/orders';
 import { apiFetch } from '../../../_components/api-client';
 import { ConfirmBar, type PendingConfirm } from '../../../_components/confirm-bar';
 

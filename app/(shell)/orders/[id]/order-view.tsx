@@ -2,7 +2,7 @@
 
 import Link from 'next/link';
 import { ORDER_STATUS_WORDS, STATUS_STYLE } from '@/lib/order-words';
-import type { AvailabilityLine, OrderDto } from '@/server/schemas/orders';
+import type { AvailabilityLine, OrderDto } from '@/lib/contracts/orders';
 import { useSiteTime } from '../../../_components/site-time';
 import { AvailabilityPanel } from './availability-panel';
 import { OrderActions } from './order-actions';

@@ -1,7 +1,7 @@
 'use client';
 
 import { useCallback, useEffect, useRef, useState } from 'react';
-import type { OrderDto } from '@/server/schemas/orders';
+import type { OrderDto } from '@/lib/contracts/orders';
 import { apiFetch } from '../../../_components/api-client';
 
 const POLL_MS = 3000;

@@ -1,4 +1,4 @@
-import type { AuditDto } from '@/server/schemas/audits';
+import type { AuditDto } from '@/lib/contracts/audits';
 
 // The lot's state in words and colour: open, accepted or rejected.
 export function AuditVerdict({ status, verdict }: Pick<AuditDto, 'status' | 'verdict'>) {

@@ -6,7 +6,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { AQLS } from '@/lib/sampling/iso2859';
-import type { AuditDto } from '@/server/schemas/audits';
+import type { AuditDto } from '@/lib/contracts/audits';
 import { apiFetch } from '../../../_components/api-client';
 import { toFormikErrors } from '../../../_components/field-errors';
 import { FormField, FormMessage } from '../../../_components/form-field';

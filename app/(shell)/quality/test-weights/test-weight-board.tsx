@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import type { TestWeightDto } from '@/server/schemas/calibration';
+import type { TestWeightDto } from '@/lib/contracts/calibration';
 import { formatGrams } from '../../../_components/format';
 import { TestWeightForm } from './test-weight-form';
 

@@ -5,7 +5,7 @@ import { ReadyForm } from '../../../_components/ready-form';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { NOMINAL_VALUES_G, WEIGHT_CLASSES } from '@/lib/metrology/weight-classes';
-import type { TestWeightDto } from '@/server/schemas/calibration';
+import type { TestWeightDto } from '@/lib/contracts/calibration';
 import { apiFetch } from '../../../_components/api-client';
 import { toFormikErrors } from '../../../_components/field-errors';
 import { formatGrams } from '../../../_components/format';

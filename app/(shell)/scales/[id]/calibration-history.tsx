@@ -1,5 +1,5 @@
 import type { CalibrationVerdict } from '@/lib/metrology/evaluate-calibration';
-import type { CalibrationRecordDto } from '@/server/schemas/calibration';
+import type { CalibrationRecordDto } from '@/lib/contracts/calibration';
 import { formatGrams } from '../../../_components/format';
 
 type StoredVerdict = CalibrationVerdict & { weightProblems?: string[] };

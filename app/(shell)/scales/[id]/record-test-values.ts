@@ -1,6 +1,6 @@
 import { defaultTestLoads } from '@/lib/metrology/evaluate-calibration';
 import { formatWeight } from '@/lib/weighing/display-decimals';
-import type { ScaleDto } from '@/server/schemas/scales';
+import type { ScaleDto } from '@/lib/contracts/scales';
 
 // Form state in the API's own shape, so the server's field paths ("points.1.indication") land on inputs.
 export interface TestValues {

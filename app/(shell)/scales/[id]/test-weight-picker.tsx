@@ -1,7 +1,7 @@
 'use client';
 
 import { useField } from 'formik';
-import type { TestWeightDto } from '@/server/schemas/calibration';
+import type { TestWeightDto } from '@/lib/contracts/calibration';
 import { formatGrams } from '../../../_components/format';
 
 // The weights that made up one test load; the running total is shown against the load.

@@ -7,7 +7,7 @@ import { useState } from 'react';
 import * as yup from 'yup';
 import { ACCURACY_CLASSES, classConformity, intervalCount, minimumCapacity } from '@/lib/metrology/accuracy-class';
 import { LINE_PROFILES } from '@/lib/scale/line-format';
-import type { ScaleDto } from '@/server/schemas/scales';
+import type { ScaleDto } from '@/lib/contracts/scales';
 import { apiFetch } from '../../../_components/api-client';
 import { formatGrams } from '../../../_components/format';
 import { FormField, FormMessage } from '../../../_components/form-field';

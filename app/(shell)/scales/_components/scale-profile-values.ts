@@ -1,7 +1,7 @@
 import { LINE_PROFILES } from '@/lib/scale/line-format';
 import type { AccuracyClass } from '@/lib/metrology/accuracy-class';
-import type { ScaleConnection } from '@/server/schemas/scale-connection';
-import type { ScaleDto } from '@/server/schemas/scales';
+import type { ScaleConnection } from '@/lib/contracts/scale-connection';
+import type { ScaleDto } from '@/lib/contracts/scales';
 
 // The profile form keeps every input as text in one flat object; these turn it into the API body
 // and back, and map the server's nested field names ("connection.baudRate") onto the inputs.

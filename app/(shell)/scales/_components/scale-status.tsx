@@ -1,4 +1,4 @@
-import type { ScaleDto } from '@/server/schemas/scales';
+import type { ScaleDto } from '@/lib/contracts/scales';
 
 const LOOK: Record<ScaleDto['status'], { label: string; mark: string; style: string }> = {
   in_service: { label: 'In service', mark: '●', style: 'bg-ok-light text-ok' },

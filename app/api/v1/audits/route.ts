@@ -1,5 +1,5 @@
 import { created, route } from '@/server/http/route';
-import { createAuditSchema } from '@/server/schemas/audits';
+import { createAuditSchema } from '@/lib/contracts/audits';
 import { createAudit } from '@/server/services/audits/create-audit';
 import { listAudits } from '@/server/services/audits/get-audit';
 

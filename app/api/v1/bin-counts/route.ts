@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { route } from '@/server/http/route';
-import { recordIdSchema } from '@/server/schemas/common';
+import { recordIdSchema } from '@/lib/contracts/common';
 import { listBinCounts } from '@/server/services/bins/list-bin-counts';
 
 const query = z.object({ status: z.enum(['applied', 'pending', 'approved', 'rejected']).optional(), binId: recordIdSchema.optional() });

@@ -1,6 +1,6 @@
 import { createdOnce, idempotencyKeyOf } from '@/server/http/idempotency-key';
 import { route } from '@/server/http/route';
-import { createBinSchema, listBinsSchema } from '@/server/schemas/bins';
+import { createBinSchema, listBinsSchema } from '@/lib/contracts/bins';
 import { createBin } from '@/server/services/bins/create-bin';
 import { listBins } from '@/server/services/bins/list-bins';
 

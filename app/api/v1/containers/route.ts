@@ -1,5 +1,5 @@
 import { created, route } from '@/server/http/route';
-import { createContainerSchema } from '@/server/schemas/containers';
+import { createContainerSchema } from '@/lib/contracts/containers';
 import { createContainer } from '@/server/services/containers/create-container';
 import { listContainers } from '@/server/services/containers/list-containers';
 

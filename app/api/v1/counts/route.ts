@@ -1,6 +1,6 @@
 import { createdOnce, idempotencyKeyOf } from '@/server/http/idempotency-key';
 import { route } from '@/server/http/route';
-import { listCountsSchema, recordCountSchema } from '@/server/schemas/counts';
+import { listCountsSchema, recordCountSchema } from '@/lib/contracts/counts';
 import { listCounts } from '@/server/services/counting/list-counts';
 import { recordCount } from '@/server/services/counting/record-count';
 

@@ -1,6 +1,6 @@
 import { createdOnce, idempotencyKeyOf } from '@/server/http/idempotency-key';
 import { route } from '@/server/http/route';
-import { createKitSchema } from '@/server/schemas/kits';
+import { createKitSchema } from '@/lib/contracts/kits';
 import { createKit } from '@/server/services/kits/create-kit';
 import { listKits } from '@/server/services/kits/list-kits';
 

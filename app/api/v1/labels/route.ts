@@ -1,6 +1,6 @@
 import { pdfResponse } from '@/server/http/pdf-response';
 import { route } from '@/server/http/route';
-import { labelRequestSchema } from '@/server/schemas/labels';
+import { labelRequestSchema } from '@/lib/contracts/labels';
 import { renderLabelPdf } from '@/server/services/labels/render-label-pdf';
 
 // ids are bin ids, part ids, or build order ids for kit labels.

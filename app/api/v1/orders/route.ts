@@ -1,6 +1,6 @@
 import { createdOnce, idempotencyKeyOf } from '@/server/http/idempotency-key';
 import { route } from '@/server/http/route';
-import { createOrderSchema, listOrdersSchema } from '@/server/schemas/orders';
+import { createOrderSchema, listOrdersSchema } from '@/lib/contracts/orders';
 import { createOrder } from '@/server/services/orders/create-order';
 import { listOrders } from '@/server/services/orders/list-orders';
 

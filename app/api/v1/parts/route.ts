@@ -1,5 +1,5 @@
 import { created, route } from '@/server/http/route';
-import { createPartSchema, listPartsSchema } from '@/server/schemas/parts';
+import { createPartSchema, listPartsSchema } from '@/lib/contracts/parts';
 import { createPart } from '@/server/services/parts/create-part';
 import { listParts } from '@/server/services/parts/list-parts';
 

@@ -1,6 +1,6 @@
 import { after } from 'next/server';
 import { route } from '@/server/http/route';
-import { listPrintJobsSchema, printJobRequestSchema } from '@/server/schemas/labels';
+import { listPrintJobsSchema, printJobRequestSchema } from '@/lib/contracts/labels';
 import { listPrintJobs } from '@/server/services/print-jobs/list-print-jobs';
 import { queuePrintJobs } from '@/server/services/print-jobs/queue-print-jobs';
 import { sendPrintJobs } from '@/server/services/print-jobs/send-print-jobs';

@@ -1,5 +1,5 @@
 import { created, route } from '@/server/http/route';
-import { createScaleSchema } from '@/server/schemas/scales';
+import { createScaleSchema } from '@/lib/contracts/scales';
 import { createScale } from '@/server/services/scales/create-scale';
 import { listScales } from '@/server/services/scales/list-scales';
 

@@ -3,7 +3,7 @@ import { AppError } from '@/server/errors';
 import { clientAddress } from '@/server/http/client-address';
 import { CREDENTIALS_BODY_LIMIT } from '@/server/http/read-body';
 import { route } from '@/server/http/route';
-import { signInSchema } from '@/server/schemas/session';
+import { signInSchema } from '@/lib/contracts/session';
 import { signIn } from '@/server/services/auth/sign-in';
 
 // Refused cheaply: a small body limit, read before anything else is done.

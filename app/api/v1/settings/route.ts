@@ -1,5 +1,5 @@
 import { route } from '@/server/http/route';
-import { updateSettingsSchema } from '@/server/schemas/settings';
+import { updateSettingsSchema } from '@/lib/contracts/settings';
 import { getSettings } from '@/server/services/settings/get-settings';
 import { updateSettings } from '@/server/services/settings/update-settings';
 

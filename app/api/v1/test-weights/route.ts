@@ -1,5 +1,5 @@
 import { created, route } from '@/server/http/route';
-import { createTestWeightSchema } from '@/server/schemas/calibration';
+import { createTestWeightSchema } from '@/lib/contracts/calibration';
 import { createTestWeight, listTestWeights } from '@/server/services/calibration/test-weights';
 
 export const GET = route({ access: 'catalog.read' }, async () => ({ testWeights: await listTestWeights() }));

@@ -1,5 +1,5 @@
 import { created, route } from '@/server/http/route';
-import { inviteUserSchema } from '@/server/schemas/users';
+import { inviteUserSchema } from '@/lib/contracts/users';
 import { inviteUser } from '@/server/services/users/invite-user';
 import { listUsers } from '@/server/services/users/list-users';
 

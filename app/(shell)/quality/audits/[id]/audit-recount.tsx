@@ -2,7 +2,7 @@
 
 import { useRef, useState, type KeyboardEvent } from 'react';
 import * as yup from 'yup';
-import type { AuditDto, AuditItemDto } from '@/server/schemas/audits';
+import type { AuditDto, AuditItemDto } from '@/lib/contracts/audits';
 import { apiFetch } from '../../../../_components/api-client';
 import { useSiteTime } from '../../../../_components/site-time';
 import { AuditVerdict } from '../audit-verdict';

@@ -1,4 +1,4 @@
-import type { AuditItemDto } from '@/server/schemas/audits';
+import type { AuditItemDto } from '@/lib/contracts/audits';
 
 // One recount judged: inside count ± U (whole pieces) conforms; an "exact" flag must be exactly right.
 export function ItemVerdict({ item }: { item: AuditItemDto }) {

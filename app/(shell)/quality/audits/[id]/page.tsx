@@ -2,7 +2,7 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { requirePageUser } from '@/server/auth/authorize';
 import { orNotFound } from '@/server/http/or-not-found';
-import { idParamSchema } from '@/server/schemas/common';
+import { idParamSchema } from '@/lib/contracts/common';
 import { getAudit } from '@/server/services/audits/get-audit';
 import { listScales } from '@/server/services/scales/list-scales';
 import { userNames } from '@/server/services/users/user-names';

@@ -1,5 +1,5 @@
 import { route } from '@/server/http/route';
-import { evaluateCalibrationSchema } from '@/server/schemas/calibration';
+import { evaluateCalibrationSchema } from '@/lib/contracts/calibration';
 import { evaluateInUnit } from '@/server/services/calibration/evaluate';
 
 export const POST = route({ access: 'calibration.manage', body: evaluateCalibrationSchema }, async ({ body }) => evaluateInUnit(body));

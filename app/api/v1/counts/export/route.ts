@@ -1,7 +1,7 @@
 import { siteDay } from '@/lib/time/site-clock';
 import { csvResponse } from '@/server/http/csv-response';
 import { route } from '@/server/http/route';
-import { countLogQuerySchema } from '@/server/schemas/counts';
+import { countLogQuerySchema } from '@/lib/contracts/counts';
 import { countLogTable } from '@/server/services/counting/count-log';
 import { siteTimeZone } from '@/server/services/settings/get-settings';
 

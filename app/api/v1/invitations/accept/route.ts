@@ -1,7 +1,7 @@
 import { startSession } from '@/server/auth/session';
 import { CREDENTIALS_BODY_LIMIT } from '@/server/http/read-body';
 import { route } from '@/server/http/route';
-import { acceptInvitationSchema } from '@/server/schemas/session';
+import { acceptInvitationSchema } from '@/lib/contracts/session';
 import { acceptInvitation } from '@/server/services/users/accept-invitation';
 
 export const POST = route({ access: 'public', body: acceptInvitationSchema, maxBodyBytes: CREDENTIALS_BODY_LIMIT }, async ({ body }) => {

@@ -1,6 +1,6 @@
 import { route } from '@/server/http/route';
-import { idParamSchema } from '@/server/schemas/common';
-import { updateKitSchema } from '@/server/schemas/kits';
+import { idParamSchema } from '@/lib/contracts/common';
+import { updateKitSchema } from '@/lib/contracts/kits';
 import { getKit } from '@/server/services/kits/list-kits';
 import { updateKit } from '@/server/services/kits/update-kit';
 

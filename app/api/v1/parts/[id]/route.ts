@@ -1,6 +1,6 @@
 import { route } from '@/server/http/route';
-import { idParamSchema } from '@/server/schemas/common';
-import { updatePartSchema } from '@/server/schemas/parts';
+import { idParamSchema } from '@/lib/contracts/common';
+import { updatePartSchema } from '@/lib/contracts/parts';
 import { getPart } from '@/server/services/parts/list-parts';
 import { updatePart } from '@/server/services/parts/update-part';
 

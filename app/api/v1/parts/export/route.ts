@@ -1,7 +1,7 @@
 import { siteDay } from '@/lib/time/site-clock';
 import { csvResponse } from '@/server/http/csv-response';
 import { route } from '@/server/http/route';
-import { exportPartsSchema } from '@/server/schemas/parts';
+import { exportPartsSchema } from '@/lib/contracts/parts';
 import { exportPartsTable } from '@/server/services/parts/export-parts-table';
 import { siteTimeZone } from '@/server/services/settings/get-settings';
 

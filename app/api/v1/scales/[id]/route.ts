@@ -1,6 +1,6 @@
 import { route } from '@/server/http/route';
-import { idParamSchema } from '@/server/schemas/common';
-import { updateScaleSchema } from '@/server/schemas/scales';
+import { idParamSchema } from '@/lib/contracts/common';
+import { updateScaleSchema } from '@/lib/contracts/scales';
 import { getScale } from '@/server/services/scales/list-scales';
 import { updateScale } from '@/server/services/scales/update-scale';
 

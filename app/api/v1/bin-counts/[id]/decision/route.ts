@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { route } from '@/server/http/route';
-import { idParamSchema } from '@/server/schemas/common';
+import { idParamSchema } from '@/lib/contracts/common';
 import { decideVariance } from '@/server/services/bins/decide-variance';
 
 const body = z.object({

@@ -1,7 +1,7 @@
 import { pdfResponse } from '@/server/http/pdf-response';
 import { route } from '@/server/http/route';
-import { idParamSchema } from '@/server/schemas/common';
-import { binLabelQuerySchema } from '@/server/schemas/labels';
+import { idParamSchema } from '@/lib/contracts/common';
+import { binLabelQuerySchema } from '@/lib/contracts/labels';
 import { renderLabelPdf } from '@/server/services/labels/render-label-pdf';
 
 export const GET = route({ access: 'labels.print', params: idParamSchema, query: binLabelQuerySchema }, async ({ params, query }) => {

@@ -1,5 +1,5 @@
 import { route } from '@/server/http/route';
-import { idParamSchema } from '@/server/schemas/common';
+import { idParamSchema } from '@/lib/contracts/common';
 import { getOrder } from '@/server/services/orders/get-order';
 import { orderAvailability } from '@/server/services/orders/order-availability';
 

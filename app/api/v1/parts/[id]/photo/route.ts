@@ -1,6 +1,6 @@
 import { readUploadForm } from '@/server/http/read-body';
 import { route } from '@/server/http/route';
-import { idParamSchema } from '@/server/schemas/common';
+import { idParamSchema } from '@/lib/contracts/common';
 import { readPartPhoto, savePartPhoto } from '@/server/services/parts/part-photo';
 
 // Served only to signed-in users, never from a public folder; the browser may not sniff another type.

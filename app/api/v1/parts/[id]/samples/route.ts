@@ -1,6 +1,6 @@
 import { created, route } from '@/server/http/route';
-import { idParamSchema } from '@/server/schemas/common';
-import { recordSampleSchema } from '@/server/schemas/parts';
+import { idParamSchema } from '@/lib/contracts/common';
+import { recordSampleSchema } from '@/lib/contracts/parts';
 import { listSamples } from '@/server/services/parts/list-samples';
 import { recordSample } from '@/server/services/parts/record-sample';
 

@@ -1,6 +1,6 @@
 import { created, route } from '@/server/http/route';
-import { recordCalibrationSchema } from '@/server/schemas/calibration';
-import { idParamSchema } from '@/server/schemas/common';
+import { recordCalibrationSchema } from '@/lib/contracts/calibration';
+import { idParamSchema } from '@/lib/contracts/common';
 import { listCalibrations } from '@/server/services/calibration/list-calibrations';
 import { recordCalibration } from '@/server/services/calibration/record-calibration';
 

@@ -1,6 +1,6 @@
 import { route } from '@/server/http/route';
-import { lockScaleSchema } from '@/server/schemas/calibration';
-import { idParamSchema } from '@/server/schemas/common';
+import { lockScaleSchema } from '@/lib/contracts/calibration';
+import { idParamSchema } from '@/lib/contracts/common';
 import { lockScale } from '@/server/services/calibration/lock-scale';
 
 export const POST = route({ access: 'calibration.manage', params: idParamSchema, body: lockScaleSchema }, async ({ params, body, user }) => ({

@@ -1,6 +1,6 @@
 import { readUploadForm } from '@/server/http/read-body';
 import { route } from '@/server/http/route';
-import { idParamSchema } from '@/server/schemas/common';
+import { idParamSchema } from '@/lib/contracts/common';
 import { readCertificate, saveCertificate } from '@/server/services/calibration/test-weight-certificate';
 
 export const GET = route({ access: 'catalog.read', params: idParamSchema }, async ({ params }) => {

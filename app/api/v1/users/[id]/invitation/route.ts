@@ -1,5 +1,5 @@
 import { route } from '@/server/http/route';
-import { idParamSchema } from '@/server/schemas/common';
+import { idParamSchema } from '@/lib/contracts/common';
 import { sendPasswordLink } from '@/server/services/users/send-password-link';
 
 export const POST = route({ access: 'admin.manage', params: idParamSchema }, async ({ params, user }) =>

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { route } from '@/server/http/route';
-import { recordHandCountSchema } from '@/server/schemas/audits';
-import { recordIdSchema } from '@/server/schemas/common';
+import { recordHandCountSchema } from '@/lib/contracts/audits';
+import { recordIdSchema } from '@/lib/contracts/common';
 import { recordHandCount } from '@/server/services/audits/record-hand-count';
 
 const params = z.object({ id: recordIdSchema, itemId: recordIdSchema });

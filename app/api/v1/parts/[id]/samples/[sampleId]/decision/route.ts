@@ -1,5 +1,5 @@
 import { route } from '@/server/http/route';
-import { sampleDecisionParamsSchema, sampleDecisionSchema } from '@/server/schemas/parts';
+import { sampleDecisionParamsSchema, sampleDecisionSchema } from '@/lib/contracts/parts';
 import { decideSample } from '@/server/services/parts/decide-sample';
 
 export const POST = route({ access: 'variances.approve', params: sampleDecisionParamsSchema, body: sampleDecisionSchema }, async ({ params, body, user }) =>

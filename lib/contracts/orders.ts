@@ -75,3 +75,23 @@ export interface AvailabilityLine {
   available: number;
   shortage: number;
 }
+
+export interface QueueLine {
+  orderLineId: number;
+  orderId: number;
+  orderNumber: string;
+  kitCode: string;
+  kitRevision: string;
+  dueDate: string | null;
+  partId: number;
+  partNumber: string;
+  description: string;
+  required: number;
+  counted: number;
+  remaining: number;
+  toleranceBelow: number;
+  toleranceAbove: number;
+  expandedUncertainty: number;
+  wholePieceRange: number;
+  verdict: string;
+}

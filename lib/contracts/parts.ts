@@ -102,3 +102,17 @@ export interface PartImportRow {
   action: 'create' | 'update';
   errors: Record<string, string>;
 }
+
+export interface HeldSample {
+  id: number;
+  partId: number;
+  partNumber: string;
+  /** The part's APW now (g), which accepting would replace. */
+  partApw: number | null;
+  quantity: number;
+  averagePieceWeight: number;
+  holdReason: string;
+  scaleName: string;
+  takenBy: string;
+  takenAt: string;
+}

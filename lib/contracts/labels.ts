@@ -1,13 +1,10 @@
 import { z } from 'zod';
-import { LABEL_TEMPLATES, type LabelTemplate } from '@/lib/domain/labels';
-import { STOCK_IDS } from '@/labels/stocks';
-import { KIT_LABEL_STOCKS } from '@/lib/domain/labels';
-import type { PrintJobStatus } from '@/lib/domain/labels';
+import { KIT_LABEL_STOCKS, LABEL_STOCK_IDS, LABEL_TEMPLATES, type LabelTemplate, type PrintJobStatus } from '@/lib/domain/labels';
 
 export const MAX_LABELS_PER_PDF = 1000;
 export const MAX_LABELS_PER_PRINT = 5000;
 
-export const labelStockSchema = z.enum(STOCK_IDS, { error: `Stock must be one of ${STOCK_IDS.join(', ')}` });
+export const labelStockSchema = z.enum(LABEL_STOCK_IDS, { error: `Stock must be one of ${LABEL_STOCK_IDS.join(', ')}` });
 const templateSchema = z.enum(LABEL_TEMPLATES, { error: 'Template must be bin, part or kit' });
 const idSchema = z.number({ error: 'Each id must be a record id' }).int({ error: 'Each id must be a record id' }).positive({ error: 'Each id must be a record id' });
 

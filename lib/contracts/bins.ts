@@ -42,3 +42,22 @@ export interface BinDto {
   lastCountedAt: string | null;
   version: number;
 }
+
+export interface PendingVariance {
+  id: number;
+  binCode: string;
+  partNumber: string;
+  bookQuantity: number;
+  counted: number;
+  variance: number;
+  percent: number | null;
+  countedBy: string;
+  countedById: number;
+  countedAt: string;
+}
+
+export interface LastVariance {
+  variance: number;
+  status: string;
+  countedAt: string;
+}
