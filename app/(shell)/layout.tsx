@@ -1,3 +1,4 @@
+import Link from 'next/link';
 import type { ReactNode } from 'react';
 import { navFor } from '@/lib/navigation';
 import { ROLE_LABELS } from '@/lib/roles';
@@ -41,9 +42,9 @@ export default async function ShellLayout({ children }: { children: ReactNode })
     <div className="min-h-screen lg:grid lg:grid-cols-[15rem_1fr]">
       <aside className="hidden lg:flex lg:flex-col lg:sticky lg:top-0 lg:h-screen lg:overflow-y-auto bg-ink text-paper">
         <div className="px-4 py-5">
-          <a href="/" className="text-paper" aria-label="Tallyforge home">
+          <Link href="/" className="text-paper" aria-label="Tallyforge home">
             <Wordmark />
-          </a>
+          </Link>
         </div>
         <NavLinks items={items} layout="rail" />
         {who}

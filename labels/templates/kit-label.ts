@@ -4,7 +4,7 @@ import { kitElementStrings, type KitIdentity } from '../kit-element-strings';
 import { barHeightFor, clamp, GAP, innerBox } from '../label-box';
 import { LabelFitError, type PreparedLabel, type TextRun } from '../label-content';
 import { fitModule, QUIET_ZONE } from '../module-size';
-import type { LabelStock, StockId } from '../stocks';
+import type { LabelStock } from '../stocks';
 
 export interface KitLabelData extends KitIdentity {
   description: string;

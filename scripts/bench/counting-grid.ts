@@ -16,7 +16,7 @@ import { Worker, isMainThread, parentPort } from 'node:worker_threads';
 import { estimateCount } from '../../lib/weighing/estimate';
 import {
   ALLOWANCE_Z, LIMITS, fullGrid, isResolved, judgeRegime, mergeTallies, nearLimit, ratesOf, regimeKey, regimeSeed,
-  runRegime, wilsonInterval, type Tally,
+  runRegime, type Tally,
 } from '../../tests/reference/counting-simulator/grid';
 import type { EstimateRequest, EstimateResponse, Regime } from '../../tests/reference/counting-simulator/simulator';
 

@@ -7,9 +7,9 @@ import { decodePdf, isPdf } from '../helpers/decode-pdf';
 import { createPart, stockPart, testDb } from '../helpers/db';
 import { signedIn } from '../helpers/http';
 import { releasedOrder } from '../helpers/orders';
-import { printedJob, useProjectPrinter, waitForBatch } from '../helpers/printer';
+import { printedJob, sendToProjectPrinter, waitForBatch } from '../helpers/printer';
 
-useProjectPrinter();
+sendToProjectPrinter();
 
 describe('print jobs over IPP', () => {
   it('queues, renders and sends a PDF to the printer, and logs it as sent', async () => {

@@ -12,7 +12,7 @@ export interface ReceivedJob extends PrintedJob {
 
 // For tests that call print services in the test process: send to this project's fake. Each project
 // starts its own fake, so the address comes through inject(), not an environment variable set in setup.
-export function useProjectPrinter(): void {
+export function sendToProjectPrinter(): void {
   process.env.PRINTER_URL = inject('printerUrl');
 }
 

@@ -33,7 +33,7 @@ export function PartPhoto({ part, onSaved }: { part: PartDto; onSaved: (p: PartD
     <div className="md:col-span-3 flex flex-wrap items-center gap-4" data-testid="part-photo">
       {part.hasPhoto ? (
         // A signed-in route, not a public file: next/image would fetch it without the session.
-        // eslint-disable-next-line @next/next/no-img-element
+        // eslint-disable-next-line @next/next/no-img-element -- see above
         <img src={`/api/v1/parts/${part.id}/photo?v=${part.version}`} alt={`Photo of ${part.partNumber}`} className="h-24 w-24 rounded border border-paper-line object-cover" />
       ) : (
         <div className="flex h-24 w-24 items-center justify-center rounded border border-dashed border-paper-line text-xs text-ink-faint">No photo</div>

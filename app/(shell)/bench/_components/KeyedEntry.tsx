@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useEffectEvent, useRef, useState } from 'react';
 import { createKeyedSource, type KeyedSource } from '@/lib/scale/keyed-source';
 import type { ReadingSource } from '@/lib/scale/reading';
 
@@ -10,16 +10,17 @@ export function KeyedEntry({ onSource }: { onSource(source: ReadingSource | null
   const [text, setText] = useState('');
   const [error, setError] = useState<string | null>(null);
 
+  const announce = useEffectEvent((source: ReadingSource | null) => onSource(source));
   useEffect(() => {
     const source = createKeyedSource({ unit: 'g' });
     void source.start();
     sourceRef.current = source;
-    onSource(source);
+    announce(source);
     return () => {
       void source.stop();
-      onSource(null);
+      announce(null);
     };
-  }, []); // eslint-disable-line react-hooks/exhaustive-deps
+  }, []);
 
   const enter = () => {
     try {

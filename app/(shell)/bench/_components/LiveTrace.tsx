@@ -1,7 +1,7 @@
 'use client';
 
 import 'uplot/dist/uPlot.min.css';
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useEffectEvent, useRef, useState } from 'react';
 import type uPlotType from 'uplot';
 import type { LiveFrame } from '../_lib/reading-pipeline';
 import type { TraceBuffer, TraceMarkKind } from '../_lib/trace-buffer';
@@ -22,8 +22,8 @@ interface Props {
 export function LiveTrace({ trace, frameRef, division, windowMs }: Props) {
   const box = useRef<HTMLDivElement>(null);
   const [lookBack, setLookBack] = useState(0); // seconds before now
-  const lookBackRef = useRef(0);
-  lookBackRef.current = lookBack;
+  // Read by the drawing loop, which is set up once: the look-back as it is now.
+  const lookBackNow = useEffectEvent(() => lookBack);
   const [sessionS, setSessionS] = useState(0);
 
   useEffect(() => {
@@ -43,7 +43,7 @@ export function LiveTrace({ trace, frameRef, division, windowMs }: Props) {
       ctx.rect(left, top, width, height);
       ctx.clip();
       // Stability band: ±1 d around the window mean over the last window, while settled.
-      if (f?.stable && lookBackRef.current === 0 && t0 !== undefined) {
+      if (f?.stable && lookBackNow() === 0 && t0 !== undefined) {
         const y1 = u.valToPos(f.mean + division, 'y', true);
         const y2 = u.valToPos(f.mean - division, 'y', true);
         const x1 = u.valToPos((f.t - windowMs - t0) / 1000, 'x', true);
@@ -74,11 +74,12 @@ export function LiveTrace({ trace, frameRef, division, windowMs }: Props) {
       raf = requestAnimationFrame(loop);
       const newest = trace.newestTime();
       if (!chart || newest === undefined) return;
-      if (newest === drawnNewest && lookBackRef.current === drawnLookBack) return;
+      const back = lookBackNow();
+      if (newest === drawnNewest && back === drawnLookBack) return;
       t0 ??= trace.oldestTime();
       drawnNewest = newest;
-      drawnLookBack = lookBackRef.current;
-      const end = newest - lookBackRef.current * 1000;
+      drawnLookBack = back;
+      const end = newest - back * 1000;
       const w = trace.window(end - SPAN_MS, end);
       const xs = Array.from(w.t, (t) => (t - t0!) / 1000);
       chart.setData([xs, Array.from(w.gross)]);

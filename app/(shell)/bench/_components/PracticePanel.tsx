@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useEffectEvent, useRef, useState } from 'react';
 import { createSimulatorSource } from '@/lib/scale/simulator-source';
 import type { SimulatedScale } from '@/lib/scale/simulator';
 import type { ReadingSource } from '@/lib/scale/reading';
@@ -52,19 +52,22 @@ export function PracticePanel({ scale, part, containerWeight, onSource }: Props)
   const conn = scale.connection.kind === 'simulator' ? scale.connection : { settleMs: 250, driftPerMinute: 0, rateHz: 20 };
 
   // The pan belongs to the scale; a different part on it starts an empty pan with that part.
-  useEffect(() => {
+  const placePan = useEffectEvent((scaleId: number) => {
     const urlSeed = seedFromUrl();
-    const saved = readPan(scale.id);
+    const saved = readPan(scaleId);
     const samePart = saved && (part === null || saved.partId === part.id);
     const seedOk = saved && (urlSeed === null || saved.seed === urlSeed);
     setPan(saved && samePart && seedOk ? saved : freshPan(part, urlSeed ?? (Date.now() >>> 0)));
-  }, [scale.id, part?.id]); // eslint-disable-line react-hooks/exhaustive-deps
+  });
+  const partId = part?.id;
+  useEffect(() => placePan(scale.id), [scale.id, partId]);
 
   useEffect(() => {
     if (pan) browserStore.setItem(panKey(scale.id), JSON.stringify(pan));
   }, [pan, scale.id]);
 
-  useEffect(() => {
+  // The simulator is built again when the pan's pieces change, not on every change of the pan's load.
+  const startSimulator = useEffectEvent(() => {
     if (!pan) return;
     const sim = buildSimulatedScale(
       { capacity: scale.capacity, division: scale.division, repeatability: scale.repeatability ?? 0, settleMs: conn.settleMs, driftPerMinute: conn.driftPerMinute, rateHz: conn.rateHz },
@@ -78,7 +81,8 @@ export function PracticePanel({ scale, part, containerWeight, onSource }: Props)
       void source.stop();
       onSource(null);
     };
-  }, [pan?.seed, pan?.pieceWeight, pan?.spread, pan?.partId, generation, scale.id]); // eslint-disable-line react-hooks/exhaustive-deps
+  });
+  useEffect(() => startSimulator(), [pan?.seed, pan?.pieceWeight, pan?.spread, pan?.partId, generation, scale.id]);
 
   const act = (action: PanAction) => {
     if (!simRef.current || !pan) return;

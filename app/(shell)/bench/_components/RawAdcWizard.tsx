@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useEffectEvent, useRef, useState } from 'react';
 import { findLineProfile } from '@/lib/scale/line-format';
 import { rawToReading, type AdcCalibration } from '@/lib/scale/raw-adc';
 import { createReadingHub, type Reading, type ReadingSource } from '@/lib/scale/reading';
@@ -25,19 +25,23 @@ export function RawAdcWizard({ scale, onSource }: { scale: ScaleDto; onSource(so
   const [error, setError] = useState<string | null>(null);
   const raws = useRef<number[]>([]);
   const serial = useRef<SerialSource | null>(null);
+  // The calibration as the serial subscription (set up on Connect) reads it, kept in step after each render.
   const calRef = useRef<AdcCalibration | null>(null);
-  calRef.current = calibration;
+  useEffect(() => {
+    calRef.current = calibration;
+  }, [calibration]);
   const hub = useRef(createReadingHub());
 
+  const announce = useEffectEvent((source: ReadingSource | null) => onSource(source));
   useEffect(() => {
     setCalibration(parseCalibration(browserStore.getItem(calKey(scale.id))));
     const out: ReadingSource = { kind: 'raw-adc', start: async () => undefined, stop: async () => undefined, subscribe: (l) => hub.current.subscribe(l) };
-    onSource(out);
+    announce(out);
     return () => {
       void serial.current?.stop();
-      onSource(null);
+      announce(null);
     };
-  }, [scale.id]); // eslint-disable-line react-hooks/exhaustive-deps
+  }, [scale.id]);
 
   const onRaw = (r: Reading) => {
     raws.current.push(r.gross);

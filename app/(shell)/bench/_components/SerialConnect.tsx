@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useEffectEvent, useRef, useState } from 'react';
 import { findLineProfile, LINE_PROFILES } from '@/lib/scale/line-format';
 import type { ReadingSource } from '@/lib/scale/reading';
 import { createSerialSource, type SerialPortLike, type SerialSource, type SerialStats } from '@/lib/scale/serial-source';
@@ -22,24 +22,27 @@ export function SerialConnect({ scale, onSource }: { scale: ScaleDto; onSource(s
   const [error, setError] = useState<string | null>(null);
   const sourceRef = useRef<SerialSource | null>(null);
 
-  useEffect(() => {
+  // The settings this browser last used with the scale, over the scale's own profile.
+  const loadSettings = useEffectEvent((scaleId: number) => {
     let saved: unknown = null;
     try {
-      saved = JSON.parse(browserStore.getItem(settingsKey(scale.id)) ?? 'null');
+      saved = JSON.parse(browserStore.getItem(settingsKey(scaleId)) ?? 'null');
     } catch {
       saved = null;
     }
     setSettings(serialSettingsFrom(profile, saved));
-  }, [scale.id]); // eslint-disable-line react-hooks/exhaustive-deps
+  });
+  useEffect(() => loadSettings(scale.id), [scale.id]);
 
+  const withdraw = useEffectEvent(() => onSource(null));
   useEffect(() => {
     const timer = setInterval(() => sourceRef.current && setStats(sourceRef.current.stats()), 500);
     return () => {
       clearInterval(timer);
       void sourceRef.current?.stop();
-      onSource(null);
+      withdraw();
     };
-  }, []); // eslint-disable-line react-hooks/exhaustive-deps
+  }, []);
 
   const update = <K extends keyof SerialPortSettings>(key: K, value: SerialPortSettings[K]) => {
     const next = { ...settings, [key]: value };

@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { useEffect, useEffectEvent, useMemo, useRef, useState } from 'react';
 import { isTypingTarget } from '../_lib/shortcuts';
 import { afterScan, createWedgeDetector } from '../_lib/wedge-scan';
 import type { ToleranceBand, WorkItem, WorkPurpose } from '../_lib/work-item';
@@ -47,32 +47,6 @@ export function WorkChooser({ onChoose, disabled, initialBin, blindCycleCounts }
     };
   }, [query, source]);
 
-  // A scanner works wherever focus is: a fast burst ending in Enter is a scan, read into the scan
-  // field in place of what it held. `/` puts the cursor there with its text selected.
-  const scanAs = useRef<(code: string) => void>(() => undefined);
-  useEffect(() => {
-    const wedge = createWedgeDetector();
-    const onKey = (e: KeyboardEvent) => {
-      if (e.key === '/' && !isTypingTarget(e.target)) {
-        e.preventDefault();
-        scanRef.current?.focus();
-        scanRef.current?.select();
-        return;
-      }
-      const code = wedge.key(e.key, e.timeStamp);
-      if (!code) return;
-      if (e.target === scanRef.current) {
-        e.preventDefault();
-        scanAs.current(afterScan(scanRef.current!.value, code));
-      } else if (!isTypingTarget(e.target)) {
-        e.preventDefault();
-        scanAs.current(code);
-      }
-    };
-    window.addEventListener('keydown', onKey, true);
-    return () => window.removeEventListener('keydown', onKey, true);
-  }, []);
-
   const choose = (item: WorkItem) => {
     setMessage(null);
     // A list fetched before the kind was switched is ignored: the item must be of the kind chosen now.
@@ -89,10 +63,35 @@ export function WorkChooser({ onChoose, disabled, initialBin, blindCycleCounts }
     if (hit) choose(hit);
     else setMessage(`Nothing to count matches ${text.trim().toUpperCase()} here.`);
   };
-  scanAs.current = (code) => {
+  const scanAs = useEffectEvent((code: string) => {
     setQuery(code);
     void scan(code);
-  };
+  });
+
+  // A scanner works wherever focus is: a fast burst ending in Enter is a scan, read into the scan
+  // field in place of what it held. `/` puts the cursor there with its text selected.
+  useEffect(() => {
+    const wedge = createWedgeDetector();
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key === '/' && !isTypingTarget(e.target)) {
+        e.preventDefault();
+        scanRef.current?.focus();
+        scanRef.current?.select();
+        return;
+      }
+      const code = wedge.key(e.key, e.timeStamp);
+      if (!code) return;
+      if (e.target === scanRef.current) {
+        e.preventDefault();
+        scanAs(afterScan(scanRef.current!.value, code));
+      } else if (!isTypingTarget(e.target)) {
+        e.preventDefault();
+        scanAs(code);
+      }
+    };
+    window.addEventListener('keydown', onKey, true);
+    return () => window.removeEventListener('keydown', onKey, true);
+  }, []);
 
   return (
     <section aria-labelledby="work-title" className="card space-y-4">

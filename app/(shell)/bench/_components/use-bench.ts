@@ -4,7 +4,7 @@
  * offline, records pieces-by-piece samples, marks the trace and reads the keys. BenchStation only
  * lays out what this returns.
  */
-import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useEffectEvent, useMemo, useState } from 'react';
 import type { ReadingSource } from '@/lib/scale/reading';
 import { acceptGrowStep } from '@/lib/weighing/grow-sample';
 import type { SpreadBelief } from '@/lib/weighing/spread-belief';
@@ -116,9 +116,10 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   );
   const scale = scalesNow.find((s) => s.id === scaleId) ?? null;
   // The feed restarts only when what it computes with changes, not when the status does.
+  const [division, repeatability, capacity, minLoad] = [scale?.division, scale?.repeatability ?? 0, scale?.capacity, scale?.minLoad];
   const pipelineScale = useMemo(
-    () => (scale ? { division: scale.division, repeatability: scale.repeatability ?? 0, capacity: scale.capacity, minLoad: scale.minLoad } : null),
-    [scale?.division, scale?.repeatability, scale?.capacity, scale?.minLoad], // eslint-disable-line react-hooks/exhaustive-deps
+    () => (division !== undefined && capacity !== undefined && minLoad !== undefined ? { division, repeatability, capacity, minLoad } : null),
+    [division, repeatability, capacity, minLoad],
   );
   const spread = part?.spreadBelief ?? null;
   // Until the part has learned its spread, the site's cautious value stands in for it.
@@ -135,8 +136,8 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   const feedOptions = useMemo(() => ({ windowMs: stabilityWindowMs, defaultPieceSpread }), [stabilityWindowMs, defaultPieceSpread]);
   const { frame, frameRef, trace } = useReadingFeed(source, pipelineScale, pipelineWork, feedOptions);
 
-  // Resume a count in progress after a reload.
-  useEffect(() => {
+  // Resume a count in progress after a reload (once, after hydration: the server render has no storage).
+  const restore = useEffectEvent(() => {
     const saved = parseSavedWork(browserStore.getItem(WORK_KEY));
     const savedScale = Number(browserStore.getItem(SCALE_KEY));
     if (saved && scales.some((s) => s.id === saved.scaleId)) {
@@ -150,7 +151,8 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     setQueue(queueStore?.list() ?? []);
     setKept(parseKeptSample(browserStore.getItem(KEPT_KEY)));
     setRestored(true);
-  }, []); // eslint-disable-line react-hooks/exhaustive-deps
+  });
+  useEffect(() => restore(), []);
 
   useEffect(() => {
     if (!restored) return;
@@ -342,22 +344,20 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
       setNotice(null);
     },
   };
-  const actionsRef = useRef(actions);
-  actionsRef.current = actions;
-
   // Keys act on whatever the machine allows now (the same list the step panel shows).
-  const workRef = useRef<BenchWork | null>(null);
-  workRef.current = work;
+  const onKey = useEffectEvent((e: KeyboardEvent) => {
+    const action = shortcutFor(e);
+    if (!action || action === 'scan' || !allows(work, action)) return;
+    e.preventDefault();
+    void actions[action]();
+  });
   useEffect(() => {
-    const onKey = (e: KeyboardEvent) => {
-      const action = shortcutFor(e);
-      if (!action || action === 'scan' || !allows(workRef.current, action)) return;
-      e.preventDefault();
-      void actionsRef.current[action]();
-    };
-    window.addEventListener('keydown', onKey);
-    return () => window.removeEventListener('keydown', onKey);
+    const listener = (e: KeyboardEvent) => onKey(e);
+    window.addEventListener('keydown', listener);
+    return () => window.removeEventListener('keydown', listener);
   }, []);
+  // A press made while the reading moved runs once it settles.
+  const runWaiting = useEffectEvent((action: SteadyAction) => void actions[action]());
 
   const codes: WarningCode[] = [];
   for (const w of frame?.estimate?.warnings ?? []) codes.push(w.code);
@@ -386,7 +386,7 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   useEffect(() => {
     if (!waiting || !frame?.stable) return;
     setWaiting(null);
-    void actionsRef.current[waiting]();
+    runWaiting(waiting);
   }, [waiting, frame?.stable]);
   // A waiting press belongs to the step it was made in.
   useEffect(() => setWaiting(null), [work?.step, work?.partId]);

@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useId, useRef, useState } from 'react';
+import { useEffect, useEffectEvent, useId, useState } from 'react';
 import type { PartDto } from '@/lib/contracts/parts';
 import { apiFetch } from '../../../_components/api-client';
 
@@ -17,8 +17,7 @@ export function PartNumberInput({ id, value, onChange, invalid, describedBy }: P
   const listId = useId();
   const [suggestions, setSuggestions] = useState<PartDto[]>([]);
   // The parent passes a new onChange on every render; the search must run on typing only.
-  const changed = useRef(onChange);
-  changed.current = onChange;
+  const picked = useEffectEvent((partNumber: string, part: PartDto) => onChange(partNumber, part));
   useEffect(() => {
     const q = value.trim();
     if (q.length < 2) return;
@@ -27,7 +26,7 @@ export function PartNumberInput({ id, value, onChange, invalid, describedBy }: P
       if (!res.ok) return;
       setSuggestions(res.data.parts);
       const exact = res.data.parts.find((p) => p.partNumber === q.toUpperCase());
-      if (exact) changed.current(value, exact);
+      if (exact) picked(value, exact);
     }, 250);
     return () => clearTimeout(timer);
   }, [value]);
