@@ -19,7 +19,15 @@ const folderRegex = (folders) => `^(@/|(\\.\\./)+)(${folders.join('|')})(/|$)`;
 const boundary = ([files, folders, why]) => ({
   files: [files],
   rules: {
-    'no-restricted-imports': ['error', { patterns: [{ regex: folderRegex(folders), message: why }, ...(files === 'lib/**' ? [{ group: ['sequelize', 'server-only', 'next', 'next/*'], message: why }] : [])] }],
+    'no-restricted-imports': [
+      'error',
+      {
+        patterns: [
+          { regex: folderRegex(folders), message: why },
+          ...(files === 'lib/**' ? [{ group: ['sequelize', 'server-only', 'next', 'next/*'], message: why }] : []),
+        ],
+      },
+    ],
   },
 });
 
@@ -45,6 +53,11 @@ export default tseslint.config(
     // A migration keeps what it shipped with: it imports sequelize and nothing of the app.
     files: ['models/migrations/**'],
     ignores: ['models/migrations/index.ts'],
-    rules: { 'no-restricted-imports': ['error', { patterns: [{ regex: '^(@/|\\.\\./)', message: 'a migration writes out its own values; it never imports the vocabulary or the models' }] }] },
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ regex: '^(@/|\\.\\./)', message: 'a migration writes out its own values; it never imports the vocabulary or the models' }] },
+      ],
+    },
   },
 );

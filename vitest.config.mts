@@ -18,7 +18,14 @@ export default defineConfig({
         test: {
           name: 'unit',
           sequence: { groupOrder: 0 },
-          include: ['lib/**/*.test.ts', 'labels/**/*.test.ts', 'server/**/*.test.ts', 'tests/unit/**/*.test.ts', 'tests/reference/**/*.test.ts', 'app/**/_lib/**/*.test.ts'],
+          include: [
+            'lib/**/*.test.ts',
+            'labels/**/*.test.ts',
+            'server/**/*.test.ts',
+            'tests/unit/**/*.test.ts',
+            'tests/reference/**/*.test.ts',
+            'app/**/_lib/**/*.test.ts',
+          ],
           environment: 'node',
         },
       },

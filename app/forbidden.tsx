@@ -6,7 +6,9 @@ export default function Forbidden() {
   return (
     <main className="min-h-screen grid place-items-center p-6">
       <div>
-        <div className="flex justify-center mb-4"><Wordmark /></div>
+        <div className="flex justify-center mb-4">
+          <Wordmark />
+        </div>
         <ForbiddenNotice />
       </div>
     </main>

@@ -69,7 +69,15 @@ export async function createLabelsPdf({ stock, title }: { stock: LabelStock; tit
   };
 }
 
-export async function assembleLabelsPdf({ stock, labels, title }: { stock: LabelStock; labels: readonly PreparedLabel[]; title: string }): Promise<LabelPdfFile> {
+export async function assembleLabelsPdf({
+  stock,
+  labels,
+  title,
+}: {
+  stock: LabelStock;
+  labels: readonly PreparedLabel[];
+  title: string;
+}): Promise<LabelPdfFile> {
   const writer = await createLabelsPdf({ stock, title });
   for (const label of labels) await writer.add(label);
   return writer.finish();

@@ -28,7 +28,8 @@ export function encodeSymbol({ symbology, data }: SymbolRequest): EncodedSymbol 
   const [raw] = bwipjs.raw(symbology, data, OPTIONS[symbology]) as Raw;
   if (raw.sbs) {
     // Bar heights (bhs) come in bwip-js's default height; all equal and all from the baseline is a plain linear symbol.
-    if (raw.bhs?.some((h) => h !== raw.bhs![0]) || raw.bbs?.some((b) => b !== 0)) throw new Error(`${symbology} has bars of uneven height; not a plain linear symbol`);
+    if (raw.bhs?.some((h) => h !== raw.bhs![0]) || raw.bbs?.some((b) => b !== 0))
+      throw new Error(`${symbology} has bars of uneven height; not a plain linear symbol`);
     return { symbology, data, ...linearOps(raw.sbs) };
   }
   if (raw.pixs && raw.pixx && raw.pixy) return { symbology, data, ...matrixOps(raw.pixs, raw.pixx, raw.pixy) };
@@ -63,7 +64,10 @@ function matrixOps(pixs: number[], width: number, height: number): { modulesWide
 
 // The operators that draw the symbol with its top-left corner at (left, top) in label points (y up),
 // modules `moduleSize` points wide and, for linear symbols, bars `barHeight` points tall.
-export function placeSymbol(symbol: EncodedSymbol, { left, top, moduleSize, barHeight }: { left: number; top: number; moduleSize: number; barHeight?: number }): string {
+export function placeSymbol(
+  symbol: EncodedSymbol,
+  { left, top, moduleSize, barHeight }: { left: number; top: number; moduleSize: number; barHeight?: number },
+): string {
   const sy = symbol.modulesHigh === 1 ? (barHeight ?? 0) : moduleSize;
   if (!(sy > 0)) throw new Error('a linear symbol needs a bar height');
   return `q ${num(moduleSize)} 0 0 ${num(-sy)} ${num(left)} ${num(top)} cm\n${symbol.ops}Q\n`;

@@ -2,7 +2,11 @@
 // keeps its size and ends in an ellipsis. `measure` gives the width of a text at a size, in points.
 export type Measure = (text: string, size: number) => number;
 
-export function fitText(text: string, { size, maxWidth, overflow }: { size: number; maxWidth: number; overflow: 'shrink' | 'ellipsis' }, measure: Measure): { text: string; size: number } {
+export function fitText(
+  text: string,
+  { size, maxWidth, overflow }: { size: number; maxWidth: number; overflow: 'shrink' | 'ellipsis' },
+  measure: Measure,
+): { text: string; size: number } {
   const width = measure(text, size);
   if (width <= maxWidth) return { text, size };
   if (overflow === 'shrink') return { text, size: (size * maxWidth) / width };

@@ -25,7 +25,5 @@ export function bracketed(elements: readonly ElementString[]): string {
 // What a scanner transmits after the symbology identifier: FNC1 ends every element whose length is not
 // predefined, unless it is the last, and is sent as GS (ASCII 29).
 export function transmitted(elements: readonly ElementString[]): string {
-  return elements
-    .map((e, i) => e.ai + e.value + (i < elements.length - 1 && !PREDEFINED_LENGTH.test(e.ai) ? GROUP_SEPARATOR : ''))
-    .join('');
+  return elements.map((e, i) => e.ai + e.value + (i < elements.length - 1 && !PREDEFINED_LENGTH.test(e.ai) ? GROUP_SEPARATOR : '')).join('');
 }

@@ -9,7 +9,10 @@ describe('kit element strings', () => {
   it('carries kit and revision, order number and count in the company-internal AIs (91), (92), (93)', () => {
     expect(kitElementStrings(kit)).toEqual([
       [{ ai: '91', value: 'ACT-20-ENDCAP:B' }],
-      [{ ai: '92', value: 'BO-2026-00042' }, { ai: '93', value: '50' }],
+      [
+        { ai: '92', value: 'BO-2026-00042' },
+        { ai: '93', value: '50' },
+      ],
     ]);
   });
 

@@ -22,19 +22,30 @@ export class KitLabelDataError extends Error {}
 // With a GTIN for the kit, the standard AIs: (01) GTIN-14 with (30) count (GS1 pairing rules: (30)
 // requires (01) or (02)), and (10) batch/lot = the build order number.
 export function kitElementStrings(kit: KitIdentity): ElementString[][] {
-  if (!Number.isInteger(kit.quantity) || kit.quantity < 1 || kit.quantity > 99_999_999) throw new KitLabelDataError('the kit count must be 1 to 99 999 999 (AI 30 is N..8)');
-  for (const [name, value] of [['kit code', kit.kitCode], ['revision', kit.revision], ['order number', kit.orderNumber]] as const) {
+  if (!Number.isInteger(kit.quantity) || kit.quantity < 1 || kit.quantity > 99_999_999)
+    throw new KitLabelDataError('the kit count must be 1 to 99 999 999 (AI 30 is N..8)');
+  for (const [name, value] of [
+    ['kit code', kit.kitCode],
+    ['revision', kit.revision],
+    ['order number', kit.orderNumber],
+  ] as const) {
     if (!value || !isCset82(value) || /[():]/.test(value)) throw new KitLabelDataError(`the ${name} has characters a GS1 label cannot carry`);
   }
   if (kit.gtin) {
     if (kit.orderNumber.length > 20) throw new KitLabelDataError('AI 10 holds at most 20 characters');
     return [
-      [{ ai: '01', value: toGtin14(kit.gtin) }, { ai: '30', value: String(kit.quantity) }],
+      [
+        { ai: '01', value: toGtin14(kit.gtin) },
+        { ai: '30', value: String(kit.quantity) },
+      ],
       [{ ai: '10', value: kit.orderNumber }],
     ];
   }
   return [
     [{ ai: '91', value: `${kit.kitCode}:${kit.revision}` }],
-    [{ ai: '92', value: kit.orderNumber }, { ai: '93', value: String(kit.quantity) }],
+    [
+      { ai: '92', value: kit.orderNumber },
+      { ai: '93', value: String(kit.quantity) },
+    ],
   ];
 }

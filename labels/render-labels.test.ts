@@ -10,7 +10,12 @@ import { renderLabels } from './render-labels';
 import { STOCK_IDS, LABEL_STOCKS } from './stocks';
 
 const bins = [
-  { binCode: 'K-04-2-07', partNumber: 'SCR-M3X8-A2', description: 'Pan head screw M3 × 8, A2 stainless, cross recess', partUrl: 'http://127.0.0.1:3000/parts/12345' },
+  {
+    binCode: 'K-04-2-07',
+    partNumber: 'SCR-M3X8-A2',
+    description: 'Pan head screw M3 × 8, A2 stainless, cross recess',
+    partUrl: 'http://127.0.0.1:3000/parts/12345',
+  },
   { binCode: 'AB-99-9-99', partNumber: 'WSH-M3', description: 'Washer', partUrl: 'https://tallyforge.example.com/parts/7' },
 ];
 const kit = { kitCode: 'ACT-20-ENDCAP', revision: 'B', orderNumber: 'BO-2026-00042', quantity: 50, description: 'End-cap kit for the 20 mm actuator' };
@@ -37,7 +42,12 @@ describe('rendered label PDFs, read back by an independent decoder (zxing-wasm a
   }
 
   it('part labels: the Code 128 is the part number and the QR the part page', async () => {
-    const { pdf } = await renderLabels({ template: 'part', stock: '2x1in', title: 'Part labels', items: [{ partNumber: 'SCR-M3X8-A2', description: 'Pan head screw', partUrl: 'http://127.0.0.1:3000/parts/12' }] });
+    const { pdf } = await renderLabels({
+      template: 'part',
+      stock: '2x1in',
+      title: 'Part labels',
+      items: [{ partNumber: 'SCR-M3X8-A2', description: 'Pan head screw', partUrl: 'http://127.0.0.1:3000/parts/12' }],
+    });
     const [page] = await decodePdf(pdf);
     expect(byFormat(page).map((d) => [d.format, d.text])).toEqual([
       ['Code128', 'SCR-M3X8-A2'],
@@ -54,7 +64,12 @@ describe('rendered label PDFs, read back by an independent decoder (zxing-wasm a
         { format: 'Code128', text: '(91)ACT-20-ENDCAP:B', raw: '91ACT-20-ENDCAP:B', symbologyIdentifier: ']C1' },
         { format: 'Code128', text: '(92)BO-2026-00042(93)50', raw: `92BO-2026-00042${GROUP_SEPARATOR}9350`, symbologyIdentifier: ']C1' },
         // ]d2: Data Matrix with FNC1 first, i.e. GS1 DataMatrix (ISO/IEC 16022 symbology identifiers).
-        { format: 'DataMatrix', text: '(91)ACT-20-ENDCAP:B(92)BO-2026-00042(93)50', raw: `91ACT-20-ENDCAP:B${GROUP_SEPARATOR}92BO-2026-00042${GROUP_SEPARATOR}9350`, symbologyIdentifier: ']d2' },
+        {
+          format: 'DataMatrix',
+          text: '(91)ACT-20-ENDCAP:B(92)BO-2026-00042(93)50',
+          raw: `91ACT-20-ENDCAP:B${GROUP_SEPARATOR}92BO-2026-00042${GROUP_SEPARATOR}9350`,
+          symbologyIdentifier: ']d2',
+        },
       ]);
     });
   }
@@ -68,12 +83,18 @@ describe('rendered label PDFs, read back by an independent decoder (zxing-wasm a
   it('sizes pages to the stock, embeds subset TrueType fonts and draws no images', async () => {
     const { pdf } = await renderLabels({ template: 'bin', stock: '4x2in', title: 'Bin labels', items: bins });
     const doc = await PDFDocument.load(pdf);
-    expect(doc.getPages().map((p) => [p.getWidth(), p.getHeight()])).toEqual([[288, 144], [288, 144]]);
+    expect(doc.getPages().map((p) => [p.getWidth(), p.getHeight()])).toEqual([
+      [288, 144],
+      [288, 144],
+    ]);
     const dicts = doc.context.enumerateIndirectObjects().flatMap(([, obj]) => (obj instanceof PDFDict ? [obj] : obj instanceof PDFRawStream ? [obj.dict] : []));
     const names = (key: string) => dicts.map((d) => d.get(PDFName.of(key))?.toString()).filter(Boolean);
     expect(new Set(names('BaseFont').map((n) => n!.replace(/-\d+$/, '')))).toEqual(new Set(['/ClearSans', '/JetBrainsMono-Regular', '/JetBrainsMono-Bold']));
     // TrueType outlines sit in FontFile2 streams (ISO 32000-1 §9.9); subset, each is a small part of its TTF.
-    const fontFiles = dicts.map((d) => d.get(PDFName.of('FontFile2'))).filter(Boolean).map((ref) => doc.context.lookup(ref as PDFRef) as PDFRawStream);
+    const fontFiles = dicts
+      .map((d) => d.get(PDFName.of('FontFile2')))
+      .filter(Boolean)
+      .map((ref) => doc.context.lookup(ref as PDFRef) as PDFRawStream);
     expect(fontFiles).toHaveLength(3);
     for (const file of fontFiles) expect(file.getContentsSize()).toBeLessThan(statSync('fonts/JetBrainsMono-Regular.ttf').size / 4);
     expect(names('Subtype')).not.toContain('/Image');
@@ -96,6 +117,13 @@ describe('rendered label PDFs, read back by an independent decoder (zxing-wasm a
   });
 
   it('refuses a bin code too long for a Code 128 on the stock instead of shrinking it below 0.25 mm', async () => {
-    await expect(renderLabels({ template: 'part', stock: '2x1in', title: 'x', items: [{ partNumber: 'A-VERY-LONG-PART-NUMBER-THAT-WILL-NOT-FIT', description: '', partUrl: 'http://x/parts/1' }] })).rejects.toThrow(/too long/);
+    await expect(
+      renderLabels({
+        template: 'part',
+        stock: '2x1in',
+        title: 'x',
+        items: [{ partNumber: 'A-VERY-LONG-PART-NUMBER-THAT-WILL-NOT-FIT', description: '', partUrl: 'http://x/parts/1' }],
+      }),
+    ).rejects.toThrow(/too long/);
   });
 });

@@ -37,7 +37,14 @@ const allModuleSizes = [MODULE_SIZES.large, MODULE_SIZES.medium, MODULE_SIZES.sm
 const STOCKS = {
   '4x6in': { id: '4x6in', name: '4 × 6 in thermal', width: inches(4), height: inches(6), inset: inches(0.12), moduleSizes: allModuleSizes },
   '4x2in': { id: '4x2in', name: '4 × 2 in thermal', width: inches(4), height: inches(2), inset: inches(0.08), moduleSizes: allModuleSizes },
-  '2x1in': { id: '2x1in', name: '2 × 1 in thermal', width: inches(2), height: inches(1), inset: inches(0.05), moduleSizes: [MODULE_SIZES.medium, MODULE_SIZES.small] },
+  '2x1in': {
+    id: '2x1in',
+    name: '2 × 1 in thermal',
+    width: inches(2),
+    height: inches(1),
+    inset: inches(0.05),
+    moduleSizes: [MODULE_SIZES.medium, MODULE_SIZES.small],
+  },
   // Letter sheet, 3 columns × 10 rows of 2⅝ × 1 in labels: 3/16 in side margins, ½ in top margin,
   // ⅛ in gutter between columns, no gap between rows (common practice for 30-up address sheets;
   // dimensions from memory — check against the sheet you buy).
@@ -48,7 +55,16 @@ const STOCKS = {
     height: inches(1),
     inset: inches(0.06),
     moduleSizes: [MODULE_SIZES.medium, MODULE_SIZES.small],
-    sheet: { pageWidth: inches(8.5), pageHeight: inches(11), columns: 3, rows: 10, left: inches(0.1875), top: inches(0.5), pitchX: inches(2.75), pitchY: inches(1) },
+    sheet: {
+      pageWidth: inches(8.5),
+      pageHeight: inches(11),
+      columns: 3,
+      rows: 10,
+      left: inches(0.1875),
+      top: inches(0.5),
+      pitchX: inches(2.75),
+      pitchY: inches(1),
+    },
   },
 } as const satisfies Record<StockId, LabelStock>;
 

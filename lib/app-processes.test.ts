@@ -10,6 +10,7 @@ describe('appProcesses', () => {
   });
 
   it('refuses what is not a whole number from 1 to 64', () => {
-    for (const bad of ['0', '-2', '1.5', '2e1', 'two', '65', '0x2']) expect(appProcesses(bad, 2)).toHaveProperty('error', expect.stringContaining('APP_PROCESSES'));
+    for (const bad of ['0', '-2', '1.5', '2e1', 'two', '65', '0x2'])
+      expect(appProcesses(bad, 2)).toHaveProperty('error', expect.stringContaining('APP_PROCESSES'));
   });
 });

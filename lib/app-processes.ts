@@ -6,6 +6,7 @@ export function appProcesses(setting: string | undefined, cores: number): { proc
   const text = setting?.trim() ?? '';
   if (text === '') return { processes: 1 };
   if (text.toLowerCase() === 'auto') return { processes: Math.max(1, cores) };
-  if (!/^[0-9]+$/.test(text) || Number(text) < 1 || Number(text) > 64) return { error: `APP_PROCESSES is a whole number from 1 to 64, or auto (one per core); it is "${setting}"` };
+  if (!/^[0-9]+$/.test(text) || Number(text) < 1 || Number(text) > 64)
+    return { error: `APP_PROCESSES is a whole number from 1 to 64, or auto (one per core); it is "${setting}"` };
   return { processes: Number(text) };
 }

@@ -9,6 +9,9 @@ export const DEMO_EMAILS: readonly string[] = ROLES.map(demoEmail);
 
 /** Addresses that only this machine can reach: serving there, the demo's known passwords harm no one. */
 export function isLoopbackHost(host: string): boolean {
-  const h = host.trim().toLowerCase().replace(/^\[|\]$/g, '');
+  const h = host
+    .trim()
+    .toLowerCase()
+    .replace(/^\[|\]$/g, '');
   return h === 'localhost' || h === '::1' || /^127(\.\d{1,3}){3}$/.test(h);
 }

@@ -19,7 +19,8 @@ export function firstValues(params: Record<string, string | string[] | undefined
 /** The address of another page of a list, keeping its filters; page 1 is left out of the address. */
 export function pageHref(path: string, filters: Record<string, string | number | undefined>, page: number): string {
   const params = new URLSearchParams();
-  for (const [key, value] of Object.entries(filters)) if (value !== undefined && value !== '' && key !== 'page' && key !== 'pageSize') params.set(key, String(value));
+  for (const [key, value] of Object.entries(filters))
+    if (value !== undefined && value !== '' && key !== 'page' && key !== 'pageSize') params.set(key, String(value));
   if (page > 1) params.set('page', String(page));
   const text = params.toString();
   return text ? `${path}?${text}` : path;

@@ -22,9 +22,7 @@ describe('role permissions', () => {
     expect(Object.keys(ROLE_PERMISSIONS).sort()).toEqual(Object.keys(designTable).sort());
     for (const [permission, roles] of Object.entries(designTable)) {
       for (const role of ROLES) {
-        expect(can(role, permission as keyof typeof ROLE_PERMISSIONS), `${role} ${permission}`).toBe(
-          roles.split(' ').includes(role),
-        );
+        expect(can(role, permission as keyof typeof ROLE_PERMISSIONS), `${role} ${permission}`).toBe(roles.split(' ').includes(role));
       }
     }
   });

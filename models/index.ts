@@ -64,7 +64,21 @@ const initialised = new WeakSet<Sequelize>();
 
 export function initModels(sequelize: Sequelize): void {
   if (initialised.has(sequelize)) return;
-  const models = [User, UserSession, RequestKey, SiteSettings, PasswordToken, SignInThrottle, MailMessage, PrintJob, Scale, Container, Part, PieceWeightSample, CountEvent];
+  const models = [
+    User,
+    UserSession,
+    RequestKey,
+    SiteSettings,
+    PasswordToken,
+    SignInThrottle,
+    MailMessage,
+    PrintJob,
+    Scale,
+    Container,
+    Part,
+    PieceWeightSample,
+    CountEvent,
+  ];
   const stockModels = [Bin, BinCount, PartStock, StockMovement, Kit, KitComponent, BuildOrder, BuildOrderLine, StockReservation];
   const qualityModels = [TestWeight, CalibrationRecord, JobRun, Audit, AuditItem];
   for (const model of [...models, ...stockModels, ...qualityModels]) {

@@ -19,10 +19,7 @@ export function createMigrator(sequelize: Sequelize): Umzug<QueryInterface> {
 // The lock lives on one connection: a transaction pins it for GET_LOCK and RELEASE_LOCK alike.
 export async function migrateUp(sequelize: Sequelize): Promise<string[]> {
   return sequelize.transaction(async (transaction) => {
-    const [[lock]] = (await sequelize.query("SELECT GET_LOCK('tallyforge_migrate', 60) AS got", { transaction })) as [
-      [{ got: number }],
-      unknown,
-    ];
+    const [[lock]] = (await sequelize.query("SELECT GET_LOCK('tallyforge_migrate', 60) AS got", { transaction })) as [[{ got: number }], unknown];
     if (Number(lock.got) !== 1) throw new Error('could not take the migration lock within 60 s');
     try {
       const done = await createMigrator(sequelize).up();

@@ -21,7 +21,15 @@ export async function pageOfRows<M extends Model & { id: number }>(model: ModelS
   const { where, include, filterJoins, order, page, pageSize } = query;
   const joins = filterJoins?.map((i) => ({ ...i, attributes: [] }));
   const [ids, total] = await Promise.all([
-    model.findAll({ attributes: ['id'], where, include: joins, order, limit: pageSize, offset: (page - 1) * pageSize, raw: true } as FindOptions) as unknown as Promise<Array<{ id: number }>>,
+    model.findAll({
+      attributes: ['id'],
+      where,
+      include: joins,
+      order,
+      limit: pageSize,
+      offset: (page - 1) * pageSize,
+      raw: true,
+    } as FindOptions) as unknown as Promise<Array<{ id: number }>>,
     model.count({ where, include: joins } as FindOptions),
   ]);
   const found = ids.length ? await model.findAll({ where: { id: ids.map((r) => r.id) } as WhereOptions, include } as FindOptions) : [];

@@ -19,7 +19,12 @@ const envSchema = z.object({
   TRUSTED_PROXIES: z
     .string()
     .default('')
-    .transform((v) => v.split(',').map((s) => s.trim()).filter(Boolean)),
+    .transform((v) =>
+      v
+        .split(',')
+        .map((s) => s.trim())
+        .filter(Boolean),
+    ),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().positive().default(2525),
   SMTP_USER: z.string().optional(),
@@ -30,7 +35,10 @@ const envSchema = z.object({
   // Label renders waiting for a worker thread before more are refused with 503.
   LABEL_QUEUE_LIMIT: z.coerce.number().int().positive().default(16),
   // The label printer (IPP; ipps for TLS). The default is the local printer fake that npm start runs.
-  PRINTER_URL: z.string().regex(/^ipps?:\/\/[^/]+\/\S*$/, 'PRINTER_URL must be an ipp:// or ipps:// printer URL').default('ipp://127.0.0.1:8631/printers/labels'),
+  PRINTER_URL: z
+    .string()
+    .regex(/^ipps?:\/\/[^/]+\/\S*$/, 'PRINTER_URL must be an ipp:// or ipps:// printer URL')
+    .default('ipp://127.0.0.1:8631/printers/labels'),
 });
 
 export type Env = z.infer<typeof envSchema>;

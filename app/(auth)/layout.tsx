@@ -7,7 +7,9 @@ export default function AuthLayout({ children }: { children: ReactNode }) {
       <section className="bg-ink text-paper p-8 lg:p-14 flex flex-col justify-between">
         <div className="flex items-center gap-3">
           <Mark size={44} />
-          <span className="text-2xl font-bold">Tally<span className="text-brass">forge</span></span>
+          <span className="text-2xl font-bold">
+            Tally<span className="text-brass">forge</span>
+          </span>
         </div>
         <div className="hidden lg:block max-w-md">
           <p className="text-3xl font-bold leading-tight">Every kit counted by weight, every count honest about its doubt.</p>

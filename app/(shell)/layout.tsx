@@ -15,7 +15,9 @@ function WhoIsHere({ name, role, timeZone }: { name: string; role: string; timeZ
     <div className="px-4 py-3 border-t border-ink-soft text-sm">
       <p className="font-medium">{name}</p>
       <p className="text-paper-line/80">{role}</p>
-      <p className="mt-1 text-paper-line/80" data-testid="site-time-zone">Times in {timeZone}</p>
+      <p className="mt-1 text-paper-line/80" data-testid="site-time-zone">
+        Times in {timeZone}
+      </p>
       <div className="mt-2 flex flex-wrap gap-x-4">
         <form action={signOutAction}>
           <button type="submit" className="min-h-11 text-brass hover:underline">

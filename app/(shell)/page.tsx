@@ -17,9 +17,13 @@ export default async function TodayPage() {
         <h1 className="page-title">Good to see you, {user.name.split(' ')[0]}</h1>
       </header>
       <section aria-labelledby="waiting-title">
-        <h2 id="waiting-title" className="text-lg font-bold mb-3">Waiting for you</h2>
+        <h2 id="waiting-title" className="text-lg font-bold mb-3">
+          Waiting for you
+        </h2>
         {waiting.length === 0 ? (
-          <p className="card text-ink-soft" data-testid="nothing-waiting">Nothing is waiting for you right now.</p>
+          <p className="card text-ink-soft" data-testid="nothing-waiting">
+            Nothing is waiting for you right now.
+          </p>
         ) : (
           <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
             {waiting.map((item) => (
@@ -35,7 +39,9 @@ export default async function TodayPage() {
         )}
       </section>
       <section aria-labelledby="can-title" className="card">
-        <h2 id="can-title" className="font-bold mb-2">What your role can do</h2>
+        <h2 id="can-title" className="font-bold mb-2">
+          What your role can do
+        </h2>
         <ul className="grid gap-x-8 gap-y-1 lg:grid-cols-2 text-sm text-ink-soft list-disc pl-5">
           {allowed.map(([permission]) => (
             <li key={permission}>{PERMISSIONS[permission as keyof typeof PERMISSIONS]}</li>

@@ -65,9 +65,7 @@ export function CardList<T>({ rows, columns, rowId, label, quickFilter, onSelect
           return (
             <li key={id} className="card p-4" data-row-id={id}>
               <div className="flex items-start justify-between gap-3">
-                <div className="min-w-0 text-lg font-bold break-words">
-                  {title ? <Cell col={title} row={row} /> : null}
-                </div>
+                <div className="min-w-0 text-lg font-bold break-words">{title ? <Cell col={title} row={row} /> : null}</div>
                 {onSelection ? (
                   <input
                     type="checkbox"

@@ -16,7 +16,11 @@ export interface PendingConfirm {
 export function ConfirmBar({ pending, onDone, tone = 'danger' }: { pending: PendingConfirm | null; onDone(): void; tone?: 'danger' | 'primary' }) {
   if (!pending) return null;
   return (
-    <div role="alertdialog" aria-label="Please confirm" className="flex flex-wrap items-center gap-3 rounded-md border-2 border-caution bg-paper-card px-4 py-3">
+    <div
+      role="alertdialog"
+      aria-label="Please confirm"
+      className="flex flex-wrap items-center gap-3 rounded-md border-2 border-caution bg-paper-card px-4 py-3"
+    >
       <p className="min-w-64 flex-1 font-medium">{pending.question}</p>
       {pending.alternative ? (
         <button
@@ -40,7 +44,9 @@ export function ConfirmBar({ pending, onDone, tone = 'danger' }: { pending: Pend
       >
         {pending.yes}
       </button>
-      <button type="button" className="btn-quiet" onClick={onDone}>Keep it as it is</button>
+      <button type="button" className="btn-quiet" onClick={onDone}>
+        Keep it as it is
+      </button>
     </div>
   );
 }

@@ -55,7 +55,9 @@ export function CsvImport<Row extends ImportRow>({ title, endpoint, header, hint
   const ready = checked?.valid && checked.text === text;
   return (
     <section className="card space-y-3" aria-labelledby={`${id}-title`}>
-      <h2 id={`${id}-title`} className="font-bold">{title}</h2>
+      <h2 id={`${id}-title`} className="font-bold">
+        {title}
+      </h2>
       <p className="text-sm text-ink-soft">
         First line: <code className="num bg-paper-deep px-1 rounded">{header}</code>. {hint}
       </p>
@@ -66,15 +68,29 @@ export function CsvImport<Row extends ImportRow>({ title, endpoint, header, hint
         </label>
         <span className="text-sm text-ink-faint">or paste it below</span>
       </div>
-      <label htmlFor={`${id}-text`} className="field-label">CSV text</label>
+      <label htmlFor={`${id}-text`} className="field-label">
+        CSV text
+      </label>
       <textarea id={`${id}-text`} className="field num min-h-32 py-2 text-sm" value={text} onChange={(e) => setText(e.target.value)} spellCheck={false} />
       <div className="flex flex-wrap gap-3 items-center">
-        <button type="button" className="btn-quiet" disabled={busy || !text.trim()} onClick={() => send(false)}>{busy ? 'Checking…' : 'Check file'}</button>
+        <button type="button" className="btn-quiet" disabled={busy || !text.trim()} onClick={() => send(false)}>
+          {busy ? 'Checking…' : 'Check file'}
+        </button>
         <button type="button" className="btn-primary" disabled={busy || !ready} onClick={() => send(true)}>
           {checked && ready ? `Import all ${checked.rows.length} rows` : 'Import'}
         </button>
         <p role="status" aria-live="polite" className="text-sm" data-testid={`${id}-status`}>
-          {message ? <span className="text-fault">{message}</span> : checked ? (checked.valid ? <span className="text-ok">All {checked.rows.length} rows are good. Nothing is written until you import.</span> : <span className="text-fault">{bad.length} of {checked.rows.length} rows need fixing; nothing will be imported until every row is good.</span>) : null}
+          {message ? (
+            <span className="text-fault">{message}</span>
+          ) : checked ? (
+            checked.valid ? (
+              <span className="text-ok">All {checked.rows.length} rows are good. Nothing is written until you import.</span>
+            ) : (
+              <span className="text-fault">
+                {bad.length} of {checked.rows.length} rows need fixing; nothing will be imported until every row is good.
+              </span>
+            )
+          ) : null}
         </p>
       </div>
       {checked ? (
@@ -83,9 +99,17 @@ export function CsvImport<Row extends ImportRow>({ title, endpoint, header, hint
             <caption className="sr-only">Rows as read from the file</caption>
             <thead>
               <tr className="text-left border-b border-paper-line">
-                <th scope="col" className="py-2 pr-3">Line</th>
-                {columns.map((c) => <th key={c.key} scope="col" className="py-2 pr-3">{c.label}</th>)}
-                <th scope="col" className="py-2">Problems</th>
+                <th scope="col" className="py-2 pr-3">
+                  Line
+                </th>
+                {columns.map((c) => (
+                  <th key={c.key} scope="col" className="py-2 pr-3">
+                    {c.label}
+                  </th>
+                ))}
+                <th scope="col" className="py-2">
+                  Problems
+                </th>
               </tr>
             </thead>
             <tbody>
@@ -95,9 +119,21 @@ export function CsvImport<Row extends ImportRow>({ title, endpoint, header, hint
                   <tr key={row.line} className={`border-b border-paper-line align-top ${problems.length ? 'bg-fault-light/60' : ''}`}>
                     <td className="py-2 pr-3 num">{row.line}</td>
                     {columns.map((c) => (
-                      <td key={c.key} className={`py-2 pr-3 ${row.errors[c.column] ? 'text-fault font-medium' : ''}`}>{String(row[c.key] ?? '')}</td>
+                      <td key={c.key} className={`py-2 pr-3 ${row.errors[c.column] ? 'text-fault font-medium' : ''}`}>
+                        {String(row[c.key] ?? '')}
+                      </td>
                     ))}
-                    <td className="py-2">{problems.length ? problems.map(([col, msg]) => <span key={col} className="block text-fault">{col}: {msg}</span>) : <span className="text-ok">good</span>}</td>
+                    <td className="py-2">
+                      {problems.length ? (
+                        problems.map(([col, msg]) => (
+                          <span key={col} className="block text-fault">
+                            {col}: {msg}
+                          </span>
+                        ))
+                      ) : (
+                        <span className="text-ok">good</span>
+                      )}
+                    </td>
                   </tr>
                 );
               })}

@@ -47,12 +47,26 @@ const onWidthChange = (notify: () => void) => {
 };
 
 function useDeskWidth(): boolean {
-  return useSyncExternalStore(onWidthChange, () => window.matchMedia(DESK).matches, () => true);
+  return useSyncExternalStore(
+    onWidthChange,
+    () => window.matchMedia(DESK).matches,
+    () => true,
+  );
 }
 
-export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, label, onSelection, emptyText = 'Nothing to show here yet.' }: DataGridProps<T>) {
+export function DataGrid<T>({
+  rows,
+  columns,
+  rowId,
+  height = 520,
+  quickFilter,
+  label,
+  onSelection,
+  emptyText = 'Nothing to show here yet.',
+}: DataGridProps<T>) {
   const desk = useDeskWidth();
-  if (!desk) return <CardList rows={rows} columns={columns} rowId={rowId} label={label} quickFilter={quickFilter} onSelection={onSelection} emptyText={emptyText} />;
+  if (!desk)
+    return <CardList rows={rows} columns={columns} rowId={rowId} label={label} quickFilter={quickFilter} onSelection={onSelection} emptyText={emptyText} />;
   return (
     <div style={{ height }} aria-label={label} role="region">
       <AgGridReact<T>
@@ -75,4 +89,3 @@ export function DataGrid<T>({ rows, columns, rowId, height = 520, quickFilter, l
     </div>
   );
 }
-

@@ -14,9 +14,12 @@ export async function ForbiddenNotice() {
     <div className="card max-w-xl" data-testid="forbidden">
       <h1 className="text-xl font-bold">{`Not available to ${who}`}</h1>
       <p className="mt-2 text-ink-soft">
-        {need ? `That page needs the right to: ${PERMISSIONS[need].toLowerCase()}.` : 'That page needs another role.'} Ask an administrator if your work needs it.
+        {need ? `That page needs the right to: ${PERMISSIONS[need].toLowerCase()}.` : 'That page needs another role.'} Ask an administrator if your work needs
+        it.
       </p>
-      <Link href="/" className="btn-quiet mt-4">Back to Today</Link>
+      <Link href="/" className="btn-quiet mt-4">
+        Back to Today
+      </Link>
     </div>
   );
 }

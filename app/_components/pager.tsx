@@ -17,9 +17,19 @@ export function Pager({ label, at, shown, hrefFor, earlier = 'Previous', later =
   if (pages <= 1 && at.page <= 1) return null;
   return (
     <nav aria-label={label} className="flex items-center gap-3 text-sm">
-      {at.page > 1 ? <Link href={hrefFor(Math.min(at.page - 1, pages))} className="btn-quiet">{earlier}</Link> : null}
-      <span className="text-ink-soft">Page {at.page} of {pages}</span>
-      {at.page < pages ? <Link href={hrefFor(at.page + 1)} className="btn-quiet">{later}</Link> : null}
+      {at.page > 1 ? (
+        <Link href={hrefFor(Math.min(at.page - 1, pages))} className="btn-quiet">
+          {earlier}
+        </Link>
+      ) : null}
+      <span className="text-ink-soft">
+        Page {at.page} of {pages}
+      </span>
+      {at.page < pages ? (
+        <Link href={hrefFor(at.page + 1)} className="btn-quiet">
+          {later}
+        </Link>
+      ) : null}
     </nav>
   );
 }

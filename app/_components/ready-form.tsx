@@ -10,7 +10,11 @@ const noSubscription = () => () => {};
 // values lost to Formik's empty state; disabled until then, the browser holds keys and clicks back.
 // The layout classes go on the fieldset, which holds every field of the form.
 export function ReadyForm({ children, className, method = 'post', ...props }: ComponentProps<typeof Form>) {
-  const ready = useSyncExternalStore(noSubscription, () => true, () => false);
+  const ready = useSyncExternalStore(
+    noSubscription,
+    () => true,
+    () => false,
+  );
   const fields = useRef<HTMLFieldSetElement>(null);
   useEffect(() => {
     // The server-rendered autofocus found the field still disabled: give it focus now.

@@ -13,14 +13,24 @@ export function SelectField({ label, hint, options, ...props }: Props) {
   const describedBy = [hint ? `${id}-hint` : null, showError ? `${id}-error` : null].filter(Boolean).join(' ') || undefined;
   return (
     <div>
-      <label htmlFor={id} className="field-label">{label}</label>
+      <label htmlFor={id} className="field-label">
+        {label}
+      </label>
       <select {...field} {...props} id={id} className="field" aria-invalid={showError ? true : undefined} aria-describedby={describedBy}>
         {options.map(([value, text]) => (
-          <option key={value} value={value}>{text}</option>
+          <option key={value} value={value}>
+            {text}
+          </option>
         ))}
       </select>
-      {hint ? <p id={`${id}-hint`} className="mt-1 text-xs text-ink-faint">{hint}</p> : null}
-      <p id={`${id}-error`} className="field-error" aria-live="polite">{showError ? meta.error : null}</p>
+      {hint ? (
+        <p id={`${id}-hint`} className="mt-1 text-xs text-ink-faint">
+          {hint}
+        </p>
+      ) : null}
+      <p id={`${id}-error`} className="field-error" aria-live="polite">
+        {showError ? meta.error : null}
+      </p>
     </div>
   );
 }

@@ -12,14 +12,22 @@ export interface CodeLabelText {
 
 // The shared shape of bin and part labels: a title and up to two lines top left, a QR code top right,
 // and a Code 128 across the bottom, so the linear symbol gets the label's full width.
-export function layoutCodeLabel(stock: LabelStock, { title, lines, linear, qr }: { title: CodeLabelText; lines: CodeLabelText[]; linear: EncodedSymbol; qr: EncodedSymbol }): PreparedLabel {
+export function layoutCodeLabel(
+  stock: LabelStock,
+  { title, lines, linear, qr }: { title: CodeLabelText; lines: CodeLabelText[]; linear: EncodedSymbol; qr: EncodedSymbol },
+): PreparedLabel {
   const box = innerBox(stock);
   const x = fitModule({ modules: linear.modulesWide, quietModules: QUIET_ZONE.code128, available: box.width, candidates: stock.moduleSizes });
   if (!x) throw new LabelFitError(`"${linear.data}" is too long for a Code 128 on ${stock.name}`);
   const barHeight = barHeightFor(box, 0.36);
   const bandHeight = box.height - barHeight - GAP;
 
-  const qx = fitModule({ modules: qr.modulesWide, quietModules: QUIET_ZONE.qrcode, available: Math.min(bandHeight, box.width * 0.45), candidates: stock.moduleSizes });
+  const qx = fitModule({
+    modules: qr.modulesWide,
+    quietModules: QUIET_ZONE.qrcode,
+    available: Math.min(bandHeight, box.width * 0.45),
+    candidates: stock.moduleSizes,
+  });
   if (!qx) throw new LabelFitError(`the QR code does not fit on ${stock.name}`);
   const qrSide = (qr.modulesWide + 2 * QUIET_ZONE.qrcode) * qx;
   const top = box.bottom + box.height;

@@ -32,12 +32,25 @@ export function prepareKitLabel(stock: LabelStock, kit: KitLabelData): PreparedL
     const rowBottom = box.bottom + (linear.length - 1 - i) * (rowHeight + GAP);
     const left = box.left + QUIET_ZONE.code128 * x;
     symbolOps += placeSymbol(symbol, { left, top: rowBottom + hriSize * 1.3 + barHeight, moduleSize: x, barHeight });
-    texts.push({ text: symbol.data, font: 'mono', size: hriSize, x: left, y: rowBottom + hriSize * 0.3, maxWidth: box.width - QUIET_ZONE.code128 * x, overflow: 'shrink' });
+    texts.push({
+      text: symbol.data,
+      font: 'mono',
+      size: hriSize,
+      x: left,
+      y: rowBottom + hriSize * 0.3,
+      maxWidth: box.width - QUIET_ZONE.code128 * x,
+      overflow: 'shrink',
+    });
   });
 
   const top = box.bottom + box.height;
   const bandHeight = box.height - linear.length * (rowHeight + GAP);
-  const mx = fitModule({ modules: matrix.modulesWide, quietModules: QUIET_ZONE.datamatrix, available: Math.min(bandHeight, box.width * 0.4), candidates: stock.moduleSizes });
+  const mx = fitModule({
+    modules: matrix.modulesWide,
+    quietModules: QUIET_ZONE.datamatrix,
+    available: Math.min(bandHeight, box.width * 0.4),
+    candidates: stock.moduleSizes,
+  });
   if (!mx) throw new LabelFitError(`the DataMatrix does not fit on ${stock.name}`);
   const matrixSide = (matrix.modulesWide + 2 * QUIET_ZONE.datamatrix) * mx;
   const right = box.left + box.width;
@@ -47,7 +60,15 @@ export function prepareKitLabel(stock: LabelStock, kit: KitLabelData): PreparedL
   const titleSize = clamp(bandHeight / 4.6, 7, 22);
   const lineSize = Math.max(titleSize * 0.62, 5);
   let baseline = top - titleSize * 0.95;
-  texts.push({ text: `${kit.kitCode} rev ${kit.revision}`, font: 'monoBold', size: titleSize, x: box.left, y: baseline, maxWidth: textWidth, overflow: 'shrink' });
+  texts.push({
+    text: `${kit.kitCode} rev ${kit.revision}`,
+    font: 'monoBold',
+    size: titleSize,
+    x: box.left,
+    y: baseline,
+    maxWidth: textWidth,
+    overflow: 'shrink',
+  });
   for (const [text, font] of [
     [kit.description, 'sans'],
     [`Build order ${kit.orderNumber}`, 'sans'],

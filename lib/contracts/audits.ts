@@ -9,7 +9,11 @@ const aqlSchema = z.coerce
   .refine((v): v is Aql => (AQLS as readonly number[]).includes(v), { error: `AQL must be one of ${AQLS.join(', ')}` });
 
 export const samplingPlanQuerySchema = z.object({
-  lotSize: z.coerce.number({ error: 'lotSize must be a number' }).int({ error: 'lotSize must be a whole number' }).min(2, { error: 'A lot has at least 2 items' }).max(100_000_000),
+  lotSize: z.coerce
+    .number({ error: 'lotSize must be a number' })
+    .int({ error: 'lotSize must be a whole number' })
+    .min(2, { error: 'A lot has at least 2 items' })
+    .max(100_000_000),
   level: levelSchema.default('II'),
   aql: aqlSchema,
 });
@@ -31,7 +35,12 @@ export const createAuditSchema = z.object({
   level: levelSchema.default('II'),
   aql: aqlSchema,
   // Recorded so the selection can be repeated; a random one is drawn when absent.
-  seed: z.number().int().min(1).max(2 ** 31 - 1).optional(),
+  seed: z
+    .number()
+    .int()
+    .min(1)
+    .max(2 ** 31 - 1)
+    .optional(),
 });
 export type CreateAuditInput = z.infer<typeof createAuditSchema>;
 

@@ -7,7 +7,10 @@ const stageSchema = z.enum(['initial', 'in_service'], { error: 'Stage must be in
 const indications = (label: string) => z.array(nonNegativeNumber(label), { error: `${label} must be a list of weights` });
 
 const pointSchema = z.object({ load: positiveNumber('Load'), indication: nonNegativeNumber('Indication') });
-const repeatabilitySchema = z.object({ load: positiveNumber('Load'), indications: indications('Indications').min(2, { error: 'At least two weighings of the same load' }).max(50) });
+const repeatabilitySchema = z.object({
+  load: positiveNumber('Load'),
+  indications: indications('Indications').min(2, { error: 'At least two weighings of the same load' }).max(50),
+});
 const eccentricitySchema = z.object({ load: positiveNumber('Load'), indications: indications('Indications').min(1).max(20) });
 
 // POST /api/v1/calibration/evaluate — a test judged without recording it.
@@ -45,7 +48,10 @@ export type RecordCalibrationInput = z.infer<typeof recordCalibrationSchema>;
 export const lockScaleSchema = z.object({ reason: requiredText('Reason').trim().min(5, { error: 'Say why the scale is locked' }).max(300) });
 
 export const createTestWeightSchema = z.object({
-  identifier: requiredText('Identifier').trim().toUpperCase().regex(/^[A-Z0-9][A-Z0-9._\-/]{0,39}$/, { error: 'Letters, digits and . _ - / only' }),
+  identifier: requiredText('Identifier')
+    .trim()
+    .toUpperCase()
+    .regex(/^[A-Z0-9][A-Z0-9._\-/]{0,39}$/, { error: 'Letters, digits and . _ - / only' }),
   nominal: positiveNumber('Nominal value'),
   unit: unitSchema.default('g'),
   weightClass: z.enum(['E2', 'F1', 'F2', 'M1', 'M2', 'M3'], { error: 'Class must be E2, F1, F2, M1, M2 or M3 (OIML R 111)' }),

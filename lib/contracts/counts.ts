@@ -19,7 +19,10 @@ export const recordCountSchema = z.object({
   gross: nonNegativeNumber('Gross weight'),
   // May sit a division or so below zero (an empty pan tared after drift); the service decides.
   tare: weightReading('Tare'),
-  sample: z.object({ quantity: wholeCount('Sample quantity'), netWeight: positiveNumber('Sample net weight') }, { error: 'sample is required: { quantity, netWeight }' }),
+  sample: z.object(
+    { quantity: wholeCount('Sample quantity'), netWeight: positiveNumber('Sample net weight') },
+    { error: 'sample is required: { quantity, netWeight }' },
+  ),
   sampleOnPan: z.boolean().default(true),
   targetQuantity: wholeCount('Target quantity').nullish(),
   // A kitting capture names the build-order line it fills (purpose kit_line).

@@ -34,7 +34,11 @@ export const estimateSchema = z
     ),
     netWeight: positiveNumber('Net weight'),
     sampleOnPan: z.boolean({ error: 'sampleOnPan must be true or false' }).optional(),
-    pieceSpread: z.number({ error: 'pieceSpread must be a number' }).min(0, { error: 'pieceSpread cannot be negative' }).lt(1, { error: 'pieceSpread must be below 1 (it is σ/μ)' }).optional(),
+    pieceSpread: z
+      .number({ error: 'pieceSpread must be a number' })
+      .min(0, { error: 'pieceSpread cannot be negative' })
+      .lt(1, { error: 'pieceSpread must be below 1 (it is σ/μ)' })
+      .optional(),
     pieceSpreadDegreesOfFreedom: wholeCount('pieceSpreadDegreesOfFreedom').optional(),
     tare: nonNegativeNumber('Tare').optional(),
     bulkScale: scaleSchema('bulkScale').optional(),

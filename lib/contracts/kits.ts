@@ -12,7 +12,12 @@ export const revisionSchema = requiredText('Revision')
   .regex(/^[A-Z0-9]{1,8}$/, { error: 'Revision is 1–8 letters or digits, e.g. A or 03' });
 
 const toleranceSchema = (label: string) =>
-  z.number({ error: `${label} must be a whole number of pieces` }).int({ error: `${label} must be a whole number of pieces` }).min(0).max(100_000).default(0);
+  z
+    .number({ error: `${label} must be a whole number of pieces` })
+    .int({ error: `${label} must be a whole number of pieces` })
+    .min(0)
+    .max(100_000)
+    .default(0);
 
 export const componentSchema = z.object({
   partId: wholeCount('Part'),
@@ -72,7 +77,12 @@ const wholeText = (label: string, min: number) =>
     .trim()
     .regex(/^\d+$/, { error: `${label} must be a whole number` })
     .transform(Number)
-    .pipe(z.number().min(min, { error: `${label} must be at least ${min}` }).max(100_000, { error: `${label} is implausibly large` }));
+    .pipe(
+      z
+        .number()
+        .min(min, { error: `${label} must be at least ${min}` })
+        .max(100_000, { error: `${label} is implausibly large` }),
+    );
 
 export const BOM_CSV_COLUMNS = ['kit_code', 'revision', 'description', 'part_number', 'quantity', 'tolerance_below', 'tolerance_above'] as const;
 
@@ -82,8 +92,16 @@ export const bomCsvRowSchema = z.object({
   description: z.string().trim().max(200, { error: 'At most 200 characters' }),
   part_number: requiredText('Part number').trim().toUpperCase().min(1, { error: 'Part number is required' }),
   quantity: wholeText('Quantity', 1),
-  tolerance_below: z.string().trim().transform((t) => t || '0').pipe(wholeText('Tolerance below', 0)),
-  tolerance_above: z.string().trim().transform((t) => t || '0').pipe(wholeText('Tolerance above', 0)),
+  tolerance_below: z
+    .string()
+    .trim()
+    .transform((t) => t || '0')
+    .pipe(wholeText('Tolerance below', 0)),
+  tolerance_above: z
+    .string()
+    .trim()
+    .transform((t) => t || '0')
+    .pipe(wholeText('Tolerance above', 0)),
 });
 
 export interface BomImportRow {

@@ -6,7 +6,10 @@ export const MAX_LABELS_PER_PRINT = 5000;
 
 export const labelStockSchema = z.enum(LABEL_STOCK_IDS, { error: `Stock must be one of ${LABEL_STOCK_IDS.join(', ')}` });
 const templateSchema = z.enum(LABEL_TEMPLATES, { error: 'Template must be bin, part or kit' });
-const idSchema = z.number({ error: 'Each id must be a record id' }).int({ error: 'Each id must be a record id' }).positive({ error: 'Each id must be a record id' });
+const idSchema = z
+  .number({ error: 'Each id must be a record id' })
+  .int({ error: 'Each id must be a record id' })
+  .positive({ error: 'Each id must be a record id' });
 
 const idsSchema = (max: number) =>
   z
@@ -22,7 +25,9 @@ function kitNeedsWideStock(value: { template: LabelTemplate; stock: string }, ct
 }
 
 // ids are bin ids, part ids, or — for kit labels — build order ids.
-export const labelRequestSchema = z.object({ template: templateSchema, stock: labelStockSchema, ids: idsSchema(MAX_LABELS_PER_PDF) }).superRefine(kitNeedsWideStock);
+export const labelRequestSchema = z
+  .object({ template: templateSchema, stock: labelStockSchema, ids: idsSchema(MAX_LABELS_PER_PDF) })
+  .superRefine(kitNeedsWideStock);
 export type LabelRequest = z.infer<typeof labelRequestSchema>;
 
 export const binLabelQuerySchema = z.object({ stock: labelStockSchema.default('4x2in') });
@@ -33,7 +38,10 @@ export const printJobRequestSchema = z
     stock: labelStockSchema,
     ids: idsSchema(MAX_LABELS_PER_PRINT),
     // A queue on the configured print server (the last part of PRINTER_URL), never an address of the caller's choosing.
-    printer: z.string({ error: 'Printer must be a queue name' }).regex(/^[A-Za-z0-9._-]{1,40}$/, { error: 'Printer is a queue name: letters, digits, . _ - (at most 40)' }).optional(),
+    printer: z
+      .string({ error: 'Printer must be a queue name' })
+      .regex(/^[A-Za-z0-9._-]{1,40}$/, { error: 'Printer is a queue name: letters, digits, . _ - (at most 40)' })
+      .optional(),
   })
   .superRefine(kitNeedsWideStock);
 export type PrintJobRequest = z.infer<typeof printJobRequestSchema>;

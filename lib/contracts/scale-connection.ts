@@ -15,16 +15,27 @@ export const scaleConnectionSchema = z.discriminatedUnion(
     }),
     z.object({
       kind: z.literal('serial'),
-      baudRate: z.union([1200, 2400, 4800, 9600, 19200, 38400, 57600, 115200].map((b) => z.literal(b)) as [z.ZodLiteral<number>, z.ZodLiteral<number>, ...z.ZodLiteral<number>[]], {
-        error: 'Baud rate must be a standard rate from 1200 to 115200',
-      }),
+      baudRate: z.union(
+        [1200, 2400, 4800, 9600, 19200, 38400, 57600, 115200].map((b) => z.literal(b)) as [
+          z.ZodLiteral<number>,
+          z.ZodLiteral<number>,
+          ...z.ZodLiteral<number>[],
+        ],
+        {
+          error: 'Baud rate must be a standard rate from 1200 to 115200',
+        },
+      ),
       dataBits: z.union([z.literal(7), z.literal(8)]).default(8),
       parity: z.enum(['none', 'even', 'odd']).default('none'),
       stopBits: z.union([z.literal(1), z.literal(2)]).default(1),
       lineFormat: z.enum(profileNames, { error: `Line format must be one of ${profileNames.join(', ')}` }),
       mode: z.enum(['continuous', 'polled']).default('continuous'),
       // Sent each poll; \r and \n escapes are allowed.
-      pollRequest: z.string().max(16).regex(/^[\x20-\x7e]*$/, { error: 'Printable ASCII only (use \\r, \\n for line ends)' }).optional(),
+      pollRequest: z
+        .string()
+        .max(16)
+        .regex(/^[\x20-\x7e]*$/, { error: 'Printable ASCII only (use \\r, \\n for line ends)' })
+        .optional(),
       pollIntervalMs: z.number().int().min(50).max(5_000).default(200),
     }),
     z.object({

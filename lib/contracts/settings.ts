@@ -6,12 +6,21 @@ import { versionSchema } from './common';
 export const updateSettingsSchema = z.object({
   siteName: z.string().trim().min(1, { error: 'Site name is required' }).max(120).optional(),
   displayUnit: z.enum(WEIGHT_UNITS as [WeightUnit, ...WeightUnit[]], { error: 'Unit must be g, kg, lb or oz' }).optional(),
-  defaultPieceSpread: z.number({ error: 'A number, e.g. 0.05 for 5 %' }).gt(0, { error: 'Must be above 0' }).max(0.5, { error: 'At most 0.5 (50 %)' }).optional(),
+  defaultPieceSpread: z
+    .number({ error: 'A number, e.g. 0.05 for 5 %' })
+    .gt(0, { error: 'Must be above 0' })
+    .max(0.5, { error: 'At most 0.5 (50 %)' })
+    .optional(),
   stabilityWindowMs: z.number().int().min(200, { error: 'At least 200 ms' }).max(10_000, { error: 'At most 10 s' }).optional(),
   varianceThresholdPct: z.number().min(0).max(100).optional(),
   varianceThresholdPcs: z.number().int().min(0).max(1_000_000).optional(),
   blindCycleCounts: z.boolean({ error: 'blindCycleCounts must be true or false' }).optional(),
-  sessionHours: z.number({ error: 'A whole number of hours' }).int({ error: 'A whole number of hours' }).min(1, { error: 'At least 1 hour' }).max(72, { error: 'At most 72 hours' }).optional(),
+  sessionHours: z
+    .number({ error: 'A whole number of hours' })
+    .int({ error: 'A whole number of hours' })
+    .min(1, { error: 'At least 1 hour' })
+    .max(72, { error: 'At most 72 hours' })
+    .optional(),
   fourEyesVariances: z.boolean({ error: 'fourEyesVariances must be true or false' }).optional(),
   // null: follow the server's own zone.
   timeZone: z

@@ -12,8 +12,18 @@ const numberError = (label: string) => ({
 const MAX_WEIGHT = 100_000_000;
 const implausible = (label: string) => ({ error: `${label} is implausibly large` });
 
-export const positiveNumber = (label: string) => z.number(numberError(label)).finite().gt(0, { error: `${label} must be above 0` }).max(MAX_WEIGHT, implausible(label));
-export const nonNegativeNumber = (label: string) => z.number(numberError(label)).finite().min(0, { error: `${label} cannot be negative` }).max(MAX_WEIGHT, implausible(label));
+export const positiveNumber = (label: string) =>
+  z
+    .number(numberError(label))
+    .finite()
+    .gt(0, { error: `${label} must be above 0` })
+    .max(MAX_WEIGHT, implausible(label));
+export const nonNegativeNumber = (label: string) =>
+  z
+    .number(numberError(label))
+    .finite()
+    .min(0, { error: `${label} cannot be negative` })
+    .max(MAX_WEIGHT, implausible(label));
 // A scale reading that may be a little negative (a drifted zero); bounded like every weight.
 export const weightReading = (label: string) => z.number(numberError(label)).finite().min(-MAX_WEIGHT, implausible(label)).max(MAX_WEIGHT, implausible(label));
 export const wholeCount = (label: string, min = 1) =>

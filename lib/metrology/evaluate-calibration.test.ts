@@ -16,7 +16,11 @@ describe('evaluating a scale test (OIML R 76-1:2006 Table 6, 3.6.1, 3.6.2)', () 
         { load: 3000, indication: 3001 }, // 6 000 e: MPE 1.5 e = 0.75 g → fail
       ],
     });
-    expect(v.points.map((p) => [p.error, p.mpe, p.pass])).toEqual([[0.25, 0.25, true], [0.5, 0.5, true], [1, 0.75, false]]);
+    expect(v.points.map((p) => [p.error, p.mpe, p.pass])).toEqual([
+      [0.25, 0.25, true],
+      [0.5, 0.5, true],
+      [1, 0.75, false],
+    ]);
     expect(v.pass).toBe(false);
   });
 

@@ -26,7 +26,7 @@ export interface CalibrationVerdict {
 }
 
 // Errors are rounded to a millionth of e so a reading exactly at the MPE passes.
-const tidy = (x: number, e: number): number => Math.round((x / e) * 1e6) / 1e6 * e;
+const tidy = (x: number, e: number): number => (Math.round((x / e) * 1e6) / 1e6) * e;
 
 export function evaluateCalibration(test: CalibrationTest): CalibrationVerdict {
   const e = test.verificationInterval;
@@ -36,19 +36,21 @@ export function evaluateCalibration(test: CalibrationTest): CalibrationVerdict {
     return { load, indication, error, mpe: mpe(load), pass: Math.abs(error) <= mpe(load) };
   });
   const rep = test.repeatability;
-  const repeatability = rep && rep.indications.length >= 2
-    ? (() => {
-        const range = tidy(Math.max(...rep.indications) - Math.min(...rep.indications), e);
-        return { range, mpe: mpe(rep.load), pass: range <= mpe(rep.load) };
-      })()
-    : null;
+  const repeatability =
+    rep && rep.indications.length >= 2
+      ? (() => {
+          const range = tidy(Math.max(...rep.indications) - Math.min(...rep.indications), e);
+          return { range, mpe: mpe(rep.load), pass: range <= mpe(rep.load) };
+        })()
+      : null;
   const ecc = test.eccentricity;
-  const eccentricity = ecc && ecc.indications.length
-    ? (() => {
-        const maxError = tidy(Math.max(...ecc.indications.map((i) => Math.abs(i - ecc.load))), e);
-        return { maxError, mpe: mpe(ecc.load), pass: maxError <= mpe(ecc.load) };
-      })()
-    : null;
+  const eccentricity =
+    ecc && ecc.indications.length
+      ? (() => {
+          const maxError = tidy(Math.max(...ecc.indications.map((i) => Math.abs(i - ecc.load))), e);
+          return { maxError, mpe: mpe(ecc.load), pass: maxError <= mpe(ecc.load) };
+        })()
+      : null;
   const pass = points.every((p) => p.pass) && (repeatability?.pass ?? true) && (eccentricity?.pass ?? true);
   return { points, repeatability, eccentricity, minimumCapacity: minimumCapacity(test.accuracyClass, e), intervals: intervalCount(test.capacity, e), pass };
 }

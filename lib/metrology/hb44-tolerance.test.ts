@@ -5,7 +5,14 @@ import { mpeInE } from './mpe';
 describe('NIST Handbook 44 Table 6 tolerances', () => {
   // Class III maintenance tolerances as reproduced: 0–500: 1 d; 501–2 000: 2 d; 2 001–4 000: 3 d; 4 001 and up: 5 d.
   it.each([
-    [0, 1], [500, 1], [501, 2], [2_000, 2], [2_001, 3], [4_000, 3], [4_001, 5], [10_000, 5],
+    [0, 1],
+    [500, 1],
+    [501, 2],
+    [2_000, 2],
+    [2_001, 3],
+    [4_000, 3],
+    [4_001, 5],
+    [10_000, 5],
   ])('class III at %s d: %s d in maintenance, half that on acceptance (T.N.3.2)', (load, tol) => {
     expect(hb44ToleranceInD('III', load)).toBe(tol);
     expect(hb44ToleranceInD('III', load, 'acceptance')).toBe(tol / 2);

@@ -4,10 +4,35 @@ import { codeLetter, samplingPlan, sampleSizeFor } from './iso2859';
 describe('ISO 2859-1 sample-size code letters (Table 1), general inspection level II', () => {
   // Every lot-size boundary of Table 1, as reproduced in REFERENCES.md.
   it.each([
-    [2, 'A'], [8, 'A'], [9, 'B'], [15, 'B'], [16, 'C'], [25, 'C'], [26, 'D'], [50, 'D'], [51, 'E'], [90, 'E'],
-    [91, 'F'], [150, 'F'], [151, 'G'], [280, 'G'], [281, 'H'], [500, 'H'], [501, 'J'], [1200, 'J'], [1201, 'K'],
-    [3200, 'K'], [3201, 'L'], [10000, 'L'], [10001, 'M'], [35000, 'M'], [35001, 'N'], [150000, 'N'], [150001, 'P'],
-    [500000, 'P'], [500001, 'Q'],
+    [2, 'A'],
+    [8, 'A'],
+    [9, 'B'],
+    [15, 'B'],
+    [16, 'C'],
+    [25, 'C'],
+    [26, 'D'],
+    [50, 'D'],
+    [51, 'E'],
+    [90, 'E'],
+    [91, 'F'],
+    [150, 'F'],
+    [151, 'G'],
+    [280, 'G'],
+    [281, 'H'],
+    [500, 'H'],
+    [501, 'J'],
+    [1200, 'J'],
+    [1201, 'K'],
+    [3200, 'K'],
+    [3201, 'L'],
+    [10000, 'L'],
+    [10001, 'M'],
+    [35000, 'M'],
+    [35001, 'N'],
+    [150000, 'N'],
+    [150001, 'P'],
+    [500000, 'P'],
+    [500001, 'Q'],
   ])('lot of %s → %s', (lot, letter) => {
     expect(codeLetter(lot, 'II')).toBe(letter);
   });
@@ -28,7 +53,7 @@ describe('ISO 2859-1 single sampling, normal inspection (Table 2-A)', () => {
     expect(samplingPlan(2000, 2.5)).toEqual({ codeLetter: 'K', sampleSize: 125, accept: 7, reject: 8, inspectAll: false });
   });
 
-  it('follows an up arrow to the 0/1 plan with that plan\'s sample size (F at AQL 1.0 → E: n 13, Ac 0)', () => {
+  it("follows an up arrow to the 0/1 plan with that plan's sample size (F at AQL 1.0 → E: n 13, Ac 0)", () => {
     expect(samplingPlan(100, 1.0)).toMatchObject({ codeLetter: 'F', sampleSize: 13, accept: 0, reject: 1 });
   });
 
@@ -42,7 +67,12 @@ describe('ISO 2859-1 single sampling, normal inspection (Table 2-A)', () => {
   });
 
   it.each([
-    [0.65, 'J', 1, 2], [0.65, 'L', 3, 4], [1.5, 'J', 3, 4], [4.0, 'H', 5, 6], [6.5, 'L', 21, 22], [0.4, 'N', 5, 6],
+    [0.65, 'J', 1, 2],
+    [0.65, 'L', 3, 4],
+    [1.5, 'J', 3, 4],
+    [4.0, 'H', 5, 6],
+    [6.5, 'L', 21, 22],
+    [0.4, 'N', 5, 6],
   ] as const)('AQL %s at letter %s → Ac %s, Re %s', (aql, letter, ac, re) => {
     const lot = { H: 500, J: 1200, L: 10000, N: 150000 }[letter];
     expect(samplingPlan(lot, aql)).toMatchObject({ codeLetter: letter, accept: ac, reject: re });

@@ -41,7 +41,17 @@ export function sampleSizeFor(letter: string): number {
 
 // Where the 0/1 plan sits in each AQL column (letter index).
 const ZERO_ONE_AT: Readonly<Record<string, number>> = {
-  '6.5': 0, '4': 1, '2.5': 2, '1.5': 3, '1': 4, '0.65': 5, '0.4': 6, '0.25': 7, '0.15': 8, '0.1': 9, '0.065': 10,
+  '6.5': 0,
+  '4': 1,
+  '2.5': 2,
+  '1.5': 3,
+  '1': 4,
+  '0.65': 5,
+  '0.4': 6,
+  '0.25': 7,
+  '0.15': 8,
+  '0.1': 9,
+  '0.065': 10,
 };
 // Down a column from the 0/1 cell: 0/1, ↑, ↓, then these acceptance numbers (Re = Ac + 1).
 const AFTER_ARROWS = [1, 2, 3, 5, 7, 10, 14, 21];

@@ -68,17 +68,13 @@ describe('framing properties', () => {
 
   it('gives the same lines however the stream is cut into chunks', () => {
     fc.assert(
-      fc.property(
-        fc.array(fc.tuple(printableLine, terminator), { minLength: 1, maxLength: 15 }),
-        fc.array(fc.nat(), { maxLength: 30 }),
-        (framed, cuts) => {
-          const stream = framed.map(([line, end]) => line + end).join('');
-          const framer = new LineFramer();
-          const lines = cutAt(stream, cuts).flatMap((chunk) => framer.push(chunk));
-          expect(lines).toEqual(framed.map(([line]) => line));
-          expect(framer.malformed).toBe(0);
-        },
-      ),
+      fc.property(fc.array(fc.tuple(printableLine, terminator), { minLength: 1, maxLength: 15 }), fc.array(fc.nat(), { maxLength: 30 }), (framed, cuts) => {
+        const stream = framed.map(([line, end]) => line + end).join('');
+        const framer = new LineFramer();
+        const lines = cutAt(stream, cuts).flatMap((chunk) => framer.push(chunk));
+        expect(lines).toEqual(framed.map(([line]) => line));
+        expect(framer.malformed).toBe(0);
+      }),
       { numRuns: 1000, seed: 4 },
     );
   });

@@ -47,9 +47,5 @@ export function formatLine(profile: LineProfile, fields: LineFields, decimals: n
   const rounded = Number(Math.abs(fields.gross).toFixed(decimals));
   const sign = fields.gross < 0 && rounded !== 0 ? '-' : profile.positiveSign;
   const weight = rounded.toFixed(decimals).padStart(profile.weightWidth, '0');
-  return profile.template
-    .replace('{flag}', flagText)
-    .replace('{sign}', sign)
-    .replace('{weight}', weight)
-    .replace('{unit}', fields.unit);
+  return profile.template.replace('{flag}', flagText).replace('{sign}', sign).replace('{weight}', weight).replace('{unit}', fields.unit);
 }

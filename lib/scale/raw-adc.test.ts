@@ -1,8 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { createRandom } from './prng';
-import {
-  adcStepVolts, captureZero, effectiveDivision, pairSignal, pairSignals, rawToGrams, rawToReading, spanCalibration,
-} from './raw-adc';
+import { adcStepVolts, captureZero, effectiveDivision, pairSignal, pairSignals, rawToGrams, rawToReading, spanCalibration } from './raw-adc';
 
 // An invented front end for the round trip: a 5 kg cell at 2 mV/V on 5 V excitation
 // (10 mV at full load), amplifier gain 128, 0.15 V amplifier offset, 10-bit converter over 5 V.
@@ -41,8 +39,7 @@ describe('raw-adc', () => {
     const random = createRandom(5);
     const noisy = (grams: number) => {
       // 5 mV rms at the converter input (about one step) dithers the rounding, as effectiveDivision assumes.
-      const pairs = Array.from({ length: 16 }, () =>
-        pairSignal(convert(grams, 1, 0.005 * random.normal()), convert(grams, -1, 0.005 * random.normal())));
+      const pairs = Array.from({ length: 16 }, () => pairSignal(convert(grams, 1, 0.005 * random.normal()), convert(grams, -1, 0.005 * random.normal())));
       return pairs.reduce((a, b) => a + b, 0) / pairs.length;
     };
     // Zero and span from 16 groups each, so their errors are a quarter of one group's.

@@ -60,7 +60,10 @@ describe('createSerialSource', () => {
   it('sends the request string at its rate when polled', async () => {
     const { port, written } = fakePort();
     const source = createSerialSource({
-      port, settings: { baudRate: 2400 }, profile, mode: { kind: 'polled', request: '?\r\n', intervalMs: 10 },
+      port,
+      settings: { baudRate: 2400 },
+      profile,
+      mode: { kind: 'polled', request: '?\r\n', intervalMs: 10 },
     });
     await source.start();
     await new Promise((resolve) => setTimeout(resolve, 55));

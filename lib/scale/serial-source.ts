@@ -80,15 +80,17 @@ export function createSerialSource(options: SerialSourceOptions): SerialSource {
 
   // One write at a time: a poll and a tare must not fight over the writer lock.
   const send = (text: string): Promise<void> => {
-    writes = writes.then(async () => {
-      if (!port.writable) throw new Error('serial port is not writable');
-      const writer = port.writable.getWriter();
-      try {
-        await writer.write(new TextEncoder().encode(text));
-      } finally {
-        writer.releaseLock();
-      }
-    }).catch((error: unknown) => options.onError?.(error));
+    writes = writes
+      .then(async () => {
+        if (!port.writable) throw new Error('serial port is not writable');
+        const writer = port.writable.getWriter();
+        try {
+          await writer.write(new TextEncoder().encode(text));
+        } finally {
+          writer.releaseLock();
+        }
+      })
+      .catch((error: unknown) => options.onError?.(error));
     return writes;
   };
 

@@ -2,7 +2,11 @@ import { describe, expect, it } from 'vitest';
 import { SimulatedScale, type SimulatedScaleOptions } from './simulator';
 
 const base: SimulatedScaleOptions = {
-  seed: 1, capacity: 6000, division: 0.01, repeatability: 0.005, settleMs: 200,
+  seed: 1,
+  capacity: 6000,
+  division: 0.01,
+  repeatability: 0.005,
+  settleMs: 200,
   part: { meanWeight: 0.6, spread: 0.02 },
 };
 
@@ -56,7 +60,10 @@ describe('SimulatedScale', () => {
     const removed = scale.removePieces(500);
     expect(removed).toEqual(weights.slice(1500));
     expect(scale.pieceCount()).toBe(1500);
-    expect(scale.trueLoad()).toBeCloseTo(weights.slice(0, 1500).reduce((a, b) => a + b, 0), 9);
+    expect(scale.trueLoad()).toBeCloseTo(
+      weights.slice(0, 1500).reduce((a, b) => a + b, 0),
+      9,
+    );
   });
 
   it('shows a container and takes it away again', () => {

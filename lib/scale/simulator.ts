@@ -44,7 +44,12 @@ export class SimulatedScale {
 
   constructor(options: SimulatedScaleOptions) {
     this.options = {
-      repeatability: 0, settleMs: 200, driftPerMinute: 0, rateHz: 10, reportStable: false, ...options,
+      repeatability: 0,
+      settleMs: 200,
+      driftPerMinute: 0,
+      rateHz: 10,
+      reportStable: false,
+      ...options,
     };
     this.nextAt = 1000 / this.options.rateHz; // tick(ms) emits in (now, now + ms]
     this.lag = new FirstOrderLag(this.options.settleMs);

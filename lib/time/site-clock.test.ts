@@ -25,7 +25,17 @@ describe('site days and moments', () => {
   });
 
   it('agrees with Luxon (an independent zone library) on day starts and local times across a year of zones', () => {
-    const zones = ['UTC', 'Europe/Berlin', 'America/Chicago', 'Asia/Kolkata', 'Australia/Adelaide', 'Pacific/Chatham', 'America/Sao_Paulo', 'Pacific/Kiritimati', 'America/St_Johns'];
+    const zones = [
+      'UTC',
+      'Europe/Berlin',
+      'America/Chicago',
+      'Asia/Kolkata',
+      'Australia/Adelaide',
+      'Pacific/Chatham',
+      'America/Sao_Paulo',
+      'Pacific/Kiritimati',
+      'America/St_Johns',
+    ];
     for (const zone of zones) {
       for (let d = 0; d < 366; d += 5) {
         const day = shiftDay('2026-01-01', d);

@@ -71,7 +71,13 @@ const WIDE = 6;
  * came out small by chance), a reading that lands on a whole number would otherwise look surer than
  * it is.
  */
-export function judgeCount(model: CountModel, countRaw: number, nodes: readonly SpreadNode[], pointSpread2: number, cautiousSpread2: number = pointSpread2): CountJudgement {
+export function judgeCount(
+  model: CountModel,
+  countRaw: number,
+  nodes: readonly SpreadNode[],
+  pointSpread2: number,
+  cautiousSpread2: number = pointSpread2,
+): CountJudgement {
   const count = Math.max(0, Math.round(countRaw));
   const atRaw = sdAt(model, countRaw, nodes);
   // N̂ moves in steps of a division: a value known only to a step has an interval of half the step
@@ -85,15 +91,22 @@ export function judgeCount(model: CountModel, countRaw: number, nodes: readonly 
     const density = nodes.reduce((sum, node, j) => sum + (node.weight * normalDensity(offset / atRaw[j])) / atRaw[j], 0);
     const wholePiecePValue = nodes.reduce((sum, node, j) => sum + node.weight * twoSidedTail(offset / atRaw[j]), 0);
     return {
-      count, probabilityExact: Math.min(1, density), exact: false, wholePieceRange: toWholePieces(expandedUncertainty),
-      standardUncertainty, expandedUncertainty, wholePiecePValue, uncertainPieces,
+      count,
+      probabilityExact: Math.min(1, density),
+      exact: false,
+      wholePieceRange: toWholePieces(expandedUncertainty),
+      standardUncertainty,
+      expandedUncertainty,
+      wholePiecePValue,
+      uncertainPieces,
     };
   }
   const window = Math.ceil(1.5 * expandedUncertainty) + 2;
   const chance = chancesOverCounts(model, countRaw, count, window, nodes, atRaw);
-  const cautious = nodes.length === 1 && nodes[0].c2 === cautiousSpread2
-    ? chance
-    : chancesOverCounts(model, countRaw, count, window, [{ c2: cautiousSpread2, weight: 1 }], sdAt(model, countRaw, [{ c2: cautiousSpread2, weight: 1 }]));
+  const cautious =
+    nodes.length === 1 && nodes[0].c2 === cautiousSpread2
+      ? chance
+      : chancesOverCounts(model, countRaw, count, window, [{ c2: cautiousSpread2, weight: 1 }], sdAt(model, countRaw, [{ c2: cautiousSpread2, weight: 1 }]));
   const probabilityExact = Math.min(chance(count), cautious(count));
   const sdsAtCount = sdAt(model, count, nodes);
   const wholePiecePValue = nodes.reduce((sum, node, j) => sum + node.weight * twoSidedTail(offset / sdsAtCount[j]), 0);
@@ -113,7 +126,14 @@ export function judgeCount(model: CountModel, countRaw: number, nodes: readonly 
 }
 
 /** P(true count = k | N̂) over whole counts near `count`, for one belief (0 outside the window). */
-function chancesOverCounts(model: CountModel, countRaw: number, count: number, window: number, nodes: readonly SpreadNode[], atRaw: readonly number[]): (k: number) => number {
+function chancesOverCounts(
+  model: CountModel,
+  countRaw: number,
+  count: number,
+  window: number,
+  nodes: readonly SpreadNode[],
+  atRaw: readonly number[],
+): (k: number) => number {
   const lo = Math.max(0, count - window);
   const hi = count + window;
   const likelihood: number[] = [];

@@ -81,15 +81,19 @@ function weighingVariance(model: CountModel, count: number, c2: number): number 
   const independent = indicationVariance(noise) * (2 + 2 * r * r - 2 * r);
   const moved = spreadOf(Math.abs(count - n));
   if (geometry === 'added') {
-    return independent
-      + 2 * (r - 1) * largestRoundingCovariance(noise, spreadOf(count))
-      + 2 * r * (r - 1) * mostNegativeRoundingCovariance(noise, spreadOf(n))
-      + 2 * r * mostNegativeRoundingCovariance(noise, moved);
+    return (
+      independent +
+      2 * (r - 1) * largestRoundingCovariance(noise, spreadOf(count)) +
+      2 * r * (r - 1) * mostNegativeRoundingCovariance(noise, spreadOf(n)) +
+      2 * r * mostNegativeRoundingCovariance(noise, moved)
+    );
   }
-  return independent
-    + 2 * (1 - r) * mostNegativeRoundingCovariance(noise, spreadOf(count))
-    + 2 * r * (1 - r) * largestRoundingCovariance(noise, spreadOf(n))
-    + 2 * r * mostNegativeRoundingCovariance(noise, moved);
+  return (
+    independent +
+    2 * (1 - r) * mostNegativeRoundingCovariance(noise, spreadOf(count)) +
+    2 * r * (1 - r) * largestRoundingCovariance(noise, spreadOf(n)) +
+    2 * r * mostNegativeRoundingCovariance(noise, moved)
+  );
 }
 
 /**

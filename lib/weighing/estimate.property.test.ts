@@ -4,41 +4,52 @@ import { estimateCount, type EstimateCountInput } from './estimate';
 import { WEIGHT_UNITS } from './units';
 
 // Inputs inside the ranges assertEstimateInput accepts, spread over many orders of magnitude.
-const validInput: fc.Arbitrary<EstimateCountInput> = fc.record(
-  {
-    unit: fc.constantFrom(...WEIGHT_UNITS),
-    scale: fc.record(
-      {
-        division: fc.double({ min: 1e-6, max: 10, noNaN: true }),
-        repeatability: fc.double({ min: 0, max: 10, noNaN: true }),
-        max: fc.double({ min: 1e-3, max: 1e6, noNaN: true }),
-        min: fc.double({ min: 0, max: 100, noNaN: true }),
-      },
-      { requiredKeys: ['division'] },
-    ),
-    sample: fc.record({
-      quantity: fc.integer({ min: 1, max: 100000 }),
-      // in divisions: a sample reads at least one
-      netWeight: fc.double({ min: 1, max: 1e6, noNaN: true }),
-    }),
-    netWeight: fc.double({ min: 0, max: 1e6, noNaN: true }),
-    sampleOnPan: fc.boolean(),
-    pieceSpread: fc.double({ min: 0, max: 0.99, noNaN: true }),
-    targetQuantity: fc.integer({ min: 1, max: 1_000_000 }),
-  },
-  { requiredKeys: ['unit', 'scale', 'sample', 'netWeight'] },
-).map((input) => {
-  const sample = { ...input.sample, netWeight: input.sample.netWeight * input.scale.division };
-  // Loads of at most 10^8 pieces: beyond 10^9 the estimate refuses (and a shop never gets near).
-  return { ...input, sample, netWeight: Math.min(input.netWeight, 1e8 * (sample.netWeight / sample.quantity)) };
-});
+const validInput: fc.Arbitrary<EstimateCountInput> = fc
+  .record(
+    {
+      unit: fc.constantFrom(...WEIGHT_UNITS),
+      scale: fc.record(
+        {
+          division: fc.double({ min: 1e-6, max: 10, noNaN: true }),
+          repeatability: fc.double({ min: 0, max: 10, noNaN: true }),
+          max: fc.double({ min: 1e-3, max: 1e6, noNaN: true }),
+          min: fc.double({ min: 0, max: 100, noNaN: true }),
+        },
+        { requiredKeys: ['division'] },
+      ),
+      sample: fc.record({
+        quantity: fc.integer({ min: 1, max: 100000 }),
+        // in divisions: a sample reads at least one
+        netWeight: fc.double({ min: 1, max: 1e6, noNaN: true }),
+      }),
+      netWeight: fc.double({ min: 0, max: 1e6, noNaN: true }),
+      sampleOnPan: fc.boolean(),
+      pieceSpread: fc.double({ min: 0, max: 0.99, noNaN: true }),
+      targetQuantity: fc.integer({ min: 1, max: 1_000_000 }),
+    },
+    { requiredKeys: ['unit', 'scale', 'sample', 'netWeight'] },
+  )
+  .map((input) => {
+    const sample = { ...input.sample, netWeight: input.sample.netWeight * input.scale.division };
+    // Loads of at most 10^8 pieces: beyond 10^9 the estimate refuses (and a shop never gets near).
+    return { ...input, sample, netWeight: Math.min(input.netWeight, 1e8 * (sample.netWeight / sample.quantity)) };
+  });
 
 describe('estimateCount properties', () => {
   it('never throws on valid inputs and returns only finite numbers', () => {
     fc.assert(
       fc.property(validInput, (input) => {
         const r = estimateCount(input);
-        for (const value of [r.averagePieceWeight, r.countRaw, r.count, r.standardUncertainty, r.expandedUncertainty, r.maxExactQuantity, r.probabilityExact, r.wholePieceRange]) {
+        for (const value of [
+          r.averagePieceWeight,
+          r.countRaw,
+          r.count,
+          r.standardUncertainty,
+          r.expandedUncertainty,
+          r.maxExactQuantity,
+          r.probabilityExact,
+          r.wholePieceRange,
+        ]) {
           expect(Number.isFinite(value)).toBe(true);
         }
         expect(r.recommendedSampleQuantity === null || Number.isInteger(r.recommendedSampleQuantity)).toBe(true);

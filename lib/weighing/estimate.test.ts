@@ -114,7 +114,14 @@ describe('estimateCount', () => {
   });
 
   it('never calls a reading half-way between two counts exact, and says it fits no whole count', () => {
-    const base = { ...request, scale: { division: 0.001 }, sample: { quantity: 100, netWeight: 200 }, pieceSpread: 0, targetQuantity: undefined, sampleOnPan: false };
+    const base = {
+      ...request,
+      scale: { division: 0.001 },
+      sample: { quantity: 100, netWeight: 200 },
+      pieceSpread: 0,
+      targetQuantity: undefined,
+      sampleOnPan: false,
+    };
     const half = estimateCount({ ...base, netWeight: 25 });
     expect(half.countRaw).toBe(12.5);
     expect(half.exact).toBe(false);
@@ -159,11 +166,17 @@ describe('estimateCount', () => {
     expect(apart.recommendedSampleQuantity).toBeNull();
   });
 
-  it('counts a bulk on a second scale with both scales\' calibration, which one scale would cancel', () => {
+  it("counts a bulk on a second scale with both scales' calibration, which one scale would cancel", () => {
     const fine = { division: 0.001, repeatability: 0.0005, calibrationUncertainty: 0.002 };
     const platform = { division: 0.1, repeatability: 0.05, calibrationUncertainty: 0.5 };
     const two = estimateCount({ ...request, scale: fine, bulkScale: platform, sampleOnPan: false, targetQuantity: undefined });
-    const noCalibration = estimateCount({ ...request, scale: { ...fine, calibrationUncertainty: 0 }, bulkScale: { ...platform, calibrationUncertainty: 0 }, sampleOnPan: false, targetQuantity: undefined });
+    const noCalibration = estimateCount({
+      ...request,
+      scale: { ...fine, calibrationUncertainty: 0 },
+      bulkScale: { ...platform, calibrationUncertainty: 0 },
+      sampleOnPan: false,
+      targetQuantity: undefined,
+    });
     expect(two.count).toBe(1011);
     expect(two.standardUncertainty).toBeGreaterThan(noCalibration.standardUncertainty);
     expect(() => estimateCount({ ...request, bulkScale: platform, sampleOnPan: true })).toThrow(/sampleOnPan/);

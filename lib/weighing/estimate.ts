@@ -51,10 +51,17 @@ function scaleInGrams(scale: EstimateScale, unit: WeightUnit): WeighingScale {
 }
 
 /** What the request says about the spread, most specific first, then the part's history. */
-function spreadBeliefOf(input: EstimateCountInput, sampleScale: WeighingScale, options: EstimateCountOptions): { belief: SpreadBelief; source: SpreadUsed['source'] } {
+function spreadBeliefOf(
+  input: EstimateCountInput,
+  sampleScale: WeighingScale,
+  options: EstimateCountOptions,
+): { belief: SpreadBelief; source: SpreadUsed['source'] } {
   const increments = input.sample.increments;
   if (increments && input.pieceSpread == null) {
-    const learned = spreadFromIncrements(increments.map((x) => toGrams(x, input.unit)), sampleScale);
+    const learned = spreadFromIncrements(
+      increments.map((x) => toGrams(x, input.unit)),
+      sampleScale,
+    );
     if (learned) return { belief: learned, source: 'learned' };
   }
   if (input.pieceSpread != null) return { belief: givenSpread(input.pieceSpread, input.pieceSpreadDegreesOfFreedom), source: 'given' };
@@ -115,9 +122,10 @@ export function assessCount(input: EstimateCountInput, options: EstimateCountOpt
   const target = input.targetQuantity;
   // On the pan a target at or below the sample is already on it: no sample to advise.
   const targetBeyondSample = target != null && (!onPan || target > n);
-  const recommended = target == null || !targetBeyondSample
-    ? null
-    : sampleForTarget({ targetQuantity: target, averagePieceWeight: apw, sampleScale, bulkScale, sampleOnPan: onPan }, planC2);
+  const recommended =
+    target == null || !targetBeyondSample
+      ? null
+      : sampleForTarget({ targetQuantity: target, averagePieceWeight: apw, sampleScale, bulkScale, sampleOnPan: onPan }, planC2);
   finiteOrFail({ expandedUncertainty: judged.expandedUncertainty, standardUncertainty: judged.standardUncertainty });
 
   const codes: WarningCode[] = [];

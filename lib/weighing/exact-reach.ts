@@ -93,7 +93,17 @@ export function sampleForTarget(input: SampleForTarget, c2: number): number | nu
   const cap = onPan ? t - 1 : t;
   const hi0 = Math.floor(Math.min(input.maxSample ?? cap, cap));
   const reaches = (n: number): boolean =>
-    withinReach({ sampleQuantity: n, averagePieceWeight: input.averagePieceWeight, sampleScale: input.sampleScale, bulkScale: input.bulkScale, sampleOnPan: input.sampleOnPan }, t, c2);
+    withinReach(
+      {
+        sampleQuantity: n,
+        averagePieceWeight: input.averagePieceWeight,
+        sampleScale: input.sampleScale,
+        bulkScale: input.bulkScale,
+        sampleOnPan: input.sampleOnPan,
+      },
+      t,
+      c2,
+    );
   if (t < 1 || hi0 < 1 || !reaches(hi0)) return null;
   let lo = 1;
   let hi = hi0;

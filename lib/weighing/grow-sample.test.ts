@@ -18,7 +18,7 @@ describe('planGrowStep', () => {
     expect(plan.tooLight).toBe(false);
   });
 
-  it('never plans past the pan total the caller caps it at (a kit line\'s window)', () => {
+  it("never plans past the pan total the caller caps it at (a kit line's window)", () => {
     const plan = planGrowStep({ sampleQuantity: 10, sampleNet: 6, spread: known(0.005), noise }, 40);
     expect(plan).toEqual({ maxAdd: 30, maxTotal: 40, tooLight: false });
   });
@@ -33,7 +33,12 @@ describe('planGrowStep', () => {
   it('allows fewer pieces per step when the spread is loose, and fewer still when it is learned from 5 pieces only', () => {
     const tight = planGrowStep({ sampleQuantity: 10, sampleNet: 6, spread: known(0.005), noise });
     const loose = planGrowStep({ sampleQuantity: 10, sampleNet: 6, spread: known(0.05), noise });
-    const fromFive = planGrowStep({ sampleQuantity: 10, sampleNet: 6, spread: { kind: 'learned', scatter: 0.005 ** 2, noise: 0, degreesOfFreedom: 4, observations: 5 }, noise });
+    const fromFive = planGrowStep({
+      sampleQuantity: 10,
+      sampleNet: 6,
+      spread: { kind: 'learned', scatter: 0.005 ** 2, noise: 0, degreesOfFreedom: 4, observations: 5 },
+      noise,
+    });
     expect(loose.maxAdd).toBeLessThan(tight.maxAdd);
     expect(loose.maxAdd).toBeGreaterThan(0);
     expect(fromFive.maxAdd).toBeLessThan(tight.maxAdd);
@@ -92,7 +97,10 @@ describe('acceptGrowStep', () => {
       grow = { ...grow, sampleQuantity: step.sampleQuantity, sampleNet: step.sampleNet };
     }
     expect(grow.sampleQuantity).toBeGreaterThan(500);
-    const reach = exactReach({ sampleQuantity: grow.sampleQuantity, averagePieceWeight: grow.sampleNet / grow.sampleQuantity, sampleScale: noise, sampleOnPan: true }, 0.005 ** 2);
+    const reach = exactReach(
+      { sampleQuantity: grow.sampleQuantity, averagePieceWeight: grow.sampleNet / grow.sampleQuantity, sampleScale: noise, sampleOnPan: true },
+      0.005 ** 2,
+    );
     expect(reach.maxQuantity).toBeGreaterThan(grow.sampleQuantity);
   });
 });

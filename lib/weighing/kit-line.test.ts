@@ -2,7 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { combineLineCaptures, type LineCapture } from './kit-line';
 
 const capture = (over: Partial<LineCapture>): LineCapture => ({
-  count: 100, exact: false, expandedUncertainty: 2, uncertainPieces: 100, apwRelativeVariance: 0, apwKey: 'a', ...over,
+  count: 100,
+  exact: false,
+  expandedUncertainty: 2,
+  uncertainPieces: 100,
+  apwRelativeVariance: 0,
+  apwKey: 'a',
+  ...over,
 });
 
 describe('combineLineCaptures', () => {

@@ -68,7 +68,7 @@ function series(d: number, b: number, alternating: boolean): number {
     sum += alternating && k % 2 === 0 ? -term : term;
   }
   const next = Math.exp(-b * (TERMS + 1) ** 2);
-  const tail = alternating ? (d * d) / (2 * Math.PI ** 2 * (TERMS + 1) ** 2) * next : (d * d) / (2 * Math.PI ** 2 * TERMS) * next;
+  const tail = alternating ? ((d * d) / (2 * Math.PI ** 2 * (TERMS + 1) ** 2)) * next : ((d * d) / (2 * Math.PI ** 2 * TERMS)) * next;
   return sum + tail;
 }
 

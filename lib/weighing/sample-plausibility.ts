@@ -27,7 +27,10 @@ export function sampleProblems(sample: { quantity: number; netWeight: number }, 
   if (sample.netWeight > scale.max) {
     problems.push({ field: 'netWeight', message: `${grams(sample.netWeight)} is over this scale's Max of ${grams(scale.max)}` });
   } else if (sample.netWeight < scale.min) {
-    problems.push({ field: 'netWeight', message: `${grams(sample.netWeight)} is under this scale's Min of ${grams(scale.min)}: put more pieces on, or use a finer scale` });
+    problems.push({
+      field: 'netWeight',
+      message: `${grams(sample.netWeight)} is under this scale's Min of ${grams(scale.min)}: put more pieces on, or use a finer scale`,
+    });
   }
   // A piece lighter than one division cannot be told apart: the quantity does not fit the weight.
   if (!(apw >= scale.division)) {
@@ -75,9 +78,10 @@ export function historyOutlier(input: OutlierInput): OutlierResult {
   if (history.length === 0) return { held: false, sigmas: 0, historyMean: null };
   const total = history.reduce((sum, s) => sum + s.quantity, 0);
   const mean = history.reduce((sum, s) => sum + s.quantity * s.averagePieceWeight, 0) / total;
-  const drift = history.length < 2
-    ? 0
-    : history.reduce((sum, s) => sum + (s.quantity / total) * (s.averagePieceWeight / mean - 1) ** 2, 0) * (history.length / (history.length - 1));
+  const drift =
+    history.length < 2
+      ? 0
+      : history.reduce((sum, s) => sum + (s.quantity / total) * (s.averagePieceWeight / mean - 1) ** 2, 0) * (history.length / (history.length - 1));
   const weighing = input.netVariance / (input.quantity * input.averagePieceWeight) ** 2;
   const variance = input.c2 * (1 / input.quantity + 1 / total) + weighing + drift;
   const sigmas = Math.abs(input.averagePieceWeight / mean - 1) / Math.sqrt(variance);

@@ -60,7 +60,7 @@ describe('StabilityDetector', () => {
 
   it('returns the window mean of a noisy but still reading for the capture', () => {
     const detector = new StabilityDetector({ division: d });
-    const state = feed(detector, 0, 1200, (t) => (t / period) % 2 === 0 ? 5.0 : 5.01);
+    const state = feed(detector, 0, 1200, (t) => ((t / period) % 2 === 0 ? 5.0 : 5.01));
     expect(state.stable).toBe(true);
     expect(state.mean).toBeCloseTo(5.005, 3);
   });

@@ -79,7 +79,6 @@ export class StabilityDetector {
     this.last = { stable: false, mean: NaN, span: 0, samples: 0, full: false, source: null };
   }
 
-
   push(reading: StabilityInput): StabilityState {
     const newest = this.window.newestTime();
     if (newest !== undefined && reading.t < newest) this.reset();

@@ -26,10 +26,7 @@ describe('uncertainty', () => {
 
   // Hand-worked: 1000 g at 1e-4 relative adds 0.1 g in quadrature: √(6.6667e-5 + 0.01) = 0.100333.
   it('adds a relative calibration term at the load when two scales are involved', () => {
-    const u = netWeightUncertainty(
-      { division: 0.01, repeatability: 0.005 },
-      { load: 1000, relativeCalibration: 1e-4 },
-    );
+    const u = netWeightUncertainty({ division: 0.01, repeatability: 0.005 }, { load: 1000, relativeCalibration: 1e-4 });
     expect(u).toBeCloseTo(0.100333, 6);
   });
 });

@@ -4,8 +4,16 @@ import { describeWarning, isWarningCode, makeWarning, WARNING_CODES, WARNING_TEX
 describe('warnings', () => {
   it('has exactly the codes of the warnings table in docs/counting-model.md', () => {
     expect([...WARNING_CODES]).toEqual([
-      'apw_below_resolution', 'below_min_capacity', 'count_not_exact', 'sample_too_small',
-      'over_capacity', 'cv_assumed', 'single_piece_not_resolved', 'not_whole_pieces', 'unstable', 'scale_locked',
+      'apw_below_resolution',
+      'below_min_capacity',
+      'count_not_exact',
+      'sample_too_small',
+      'over_capacity',
+      'cv_assumed',
+      'single_piece_not_resolved',
+      'not_whole_pieces',
+      'unstable',
+      'scale_locked',
     ]);
     expect(Object.keys(WARNING_TEXT).sort()).toEqual([...WARNING_CODES].sort());
   });

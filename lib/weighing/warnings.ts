@@ -54,7 +54,8 @@ export const WARNING_TEXT: Readonly<Record<WarningCode, WarningText>> = {
   },
   cv_assumed: {
     short: 'spread assumed',
-    message: 'How much single pieces vary is not yet known for this part, so a cautious value is assumed: counts show wider ranges than they will once it is learned.',
+    message:
+      'How much single pieces vary is not yet known for this part, so a cautious value is assumed: counts show wider ranges than they will once it is learned.',
     remedy: 'Put the first pieces of a sample on one at a time, so the app learns this part.',
   },
   single_piece_not_resolved: {

@@ -34,8 +34,16 @@ export async function up({ context: q }: { context: QueryInterface }): Promise<v
   const now = new Date();
   await q.bulkInsert('site_settings', [
     {
-      id: 1, site_name: 'Tallyforge', display_unit: 'g', default_piece_spread: 0.02, stability_window_ms: 1000,
-      variance_threshold_pct: 2, variance_threshold_pcs: 5, version: 0, created_at: now, updated_at: now,
+      id: 1,
+      site_name: 'Tallyforge',
+      display_unit: 'g',
+      default_piece_spread: 0.02,
+      stability_window_ms: 1000,
+      variance_threshold_pct: 2,
+      variance_threshold_pcs: 5,
+      version: 0,
+      created_at: now,
+      updated_at: now,
     },
   ]);
   await q.createTable('password_tokens', {

@@ -37,7 +37,8 @@ export async function down({ context: q }: { context: QueryInterface }): Promise
   await q.removeColumn('site_settings', 'blind_cycle_counts');
   await q.removeColumn('build_order_lines', 'recount_after_event_id');
   await q.removeColumn('build_order_lines', 'whole_piece_range');
-  for (const c of ['apw_relative_variance', 'uncertain_pieces', 'whole_piece_range', 'probability_exact', 'bulk_scale_id']) await q.removeColumn('count_events', c);
+  for (const c of ['apw_relative_variance', 'uncertain_pieces', 'whole_piece_range', 'probability_exact', 'bulk_scale_id'])
+    await q.removeColumn('count_events', c);
   await q.removeIndex('piece_weight_samples', ['status']);
   for (const c of ['decided_at', 'decided_by', 'net_variance_g2', 'hold_reason', 'status']) await q.removeColumn('piece_weight_samples', c);
   for (const c of ['spread_dof', 'spread_noise', 'spread_scatter']) await q.removeColumn('parts', c);

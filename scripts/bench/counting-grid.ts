@@ -15,8 +15,18 @@ import { performance } from 'node:perf_hooks';
 import { Worker, isMainThread, parentPort } from 'node:worker_threads';
 import { estimateCount } from '../../lib/weighing/estimate';
 import {
-  ALLOWANCE_Z, LIMITS, fullGrid, isResolved, judgeRegime, mergeTallies, nearLimit, ratesOf, regimeKey, regimeSeed,
-  runRegime, type Tally,
+  ALLOWANCE_Z,
+  LIMITS,
+  fullGrid,
+  isResolved,
+  judgeRegime,
+  mergeTallies,
+  nearLimit,
+  ratesOf,
+  regimeKey,
+  regimeSeed,
+  runRegime,
+  type Tally,
 } from '../../tests/reference/counting-simulator/grid';
 import type { EstimateRequest, EstimateResponse, Regime } from '../../tests/reference/counting-simulator/simulator';
 
@@ -28,8 +38,17 @@ const CHUNK = 40; // regimes a message: small enough to balance two workers, lar
 const estimate = (request: EstimateRequest): EstimateResponse =>
   estimateCount(request as unknown as Parameters<typeof estimateCount>[0]) as unknown as EstimateResponse;
 
-interface Job { index: number; regime: Regime; trials: number; seed: number }
-interface Done { index: number; tally: Tally; ms: number }
+interface Job {
+  index: number;
+  regime: Regime;
+  trials: number;
+  seed: number;
+}
+interface Done {
+  index: number;
+  tally: Tally;
+  ms: number;
+}
 
 function runJob(job: Job): Done {
   const t0 = performance.now();
@@ -103,8 +122,7 @@ function pilotCost(grid: Regime[], seed: number): number {
 
 /** How close a regime is to flipping a verdict: the smallest |k − n·L| / √(n·L·(1 − L)) over its checks. */
 function marginality(regime: Regime, t: Tally): number {
-  const z = (k: number, n: number, limit: number): number =>
-    n === 0 ? Infinity : Math.abs(k - n * limit) / Math.sqrt(n * limit * (1 - limit));
+  const z = (k: number, n: number, limit: number): number => (n === 0 ? Infinity : Math.abs(k - n * limit) / Math.sqrt(n * limit * (1 - limit)));
   let m = z(t.exactRight, t.flaggedExact, LIMITS.exactRight);
   if (isResolved(regime)) {
     m = Math.min(m, z(t.intervalCovers, t.answered, LIMITS.minCoverage));
@@ -130,7 +148,10 @@ async function main(): Promise<void> {
   console.log(`counting grid: ${grid.length} regimes, ${baseTrials} trials each, ${workers} workers (pilot: ${(costMs * 1000).toFixed(0)} µs a trial)`);
 
   const pool = startPool(workers);
-  const phase1 = await runOnPool(pool, grid.map((regime, index) => ({ index, regime, trials: baseTrials, seed: regimeSeed(seed, regime) })));
+  const phase1 = await runOnPool(
+    pool,
+    grid.map((regime, index) => ({ index, regime, trials: baseTrials, seed: regimeSeed(seed, regime) })),
+  );
   const tallies: Tally[] = new Array(grid.length);
   const msPerTrial: number[] = new Array(grid.length);
   for (const d of phase1) {
@@ -163,14 +184,21 @@ async function main(): Promise<void> {
     const judged = judgeRegime(regime, t);
     const rates = ratesOf(t);
     return {
-      key: regimeKey(regime), regime, resolved: isResolved(regime), extended: extended.has(index), tally: t,
+      key: regimeKey(regime),
+      regime,
+      resolved: isResolved(regime),
+      extended: extended.has(index),
+      tally: t,
       rates: {
-        flaggedExact: round4(rates.flaggedExactRate), exactRight: round4(rates.exactRightRate),
-        coverage: round4(rates.intervalCoverage), wholePieceCoverage: round4(rates.wholePieceCoverage),
+        flaggedExact: round4(rates.flaggedExactRate),
+        exactRight: round4(rates.exactRightRate),
+        coverage: round4(rates.intervalCoverage),
+        wholePieceCoverage: round4(rates.wholePieceCoverage),
         probabilityExactMean: round4(rates.probabilityExactMean),
       },
       bounds: { exactRightUpper: round4(judged.exactRightUpper), coverageUpper: round4(judged.coverageUpper), coverageLower: round4(judged.coverageLower) },
-      pass: judged.pass, failures: judged.failures,
+      pass: judged.pass,
+      failures: judged.failures,
     };
   });
 
@@ -181,12 +209,48 @@ async function main(): Promise<void> {
     trials: sum((t) => t.trials),
     unsendable: sum((t) => t.unsendable),
     errors: sum((t) => t.errors),
-    flaggedExactRate: round4(sum((t) => t.flaggedExact) / Math.max(1, sum((t) => t.trials - t.unsendable))),
-    exactRightRate: round4(sum((t) => t.exactRight) / Math.max(1, sum((t) => t.flaggedExact))),
-    coverageResolved: round4(sum((t) => t.intervalCovers, resolved) / Math.max(1, sum((t) => t.answered, resolved))),
-    coverageAll: round4(sum((t) => t.intervalCovers) / Math.max(1, sum((t) => t.answered))),
-    wholePieceCoverage: round4(sum((t) => t.wholePieceCovers) / Math.max(1, sum((t) => t.wholePieceAnswered))),
-    probabilityExactMean: round4(sum((t) => t.probabilityExactSum) / Math.max(1, sum((t) => t.probabilityExactAnswered))),
+    flaggedExactRate: round4(
+      sum((t) => t.flaggedExact) /
+        Math.max(
+          1,
+          sum((t) => t.trials - t.unsendable),
+        ),
+    ),
+    exactRightRate: round4(
+      sum((t) => t.exactRight) /
+        Math.max(
+          1,
+          sum((t) => t.flaggedExact),
+        ),
+    ),
+    coverageResolved: round4(
+      sum((t) => t.intervalCovers, resolved) /
+        Math.max(
+          1,
+          sum((t) => t.answered, resolved),
+        ),
+    ),
+    coverageAll: round4(
+      sum((t) => t.intervalCovers) /
+        Math.max(
+          1,
+          sum((t) => t.answered),
+        ),
+    ),
+    wholePieceCoverage: round4(
+      sum((t) => t.wholePieceCovers) /
+        Math.max(
+          1,
+          sum((t) => t.wholePieceAnswered),
+        ),
+    ),
+    probabilityExactMean: round4(
+      sum((t) => t.probabilityExactSum) /
+        Math.max(
+          1,
+          sum((t) => t.probabilityExactAnswered),
+        ),
+    ),
   };
   const failingBy = (pattern: RegExp): number => rows.filter((r) => r.failures.some((f) => pattern.test(f))).length;
   const failing = {
@@ -204,28 +268,55 @@ async function main(): Promise<void> {
     }, null);
   const worstExact = lowest(rows, (r) => r.bounds.exactRightUpper);
   const worstCoverage = lowest(rows.filter(resolved), (r) => r.bounds.coverageUpper);
-  const widest = lowest(rows.filter((r) => r.bounds.coverageLower != null), (r) => -r.bounds.coverageLower!);
+  const widest = lowest(
+    rows.filter((r) => r.bounds.coverageLower != null),
+    (r) => -r.bounds.coverageLower!,
+  );
   const withErrors = rows.filter((r) => r.tally.errors > 0).sort((a, b) => b.tally.errors - a.tally.errors);
   const elapsedS = (performance.now() - started) / 1000;
 
   mkdirSync('bench-results', { recursive: true });
-  writeFileSync(RESULTS, JSON.stringify({
-    generatedAt: new Date().toISOString(), seed, workers, budgetS, baseTrials, extraTrials: extra,
-    pilotMicrosecondsPerTrial: Math.round(costMs * 1000), allowanceZ: ALLOWANCE_Z, limits: LIMITS,
-    regimes: grid.length, openAfterPhase1: open.length, extended: extended.size,
-    elapsedSeconds: Math.round(elapsedS * 10) / 10, phase1Seconds: Math.round(phase1S * 10) / 10,
-    overall, failing,
-    worst: { exactRight: worstExact?.key ?? null, coverage: worstCoverage?.key ?? null, widestKnownCoverage: widest?.key ?? null },
-    perRegime: rows,
-  }));
+  writeFileSync(
+    RESULTS,
+    JSON.stringify({
+      generatedAt: new Date().toISOString(),
+      seed,
+      workers,
+      budgetS,
+      baseTrials,
+      extraTrials: extra,
+      pilotMicrosecondsPerTrial: Math.round(costMs * 1000),
+      allowanceZ: ALLOWANCE_Z,
+      limits: LIMITS,
+      regimes: grid.length,
+      openAfterPhase1: open.length,
+      extended: extended.size,
+      elapsedSeconds: Math.round(elapsedS * 10) / 10,
+      phase1Seconds: Math.round(phase1S * 10) / 10,
+      overall,
+      failing,
+      worst: { exactRight: worstExact?.key ?? null, coverage: worstCoverage?.key ?? null, widestKnownCoverage: widest?.key ?? null },
+      perRegime: rows,
+    }),
+  );
 
   const describe = (r: (typeof rows)[number] | null, what: string): string =>
     r == null ? '–' : `${r.key}: ${what} (${r.tally.trials} trials${r.extended ? ', extended' : ''})`;
-  console.log(`  elapsed ${elapsedS.toFixed(0)} s (phase 1 ${phase1S.toFixed(0)} s); ${overall.trials} trials; ${open.length} regimes failing or open after phase 1, ${extended.size} given ${extra} more`);
-  console.log(`  pooled: exact-right ${pct(overall.exactRightRate)} of ${pct(overall.flaggedExactRate)} flagged exact; coverage ${pct(overall.coverageResolved)} resolved, ${pct(overall.coverageAll)} all; whole-piece ${pct(overall.wholePieceCoverage)}; P(exact) mean ${pct(overall.probabilityExactMean)}`);
-  console.log(`  failing regimes: ${failing.regimes} of ${grid.length} (exact-right ${failing.exactRight}, coverage low ${failing.coverageLow}, too wide ${failing.coverageHigh}); ${failing.withErrors} with errors (${overall.errors} errors), ${overall.unsendable} trials unsendable`);
-  console.log(`  WORST exact-right: ${describe(worstExact, worstExact ? `${worstExact.tally.exactRight}/${worstExact.tally.flaggedExact} = ${pct(worstExact.rates.exactRight)}, upper ${pct(worstExact.bounds.exactRightUpper)}` : '')}`);
-  console.log(`  WORST coverage:    ${describe(worstCoverage, worstCoverage ? `${pct(worstCoverage.rates.coverage)}, upper ${pct(worstCoverage.bounds.coverageUpper)}` : '')}`);
+  console.log(
+    `  elapsed ${elapsedS.toFixed(0)} s (phase 1 ${phase1S.toFixed(0)} s); ${overall.trials} trials; ${open.length} regimes failing or open after phase 1, ${extended.size} given ${extra} more`,
+  );
+  console.log(
+    `  pooled: exact-right ${pct(overall.exactRightRate)} of ${pct(overall.flaggedExactRate)} flagged exact; coverage ${pct(overall.coverageResolved)} resolved, ${pct(overall.coverageAll)} all; whole-piece ${pct(overall.wholePieceCoverage)}; P(exact) mean ${pct(overall.probabilityExactMean)}`,
+  );
+  console.log(
+    `  failing regimes: ${failing.regimes} of ${grid.length} (exact-right ${failing.exactRight}, coverage low ${failing.coverageLow}, too wide ${failing.coverageHigh}); ${failing.withErrors} with errors (${overall.errors} errors), ${overall.unsendable} trials unsendable`,
+  );
+  console.log(
+    `  WORST exact-right: ${describe(worstExact, worstExact ? `${worstExact.tally.exactRight}/${worstExact.tally.flaggedExact} = ${pct(worstExact.rates.exactRight)}, upper ${pct(worstExact.bounds.exactRightUpper)}` : '')}`,
+  );
+  console.log(
+    `  WORST coverage:    ${describe(worstCoverage, worstCoverage ? `${pct(worstCoverage.rates.coverage)}, upper ${pct(worstCoverage.bounds.coverageUpper)}` : '')}`,
+  );
   console.log(`  widest (known c):  ${describe(widest, widest ? `${pct(widest.rates.coverage)}, lower ${pct(widest.bounds.coverageLower)}` : '')}`);
   if (withErrors.length > 0) console.log(`  most errors:       ${withErrors[0].key}: ${withErrors[0].tally.errors}, first: ${withErrors[0].tally.firstError}`);
   console.log(`  wrote ${RESULTS}`);

@@ -81,7 +81,15 @@ function hugeBody(): string {
 }
 
 async function binsForLabels(count: number): Promise<{ partId: number; binIds: number[] }> {
-  const part = await Part.create({ partNumber: `ABUSE-${randomUUID().slice(0, 8)}`.toUpperCase(), description: 'label flood part', countingMethod: 'scale', apwG: null, apwSampleSize: null, pieceSpread: null, photoFile: null });
+  const part = await Part.create({
+    partNumber: `ABUSE-${randomUUID().slice(0, 8)}`.toUpperCase(),
+    description: 'label flood part',
+    countingMethod: 'scale',
+    apwG: null,
+    apwSampleSize: null,
+    pieceSpread: null,
+    photoFile: null,
+  });
   const rows = Array.from({ length: count }, (_, i) => ({
     code: `XB-${String(1 + Math.floor(i / 891)).padStart(2, '0')}-${1 + (Math.floor(i / 99) % 9)}-${String(1 + (i % 99)).padStart(2, '0')}`,
     partId: part.id,
@@ -96,7 +104,13 @@ async function binsForLabels(count: number): Promise<{ partId: number; binIds: n
 async function main(): Promise<void> {
   const db = getDb();
   const password = randomUUID();
-  const clerk = await User.create({ email: `abuse-${randomUUID().slice(0, 8)}@example.test`, name: 'Abuse Bench Clerk', role: 'clerk', passwordHash: await hashPassword(password), active: true });
+  const clerk = await User.create({
+    email: `abuse-${randomUUID().slice(0, 8)}@example.test`,
+    name: 'Abuse Bench Clerk',
+    role: 'clerk',
+    passwordHash: await hashPassword(password),
+    active: true,
+  });
   const { partId, binIds } = await binsForLabels(LABELS);
   const printerUrl = `ipp://127.0.0.1:${process.env.PRINTER_PORT ?? 8641}/printers/labels`;
   const app = await startApp({ TF_JOBS: '0', SMTP_HOST: '127.0.0.1', SMTP_PORT: String(await freePort()), PRINTER_URL: printerUrl }, 'bench-results');
@@ -106,7 +120,8 @@ async function main(): Promise<void> {
     const idle = await watchHealth(app.url, seconds(IDLE_S));
 
     const body = hugeBody();
-    const bodyFlood = (url: string) => flood(8, Date.now() + FLOOD_S * 1000, () => fetch(`${url}/api/v1/session`, { method: 'POST', headers: { 'content-type': 'application/json' }, body }));
+    const bodyFlood = (url: string) =>
+      flood(8, Date.now() + FLOOD_S * 1000, () => fetch(`${url}/api/v1/session`, { method: 'POST', headers: { 'content-type': 'application/json' }, body }));
     const bodyStatuses = bodyFlood(app.url);
     const duringBodies = await watchHealth(app.url, bodyStatuses);
 
@@ -123,12 +138,20 @@ async function main(): Promise<void> {
 
     const tokenStop = Date.now() + FLOOD_S * 1000;
     const tokenStatuses = flood(16, tokenStop, () =>
-      fetch(`${app.url}/api/v1/invitations/accept`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ token: randomBytes(32).toString('base64url'), password: 'a new password 1' }) }),
+      fetch(`${app.url}/api/v1/invitations/accept`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ token: randomBytes(32).toString('base64url'), password: 'a new password 1' }),
+      }),
     );
     const duringTokens = await watchHealth(app.url, tokenStatuses);
 
     const started = Date.now();
-    const queued = await fetch(`${app.url}/api/v1/print-jobs`, { method: 'POST', headers: { 'content-type': 'application/json', origin: app.url, cookie }, body: JSON.stringify({ template: 'bin', stock: '2x1in', ids: binIds }) });
+    const queued = await fetch(`${app.url}/api/v1/print-jobs`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', origin: app.url, cookie },
+      body: JSON.stringify({ template: 'bin', stock: '2x1in', ids: binIds }),
+    });
     if (queued.status !== 202) throw new Error(`print batch refused: ${queued.status} ${await queued.text()}`);
     const { batchId } = (await queued.json()) as { batchId: string };
     const batchDone = (async () => {
@@ -156,12 +179,23 @@ async function main(): Promise<void> {
         bodyFloodHealthP95UnderMs100: duringBodies.p95 < 100,
         labelFloodHealthP95UnderThreeTimesIdle: duringLabels.p95 < 3 * idle.p95,
       },
-      ratios: { bodyFloodOverFloor: round(duringBodies.p95 / floorDuringBodies.p95, 2), bodyFloodOverIdle: round(duringBodies.p95 / idle.p95, 2), tokenFloodOverIdle: round(duringTokens.p95 / idle.p95, 2), labelFloodOverIdle: round(duringLabels.p95 / idle.p95, 2) },
+      ratios: {
+        bodyFloodOverFloor: round(duringBodies.p95 / floorDuringBodies.p95, 2),
+        bodyFloodOverIdle: round(duringBodies.p95 / idle.p95, 2),
+        tokenFloodOverIdle: round(duringTokens.p95 / idle.p95, 2),
+        labelFloodOverIdle: round(duringLabels.p95 / idle.p95, 2),
+      },
     };
     appendFigures(RESULTS, figures);
-    console.log(`abuse: health p50/p95/max ms — idle ${fmt(idle)}; body flood ${fmt(duringBodies)}; token flood ${fmt(duringTokens)}; label flood ${fmt(duringLabels)}`);
-    console.log(`  floor (node:http + primary-key lookup): idle ${fmt(floorIdle)}; body flood ${fmt(floorDuringBodies)}; app/floor p95 during the body flood ${figures.ratios.bodyFloodOverFloor}`);
-    console.log(`  body flood answers ${JSON.stringify(figures.attacks.bodyFlood.statuses)}; token flood ${JSON.stringify(figures.attacks.tokenFlood.statuses)}; labels ${JSON.stringify(figures.attacks.labelFlood)}`);
+    console.log(
+      `abuse: health p50/p95/max ms — idle ${fmt(idle)}; body flood ${fmt(duringBodies)}; token flood ${fmt(duringTokens)}; label flood ${fmt(duringLabels)}`,
+    );
+    console.log(
+      `  floor (node:http + primary-key lookup): idle ${fmt(floorIdle)}; body flood ${fmt(floorDuringBodies)}; app/floor p95 during the body flood ${figures.ratios.bodyFloodOverFloor}`,
+    );
+    console.log(
+      `  body flood answers ${JSON.stringify(figures.attacks.bodyFlood.statuses)}; token flood ${JSON.stringify(figures.attacks.tokenFlood.statuses)}; labels ${JSON.stringify(figures.attacks.labelFlood)}`,
+    );
     console.log(`  goals ${JSON.stringify(figures.goals)}`);
   } finally {
     app.child.kill('SIGTERM');

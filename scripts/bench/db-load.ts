@@ -83,14 +83,44 @@ interface Measured {
 }
 
 // 25 pieces of about 0.6 g as the sample, left on the pan, then about 75 more added (tests/api/counts.test.ts).
-const captureBody = (partId: number, scaleId: number) => ({ purpose: 'part', partId, scaleId, unit: 'g', gross: 112.3, tare: 52.3, sample: { quantity: 25, netWeight: 15 }, sampleOnPan: true, stable: true });
+const captureBody = (partId: number, scaleId: number) => ({
+  purpose: 'part',
+  partId,
+  scaleId,
+  unit: 'g',
+  gross: 112.3,
+  tare: 52.3,
+  sample: { quantity: 25, netWeight: 15 },
+  sampleOnPan: true,
+  stable: true,
+});
 // The same weighing as a preview, on the bench scale's profile.
-const estimateBody = { unit: 'g', scale: { division: 0.1, repeatability: 0.05, max: 6000, min: 20 }, sample: { quantity: 25, netWeight: 15 }, netWeight: 60, sampleOnPan: true };
+const estimateBody = {
+  unit: 'g',
+  scale: { division: 0.1, repeatability: 0.05, max: 6000, min: 20 },
+  sample: { quantity: 25, netWeight: 15 },
+  netWeight: 60,
+  sampleOnPan: true,
+};
 
 async function benchWorld(password: string): Promise<{ email: string; partId: number; scaleId: number; binId: number; orderId: number }> {
   const tag = randomUUID().slice(0, 8);
-  const user = await User.create({ email: `load-${tag}@example.test`, name: 'Load Bench Operator', role: 'operator', passwordHash: await hashPassword(password), active: true });
-  const part = await Part.create({ partNumber: `LOAD-${tag}`.toUpperCase(), description: 'load bench part', countingMethod: 'scale', apwG: null, apwSampleSize: null, pieceSpread: null, photoFile: null });
+  const user = await User.create({
+    email: `load-${tag}@example.test`,
+    name: 'Load Bench Operator',
+    role: 'operator',
+    passwordHash: await hashPassword(password),
+    active: true,
+  });
+  const part = await Part.create({
+    partNumber: `LOAD-${tag}`.toUpperCase(),
+    description: 'load bench part',
+    countingMethod: 'scale',
+    apwG: null,
+    apwSampleSize: null,
+    pieceSpread: null,
+    photoFile: null,
+  });
   // A class III bench scale, 6 kg × 0.1 g, e = 1 g, as the API tests make.
   const scale = await Scale.create({
     name: `load-${tag}`,
@@ -109,7 +139,17 @@ async function benchWorld(password: string): Promise<{ email: string; partId: nu
   // The rows the list tables are filled from: a bin, and a draft order of a kit with one line.
   const bin = await Bin.create({ code: 'LB-01-1-01', partId: part.id, containerId: null, bookQuantity: 400, abcClass: 'B', lastCountedAt: null });
   const kit = await Kit.create({ code: `LOAD-KIT-${tag}`.toUpperCase(), revision: 'A', description: 'load bench kit' });
-  const order = await BuildOrder.create({ number: `LOAD-${tag}`.toUpperCase(), kitId: kit.id, quantity: 5, dueDate: null, createdBy: user.id, releasedAt: null, completedAt: null, cancelledAt: null, overrideReason: null });
+  const order = await BuildOrder.create({
+    number: `LOAD-${tag}`.toUpperCase(),
+    kitId: kit.id,
+    quantity: 5,
+    dueDate: null,
+    createdBy: user.id,
+    releasedAt: null,
+    completedAt: null,
+    cancelledAt: null,
+    overrideReason: null,
+  });
   await BuildOrderLine.create({ orderId: order.id, partId: part.id, quantityPerKit: 4, required: 20, toleranceBelow: 0, toleranceAbove: 0 });
   return { email: user.email, partId: part.id, scaleId: scale.id, binId: bin.id, orderId: order.id };
 }
@@ -118,7 +158,11 @@ async function benchWorld(password: string): Promise<{ email: string; partId: nu
 async function fillLists(url: string, world: Awaited<ReturnType<typeof benchWorld>>, password: string): Promise<void> {
   const db = getDb();
   const cookie = await signIn(url, world.email, password);
-  const res = await fetch(`${url}/api/v1/counts`, { method: 'POST', headers: { 'content-type': 'application/json', origin: url, cookie, 'idempotency-key': randomUUID() }, body: JSON.stringify(captureBody(world.partId, world.scaleId)) });
+  const res = await fetch(`${url}/api/v1/counts`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', origin: url, cookie, 'idempotency-key': randomUUID() },
+    body: JSON.stringify(captureBody(world.partId, world.scaleId)),
+  });
   if (res.status !== 201) throw new Error(`the count log's template capture failed: ${res.status} ${await res.text()}`);
   const { count } = (await res.json()) as { count: { id: number } };
   await fillByCopying(db, 'parts', world.partId);
@@ -183,7 +227,15 @@ function summarize(name: TargetName, rounds: Array<Record<TargetName, Measured>>
   if (name === 'floor') return summary;
   const shares = rounds.map((r) => round(r[name].requestsPerSecond / r.floor.requestsPerSecond, 2));
   const p95s = rounds.map((r) => round(r[name].latencyMs.p95 / r.floor.latencyMs.p95, 2));
-  return { ...summary, vsFloor: { share: round(median(shares), 2), shareRange: [Math.min(...shares), Math.max(...shares)], p95Times: round(median(p95s), 2), p95TimesRange: [Math.min(...p95s), Math.max(...p95s)] } };
+  return {
+    ...summary,
+    vsFloor: {
+      share: round(median(shares), 2),
+      shareRange: [Math.min(...shares), Math.max(...shares)],
+      p95Times: round(median(p95s), 2),
+      p95TimesRange: [Math.min(...p95s), Math.max(...p95s)],
+    },
+  };
 }
 
 async function stop(child: ChildProcess): Promise<void> {
@@ -220,15 +272,24 @@ async function main(): Promise<void> {
     helpers.push(two.child);
     const twoNames = names.filter((n) => n === 'floor' || TWO_PROCESS_TARGETS.includes(n));
     const twoRounds = await measureRounds(benchTargets(two.url, nextFloor.url, dbFloor.url, world), twoNames, 32, world.email, password);
-    const twoProcesses = { processes: 2, connections: 32, targets: Object.fromEntries(twoNames.map((n) => [n, summarize(n, twoRounds)])) as Record<TargetName, Summary> };
-    const summary = levels.map(({ connections, rounds }) => ({ connections, targets: Object.fromEntries(names.map((n) => [n, summarize(n, rounds)])) as Record<TargetName, Summary> }));
+    const twoProcesses = {
+      processes: 2,
+      connections: 32,
+      targets: Object.fromEntries(twoNames.map((n) => [n, summarize(n, twoRounds)])) as Record<TargetName, Summary>,
+    };
+    const summary = levels.map(({ connections, rounds }) => ({
+      connections,
+      targets: Object.fromEntries(names.map((n) => [n, summarize(n, rounds)])) as Record<TargetName, Summary>,
+    }));
     const at32 = summary.find((l) => l.connections === 32)!.targets;
     const goals = Object.fromEntries(
-      (Object.entries(GOALS) as Array<[TargetName, { share: number; p95Times?: number }]>).filter(([name]) => names.includes(name)).map(([name, goal]) => {
-        const got = at32[name].vsFloor!;
-        const met = got.share >= goal.share && (goal.p95Times === undefined || got.p95Times <= goal.p95Times);
-        return [name, { goal, got: { share: got.share, p95Times: got.p95Times }, met }];
-      }),
+      (Object.entries(GOALS) as Array<[TargetName, { share: number; p95Times?: number }]>)
+        .filter(([name]) => names.includes(name))
+        .map(([name, goal]) => {
+          const got = at32[name].vsFloor!;
+          const met = got.share >= goal.share && (goal.p95Times === undefined || got.p95Times <= goal.p95Times);
+          return [name, { goal, got: { share: got.share, p95Times: got.p95Times }, met }];
+        }),
     );
     const figures = {
       ...runStamp('load'),
@@ -246,28 +307,41 @@ async function main(): Promise<void> {
     };
     appendFigures(RESULTS, figures);
 
-    console.log(`load: medians of ${ROUNDS} rounds, ${MEASURE_S} s per target after ${WARMUP_S} s warm-up; ${figures.cores} cores, load average ${figures.loadAverage.before.join(' ')}`);
+    console.log(
+      `load: medians of ${ROUNDS} rounds, ${MEASURE_S} s per target after ${WARMUP_S} s warm-up; ${figures.cores} cores, load average ${figures.loadAverage.before.join(' ')}`,
+    );
     for (const { connections, targets: m } of summary) {
-      console.log(`  ${connections} connections: ${'target'.padEnd(58)} ${'req/s'.padStart(7)} ${'p50'.padStart(7)} ${'p95'.padStart(7)} ${'p99'.padStart(7)} ms  ${'× floor (range)'.padStart(18)} ${'p95 ×'.padStart(7)}`);
+      console.log(
+        `  ${connections} connections: ${'target'.padEnd(58)} ${'req/s'.padStart(7)} ${'p50'.padStart(7)} ${'p95'.padStart(7)} ${'p99'.padStart(7)} ms  ${'× floor (range)'.padStart(18)} ${'p95 ×'.padStart(7)}`,
+      );
       for (const r of Object.values(m)) {
         const vs = r.vsFloor ? `${r.vsFloor.share} (${r.vsFloor.shareRange.join('–')})` : '1';
-        console.log(`  ${''.padEnd(16)}${r.request.padEnd(58)} ${String(r.requestsPerSecond).padStart(7)} ${[r.latencyMs.p50, r.latencyMs.p95, r.latencyMs.p99].map((v) => String(v).padStart(7)).join(' ')}     ${vs.padStart(18)} ${String(r.vsFloor?.p95Times ?? 1).padStart(7)}`);
+        console.log(
+          `  ${''.padEnd(16)}${r.request.padEnd(58)} ${String(r.requestsPerSecond).padStart(7)} ${[r.latencyMs.p50, r.latencyMs.p95, r.latencyMs.p99].map((v) => String(v).padStart(7)).join(' ')}     ${vs.padStart(18)} ${String(r.vsFloor?.p95Times ?? 1).padStart(7)}`,
+        );
       }
     }
     console.log(`  two app processes (APP_PROCESSES=2) on the same ${figures.cores} cores, 32 connections:`);
     for (const [name, r] of Object.entries(twoProcesses.targets) as Array<[TargetName, Summary]>) {
       const one = at32[name];
-      console.log(`  ${''.padEnd(16)}${r.request.padEnd(58)} ${String(r.requestsPerSecond).padStart(7)} ${[r.latencyMs.p50, r.latencyMs.p95, r.latencyMs.p99].map((v) => String(v).padStart(7)).join(' ')}     ${(r.vsFloor ? `${r.vsFloor.share} (one: ${one.vsFloor?.share})` : '1').padStart(18)}`);
+      console.log(
+        `  ${''.padEnd(16)}${r.request.padEnd(58)} ${String(r.requestsPerSecond).padStart(7)} ${[r.latencyMs.p50, r.latencyMs.p95, r.latencyMs.p99].map((v) => String(v).padStart(7)).join(' ')}     ${(r.vsFloor ? `${r.vsFloor.share} (one: ${one.vsFloor?.share})` : '1').padStart(18)}`,
+      );
     }
     console.log("  goals at 32 connections (median share of the floor's req/s, p95 × the floor's):");
     for (const [name, g] of Object.entries(goals)) {
-      console.log(`    ${name.padEnd(10)} share ${g.got.share} (goal ≥ ${g.goal.share})${g.goal.p95Times ? `, p95 × ${g.got.p95Times} (goal ≤ ${g.goal.p95Times})` : ''}: ${g.met ? 'met' : 'SHORT'}`);
+      console.log(
+        `    ${name.padEnd(10)} share ${g.got.share} (goal ≥ ${g.goal.share})${g.goal.p95Times ? `, p95 × ${g.got.p95Times} (goal ≤ ${g.goal.p95Times})` : ''}: ${g.met ? 'met' : 'SHORT'}`,
+      );
     }
     console.log(`  figures appended to ${RESULTS}`);
 
     const failed = [...levels.flatMap((l) => l.rounds), ...twoRounds].flatMap((r) => Object.values(r)).filter(failures);
     if (failed.length) {
-      for (const m of failed) console.error(`${m.request} at ${m.connections}: not every response had its status: ${JSON.stringify({ unexpected: m.unexpected, errors: m.errors, timeouts: m.timeouts })}`);
+      for (const m of failed)
+        console.error(
+          `${m.request} at ${m.connections}: not every response had its status: ${JSON.stringify({ unexpected: m.unexpected, errors: m.errors, timeouts: m.timeouts })}`,
+        );
       process.exitCode = 1;
     }
   } finally {
@@ -295,17 +369,47 @@ function benchTargets(appUrl: string, floorUrl: string, dbFloorUrl: string, worl
       signedIn: true,
       freshKey: true,
     },
-    estimate: { request: 'POST /api/v1/counting/estimate', url: appUrl, spec: { method: 'POST', path: '/api/v1/counting/estimate', headers: { ...json, origin: appUrl }, body: JSON.stringify(estimateBody) }, status: 200, signedIn: true },
-    orders: { request: `GET /api/v1/orders (first 100 of ${LIST_ROWS})`, url: appUrl, spec: { method: 'GET', path: '/api/v1/orders' }, status: 200, signedIn: true },
+    estimate: {
+      request: 'POST /api/v1/counting/estimate',
+      url: appUrl,
+      spec: { method: 'POST', path: '/api/v1/counting/estimate', headers: { ...json, origin: appUrl }, body: JSON.stringify(estimateBody) },
+      status: 200,
+      signedIn: true,
+    },
+    orders: {
+      request: `GET /api/v1/orders (first 100 of ${LIST_ROWS})`,
+      url: appUrl,
+      spec: { method: 'GET', path: '/api/v1/orders' },
+      status: 200,
+      signedIn: true,
+    },
     bins: { request: `GET /api/v1/bins (first 100 of ${LIST_ROWS})`, url: appUrl, spec: { method: 'GET', path: '/api/v1/bins' }, status: 200, signedIn: true },
-    counts: { request: `GET /api/v1/counts (first 100 of ${LIST_ROWS}+)`, url: appUrl, spec: { method: 'GET', path: '/api/v1/counts' }, status: 200, signedIn: true },
-    parts: { request: `GET /api/v1/parts (first 100 of ${LIST_ROWS})`, url: appUrl, spec: { method: 'GET', path: '/api/v1/parts' }, status: 200, signedIn: true },
+    counts: {
+      request: `GET /api/v1/counts (first 100 of ${LIST_ROWS}+)`,
+      url: appUrl,
+      spec: { method: 'GET', path: '/api/v1/counts' },
+      status: 200,
+      signedIn: true,
+    },
+    parts: {
+      request: `GET /api/v1/parts (first 100 of ${LIST_ROWS})`,
+      url: appUrl,
+      spec: { method: 'GET', path: '/api/v1/parts' },
+      status: 200,
+      signedIn: true,
+    },
     primaryKey: { request: 'SELECT id FROM parts WHERE id = ? (mariadb behind node:http)', url: dbFloorUrl, spec: { method: 'GET', path: '/' }, status: 200 },
   };
 }
 
 // Every target ROUNDS times in turn, the floor among them, so each round's ratios share their minute.
-async function measureRounds(targets: Record<TargetName, Target>, names: TargetName[], connections: number, email: string, password: string): Promise<Array<Record<TargetName, Measured>>> {
+async function measureRounds(
+  targets: Record<TargetName, Target>,
+  names: TargetName[],
+  connections: number,
+  email: string,
+  password: string,
+): Promise<Array<Record<TargetName, Measured>>> {
   const rounds: Array<Record<TargetName, Measured>> = [];
   for (let round = 0; round < ROUNDS; round += 1) {
     const measured = {} as Record<TargetName, Measured>;
@@ -313,7 +417,10 @@ async function measureRounds(targets: Record<TargetName, Target>, names: TargetN
       const run = await withCookie(targets[name], email, password);
       // The warm-up loads the route's code and fills the pools; a target that fails it is broken, not slow.
       const warm = await fire(run, connections, WARMUP_S);
-      if (failures(warm)) throw new Error(`${run.request} failed during warm-up: ${JSON.stringify({ unexpected: warm.unexpected, errors: warm.errors, timeouts: warm.timeouts })}`);
+      if (failures(warm))
+        throw new Error(
+          `${run.request} failed during warm-up: ${JSON.stringify({ unexpected: warm.unexpected, errors: warm.errors, timeouts: warm.timeouts })}`,
+        );
       measured[name] = await fire(run, connections, MEASURE_S);
     }
     rounds.push(measured);

@@ -23,10 +23,25 @@ Object.assign((db as unknown as { options: object }).options, { logging: (sql: s
 
 async function kitWithLines(lines: number, by: SessionUser, tag: string): Promise<number> {
   const parts = await Part.bulkCreate(
-    Array.from({ length: lines }, (_, i) => ({ partNumber: `BENCH-${tag}-${i}`, description: 'bench part', apwG: null, apwSampleSize: null, pieceSpread: null, photoFile: null })),
+    Array.from({ length: lines }, (_, i) => ({
+      partNumber: `BENCH-${tag}-${i}`,
+      description: 'bench part',
+      apwG: null,
+      apwSampleSize: null,
+      pieceSpread: null,
+      photoFile: null,
+    })),
   );
   await db.query(`INSERT INTO part_stock (part_id, on_hand, reserved) VALUES ${parts.map((p) => `(${p.id}, 100000000, 0)`).join(',')}`);
-  const { kit } = await createKit({ input: { code: `BENCH-${tag}`, revision: 'A', description: `${lines}-line bench kit`, components: parts.map((p) => ({ partId: p.id, quantity: 3, toleranceBelow: 0, toleranceAbove: 0 })) }, by });
+  const { kit } = await createKit({
+    input: {
+      code: `BENCH-${tag}`,
+      revision: 'A',
+      description: `${lines}-line bench kit`,
+      components: parts.map((p) => ({ partId: p.id, quantity: 3, toleranceBelow: 0, toleranceAbove: 0 })),
+    },
+    by,
+  });
   return kit.id;
 }
 

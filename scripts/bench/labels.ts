@@ -29,7 +29,12 @@ function bins(): BinLabelData[] {
   return Array.from({ length: COUNT }, (_, i) => {
     const zone = String.fromCharCode(65 + (i % 26)) + (i % 3 === 0 ? String.fromCharCode(65 + ((i * 7) % 26)) : '');
     const code = `${zone}-${String(1 + (i % 99)).padStart(2, '0')}-${1 + (i % 9)}-${String(1 + ((i * 13) % 99)).padStart(2, '0')}`;
-    return { binCode: code, partNumber: `CMW-${String(10_000 + i)}-A`, description: `Socket head cap screw M${3 + (i % 5)} × ${8 + (i % 20)}, stainless A2`, partUrl: `https://tallyforge.example.com/parts/${1000 + i}` };
+    return {
+      binCode: code,
+      partNumber: `CMW-${String(10_000 + i)}-A`,
+      description: `Socket head cap screw M${3 + (i % 5)} × ${8 + (i % 20)}, stainless A2`,
+      partUrl: `https://tallyforge.example.com/parts/${1000 + i}`,
+    };
   });
 }
 
@@ -61,17 +66,19 @@ async function withWorkers(pool: Worker[], items: BinLabelData[]): Promise<Uint8
     const feed = (worker: Worker) => {
       if (sent < chunks.length) worker.postMessage({ seq: sent, stock: STOCK, items: chunks[sent++] });
     };
-    const onMessage = (worker: Worker) => ({ seq, labels }: { seq: number; labels: PreparedLabel[] }) => {
-      arrived.set(seq, labels);
-      feed(worker);
-      writing = writing.then(async () => {
-        while (arrived.has(next)) {
-          for (const label of arrived.get(next)!) await writer.add(label);
-          arrived.delete(next++);
-        }
-        if (next === chunks.length) resolve();
-      }, reject);
-    };
+    const onMessage =
+      (worker: Worker) =>
+      ({ seq, labels }: { seq: number; labels: PreparedLabel[] }) => {
+        arrived.set(seq, labels);
+        feed(worker);
+        writing = writing.then(async () => {
+          while (arrived.has(next)) {
+            for (const label of arrived.get(next)!) await writer.add(label);
+            arrived.delete(next++);
+          }
+          if (next === chunks.length) resolve();
+        }, reject);
+      };
     for (const worker of pool) {
       worker.removeAllListeners('message');
       worker.on('message', onMessage(worker));
@@ -92,11 +99,16 @@ async function singleThread(items: BinLabelData[]): Promise<Uint8Array> {
 async function startPool(size: number): Promise<Worker[]> {
   const pool = Array.from({ length: size }, () => new Worker(`require('tsx/cjs'); require(${JSON.stringify(WORKER)});`, { eval: true }));
   // Each worker compiles and warms bwip-js before the clock starts: a pool lives as long as its process.
-  await Promise.all(pool.map((w) => new Promise((resolve, reject) => {
-    w.once('message', resolve);
-    w.once('error', reject);
-    w.postMessage({ seq: -1, stock: STOCK, items: bins().slice(0, 20) });
-  })));
+  await Promise.all(
+    pool.map(
+      (w) =>
+        new Promise((resolve, reject) => {
+          w.once('message', resolve);
+          w.once('error', reject);
+          w.postMessage({ seq: -1, stock: STOCK, items: bins().slice(0, 20) });
+        }),
+    ),
+  );
   return pool;
 }
 
@@ -141,7 +153,12 @@ async function main(): Promise<void> {
     repeats: REPEATS,
     floors: { encodeOnlyMs: round(best.encode.ms), textOnlyMs: round(best.text.ms), textOnlyBytes: best.text.bytes },
     singleThread: { ms: round(best.single.ms), bytes: best.single.bytes },
-    withWorkers: { ms: round(best.parallel.ms), bytes: best.parallel.bytes, msPerLabel: round(best.parallel.ms / COUNT, 3), bytesPerLabel: Math.round(best.parallel.bytes / COUNT) },
+    withWorkers: {
+      ms: round(best.parallel.ms),
+      bytes: best.parallel.bytes,
+      msPerLabel: round(best.parallel.ms / COUNT, 3),
+      bytesPerLabel: Math.round(best.parallel.bytes / COUNT),
+    },
     ratioToEncodeFloor: round(best.parallel.ms / best.encode.ms, 2),
     ratioToTextFloor: round(best.parallel.ms / best.text.ms, 2),
     aim: AIM,
@@ -150,12 +167,18 @@ async function main(): Promise<void> {
   appendFigures(RESULTS, figures);
 
   const kb = (n: number) => `${(n / 1024).toFixed(2)} KB`;
-  console.log(`labels: ${COUNT} bin labels (Code 128 + QR) on ${STOCK}; ${figures.cores} cores, load average ${figures.loadAverage.join(' ')}; best of ${REPEATS}`);
+  console.log(
+    `labels: ${COUNT} bin labels (Code 128 + QR) on ${STOCK}; ${figures.cores} cores, load average ${figures.loadAverage.join(' ')}; best of ${REPEATS}`,
+  );
   console.log(`  encode-only floor (bwip-js, 1 thread)   ${figures.floors.encodeOnlyMs} ms`);
   console.log(`  text-only floor (1 000 pages, no codes) ${figures.floors.textOnlyMs} ms, ${kb(best.text.bytes / COUNT)} a page`);
   console.log(`  whole batch, 1 thread                   ${figures.singleThread.ms} ms, ${kb(best.single.bytes / COUNT)} a label`);
-  console.log(`  whole batch, ${workers} workers + writer          ${figures.withWorkers.ms} ms (${figures.withWorkers.msPerLabel} ms a label), ${kb(figures.withWorkers.bytesPerLabel)} a label`);
-  console.log(`  = ${figures.ratioToEncodeFloor} × the encode-only floor, ${figures.ratioToTextFloor} × the text-only floor (aim: ≤ ${AIM.ratioToEncodeFloor} × and < 4 KB a label: ${figures.meetsAim ? 'met' : 'NOT met'})`);
+  console.log(
+    `  whole batch, ${workers} workers + writer          ${figures.withWorkers.ms} ms (${figures.withWorkers.msPerLabel} ms a label), ${kb(figures.withWorkers.bytesPerLabel)} a label`,
+  );
+  console.log(
+    `  = ${figures.ratioToEncodeFloor} × the encode-only floor, ${figures.ratioToTextFloor} × the text-only floor (aim: ≤ ${AIM.ratioToEncodeFloor} × and < 4 KB a label: ${figures.meetsAim ? 'met' : 'NOT met'})`,
+  );
   console.log(`  figures appended to ${RESULTS}`);
 }
 

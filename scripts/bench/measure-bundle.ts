@@ -41,7 +41,9 @@ export function measureBundle(root: string, route = '/(shell)/bench/page'): Bund
   // uPlot's source names itself in its CSS class prefix "u-" and its constructor; ag-grid in its module names.
   const chart = (t: string) => t.includes('uplot') || t.includes('u-over');
   const chunkDir = path.join(next, 'static/chunks');
-  const lazy = readdirSync(chunkDir).filter((f) => f.endsWith('.js') && !files.includes(`static/chunks/${f}`)).find((f) => chart(readFileSync(path.join(chunkDir, f), 'utf8')));
+  const lazy = readdirSync(chunkDir)
+    .filter((f) => f.endsWith('.js') && !files.includes(`static/chunks/${f}`))
+    .find((f) => chart(readFileSync(path.join(chunkDir, f), 'utf8')));
   return {
     route: '/bench',
     files: files.length,

@@ -27,10 +27,28 @@ function percentile(sorted: Float64Array, p: number): number {
 }
 
 export function measurePipeline(rateHz = 50, seconds = 3600): PipelineFigures {
-  const scale = new SimulatedScale({ seed: 2024, capacity: 6000, division: 0.1, repeatability: 0.02, settleMs: 250, rateHz, part: { meanWeight: 2.5, spread: 0.01 } });
+  const scale = new SimulatedScale({
+    seed: 2024,
+    capacity: 6000,
+    division: 0.1,
+    repeatability: 0.02,
+    settleMs: 250,
+    rateHz,
+    part: { meanWeight: 2.5, spread: 0.01 },
+  });
   const trace = new TraceBuffer(rateHz * 3600);
-  const pipeline = createReadingPipeline({ division: 0.1, repeatability: 0.02, capacity: 6000, minLoad: 20 }, { windowMs: 1000, defaultPieceSpread: 0.05, trace });
-  const work: PipelineWork = { tare: 150, sample: { quantity: 30, netWeight: 75 }, sampleOnPan: true, targetQuantity: 500, spread: { kind: 'learned', scatter: 0.0001, noise: 0.000002, degreesOfFreedom: 24, observations: 25 }, containerWeight: 150 };
+  const pipeline = createReadingPipeline(
+    { division: 0.1, repeatability: 0.02, capacity: 6000, minLoad: 20 },
+    { windowMs: 1000, defaultPieceSpread: 0.05, trace },
+  );
+  const work: PipelineWork = {
+    tare: 150,
+    sample: { quantity: 30, netWeight: 75 },
+    sampleOnPan: true,
+    targetQuantity: 500,
+    spread: { kind: 'learned', scatter: 0.0001, noise: 0.000002, degreesOfFreedom: 24, observations: 25 },
+    containerWeight: 150,
+  };
   const n = rateHz * seconds;
   const costs = new Float64Array(n);
   const periodMs = 1000 / rateHz;

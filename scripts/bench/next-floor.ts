@@ -17,7 +17,11 @@ export async function startNextFloor(): Promise<{ url: string; child: ChildProce
   if (built.status !== 0) throw new Error(`the floor app did not build:\n${built.stdout}\n${built.stderr}`);
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
-  const child = spawn(NEXT, ['start', dir, '-p', String(port), '-H', '127.0.0.1'], { cwd: root, stdio: ['ignore', 'ignore', 'inherit'], env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1' } });
+  const child = spawn(NEXT, ['start', dir, '-p', String(port), '-H', '127.0.0.1'], {
+    cwd: root,
+    stdio: ['ignore', 'ignore', 'inherit'],
+    env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1' },
+  });
   const reap = () => child.kill('SIGKILL');
   process.once('exit', reap);
   child.once('exit', () => process.off('exit', reap));

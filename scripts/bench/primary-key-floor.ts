@@ -6,7 +6,11 @@ import { freePort } from '../next-start';
 export async function startPrimaryKeyServer(partId: number): Promise<{ url: string; child: ChildProcess }> {
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
-  const child = spawn(path.join(__dirname, '../../node_modules/.bin/tsx'), ['--conditions=react-server', path.join(__dirname, 'primary-key-server.ts'), String(port), String(partId)], { stdio: ['ignore', 'inherit', 'inherit'] });
+  const child = spawn(
+    path.join(__dirname, '../../node_modules/.bin/tsx'),
+    ['--conditions=react-server', path.join(__dirname, 'primary-key-server.ts'), String(port), String(partId)],
+    { stdio: ['ignore', 'inherit', 'inherit'] },
+  );
   for (let i = 0; i < 100; i++) {
     if (child.exitCode !== null) throw new Error('the primary-key server exited early');
     try {
@@ -19,4 +23,3 @@ export async function startPrimaryKeyServer(partId: number): Promise<{ url: stri
   child.kill('SIGKILL');
   throw new Error('the primary-key server did not answer in time');
 }
-

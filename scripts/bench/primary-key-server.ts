@@ -9,7 +9,14 @@ import { getEnv } from '../../server/env';
 const [port, partId] = process.argv.slice(2).map(Number);
 const env = getEnv();
 // The app's pool size, so both servers put the bench's connections onto as many database sessions.
-const pool = mariadb.createPool({ host: env.DB_HOST, port: env.DB_PORT, user: env.DB_USER, password: env.DB_PASSWORD, database: env.DB_NAME, connectionLimit: env.DB_POOL_MAX });
+const pool = mariadb.createPool({
+  host: env.DB_HOST,
+  port: env.DB_PORT,
+  user: env.DB_USER,
+  password: env.DB_PASSWORD,
+  database: env.DB_NAME,
+  connectionLimit: env.DB_POOL_MAX,
+});
 
 createServer((req, res) => {
   if (req.method === 'POST') {

@@ -30,13 +30,23 @@ export async function loadDemo(people: People): Promise<void> {
   const scales = new Map<string, Scale>();
   for (const s of DEMO_SCALES) {
     const connection = s.name.includes('serial')
-      ? { kind: 'serial' as const, baudRate: 9600, dataBits: 8 as const, parity: 'none' as const, stopBits: 1 as const, lineFormat: 'signed-unit-flag', mode: 'continuous' as const, pollIntervalMs: 200 }
+      ? {
+          kind: 'serial' as const,
+          baudRate: 9600,
+          dataBits: 8 as const,
+          parity: 'none' as const,
+          stopBits: 1 as const,
+          lineFormat: 'signed-unit-flag',
+          mode: 'continuous' as const,
+          pollIntervalMs: 200,
+        }
       : { kind: 'simulator' as const, settleMs: 250, driftPerMinute: 0, rateHz: 20 };
     const dto = await createScale({ input: { ...s, unit: 'g', connection } });
     scales.set(s.name, (await Scale.findByPk(dto.id))!);
   }
   for (const c of DEMO_CONTAINERS) await createContainer({ input: { ...c, unit: 'g' } });
-  for (const w of DEMO_TEST_WEIGHTS) await createTestWeight({ input: { ...w, unit: 'g', certificateNumber: `CMW-CAL-${w.identifier.slice(7)}`, dueAt: daysFromToday(300) } });
+  for (const w of DEMO_TEST_WEIGHTS)
+    await createTestWeight({ input: { ...w, unit: 'g', certificateNumber: `CMW-CAL-${w.identifier.slice(7)}`, dueAt: daysFromToday(300) } });
   await calibrateAll(scales, people.quality);
 
   const parts = new Map<string, Part>();
@@ -44,14 +54,25 @@ export async function loadDemo(people: People): Promise<void> {
     const dto = await createPart({ input: { partNumber: p.partNumber, description: p.description, countingMethod: 'scale' } });
     parts.set(p.partNumber, (await Part.findByPk(dto.id))!);
     await createBin({ input: { code: p.bin, partId: dto.id, containerId: null, bookQuantity: p.stock, abcClass: p.abc }, by: people.clerk });
-    await demoSamples(dto.id, p, scales.get('Bench 1 · fine')!, p.apw < 0.2 ? scales.get('Bench 1 · fine')! : scales.get('Bench 2 · kitting')!, people.operator);
+    await demoSamples(
+      dto.id,
+      p,
+      scales.get('Bench 1 · fine')!,
+      p.apw < 0.2 ? scales.get('Bench 1 · fine')! : scales.get('Bench 2 · kitting')!,
+      people.operator,
+    );
   }
   for (const h of DEMO_HAND_PARTS) await createPart({ input: { ...h, countingMethod: 'hand' } });
   await demoHeldSample(parts, scales.get('Bench 1 · fine')!, people.operator);
 
   const kits = [];
   for (const k of DEMO_KITS) {
-    const components = k.lines.map(([pn, quantity, toleranceBelow, toleranceAbove]) => ({ partId: parts.get(pn)!.id, quantity, toleranceBelow, toleranceAbove }));
+    const components = k.lines.map(([pn, quantity, toleranceBelow, toleranceAbove]) => ({
+      partId: parts.get(pn)!.id,
+      quantity,
+      toleranceBelow,
+      toleranceAbove,
+    }));
     kits.push((await createKit({ input: { code: k.code, revision: k.revision, description: k.description, components }, by: people.planner })).kit);
   }
   const { order: endcaps } = await createOrder({ input: { kitId: kits[0].id, quantity: 40, dueDate: daysFromToday(7) }, by: people.planner });
@@ -83,8 +104,14 @@ async function calibrateAll(scales: Map<string, Scale>, quality: SessionUser): P
     const e = Number(scale.verificationIntervalG);
     const fails = scale.name.includes('serial');
     const loads = defaultTestLoads(scale.accuracyClass, e, Number(scale.capacityG)).map((l) => Math.max(1, roundTo(l, 1)));
-    const usable = loads.filter((l) => weightsFor(l, set).length && Math.abs(set.filter((w) => weightsFor(l, set).includes(w.id)).reduce((a, w) => a + Number(w.nominalG), 0) - l) < 1e-9);
-    const points = usable.map((load, i) => ({ load, indication: load + (fails && i === usable.length - 1 ? 4 * e : i % 2 ? e * 0.5 : 0), testWeightIds: weightsFor(load, set) }));
+    const usable = loads.filter(
+      (l) => weightsFor(l, set).length && Math.abs(set.filter((w) => weightsFor(l, set).includes(w.id)).reduce((a, w) => a + Number(w.nominalG), 0) - l) < 1e-9,
+    );
+    const points = usable.map((load, i) => ({
+      load,
+      indication: load + (fails && i === usable.length - 1 ? 4 * e : i % 2 ? e * 0.5 : 0),
+      testWeightIds: weightsFor(load, set),
+    }));
     const mid = usable[Math.floor(usable.length / 2)];
     await recordCalibration({
       scaleId: scale.id,
@@ -114,14 +141,20 @@ async function demoSamples(partId: number, spec: { apw: number; spread: number }
   const pieces = Array.from({ length: 10 }, () => apw * (1 + spread * random.normal()));
   let shown = 0;
   const increments = pieces.map((_, i) => {
-    const reading = roundTo(pieces.slice(0, i + 1).reduce((a, b) => a + b, 0), d);
+    const reading = roundTo(
+      pieces.slice(0, i + 1).reduce((a, b) => a + b, 0),
+      d,
+    );
     const inc = reading - shown;
     shown = reading;
     return Number(inc.toFixed(6));
   });
   await recordSample({ partId, input: { scaleId: fine.id, unit: 'g', quantity: 10, netWeight: Number(shown.toFixed(6)), increments }, by });
   const n = Math.max(25, Math.ceil((1.2 * Number(bench.minLoadG)) / apw));
-  const net = roundTo(Array.from({ length: n }, () => apw * (1 + spread * random.normal())).reduce((a, b) => a + b, 0), Number(bench.divisionG));
+  const net = roundTo(
+    Array.from({ length: n }, () => apw * (1 + spread * random.normal())).reduce((a, b) => a + b, 0),
+    Number(bench.divisionG),
+  );
   await recordSample({ partId, input: { scaleId: bench.id, unit: 'g', quantity: n, netWeight: Number(net.toFixed(6)) }, by });
 }
 
@@ -135,7 +168,12 @@ async function demoHeldSample(parts: Map<string, Part>, fine: Scale, by: Session
 
 // The screws and standoffs of the released end-cap order counted at Bench 2, so the queue and
 // progress show work done and work waiting.
-async function demoCaptures(lines: Array<{ id: number; partId: number; required: number }>, parts: Map<string, Part>, bench: Scale, operator: SessionUser): Promise<void> {
+async function demoCaptures(
+  lines: Array<{ id: number; partId: number; required: number }>,
+  parts: Map<string, Part>,
+  bench: Scale,
+  operator: SessionUser,
+): Promise<void> {
   const byPart = new Map([...parts.values()].map((p) => [p.id, p]));
   const counted = ['CMW-SCR-M3X8', 'CMW-STD-M3X12'];
   for (const line of lines.filter((l) => counted.includes(byPart.get(l.partId)!.partNumber))) {
@@ -145,7 +183,22 @@ async function demoCaptures(lines: Array<{ id: number; partId: number; required:
     const gross = roundTo(line.required * spec.apw, Number(bench.divisionG)) + 3.8;
     await recordCount({
       idempotencyKey: `demo-capture-line-${line.id}`,
-      input: { purpose: 'kit_line', orderLineId: line.id, partId: part!.id, scaleId: bench.id, containerId: null, unit: 'g', gross, tare: 3.8, sample: { quantity: 20, netWeight: sampleNet }, sampleOnPan: true, targetQuantity: line.required, stable: true, binId: null, binVersion: null },
+      input: {
+        purpose: 'kit_line',
+        orderLineId: line.id,
+        partId: part!.id,
+        scaleId: bench.id,
+        containerId: null,
+        unit: 'g',
+        gross,
+        tare: 3.8,
+        sample: { quantity: 20, netWeight: sampleNet },
+        sampleOnPan: true,
+        targetQuantity: line.required,
+        stable: true,
+        binId: null,
+        binVersion: null,
+      },
       by: operator,
     });
   }
@@ -169,15 +222,28 @@ async function demoAudit(parts: Map<string, Part>, bench: Scale, people: People)
     const answer = await recordCount({
       idempotencyKey: `demo-bag-${i + 1}`,
       input: {
-        purpose: 'part', partId: parts.get(spec.partNumber)!.id, scaleId: bench.id, containerId: null, unit: 'g',
-        gross: Number(roundTo(bagTare + sample + rest, d).toFixed(6)), tare: bagTare, sample: { quantity: 20, netWeight: Number(roundTo(sample, d).toFixed(6)) },
-        sampleOnPan: true, targetQuantity: null, stable: true, binId: null, binVersion: null,
+        purpose: 'part',
+        partId: parts.get(spec.partNumber)!.id,
+        scaleId: bench.id,
+        containerId: null,
+        unit: 'g',
+        gross: Number(roundTo(bagTare + sample + rest, d).toFixed(6)),
+        tare: bagTare,
+        sample: { quantity: 20, netWeight: Number(roundTo(sample, d).toFixed(6)) },
+        sampleOnPan: true,
+        targetQuantity: null,
+        stable: true,
+        binId: null,
+        binVersion: null,
       },
       by: people.operator,
     });
     truth.set(answer.count.id, pieces);
   }
-  const audit = await createAudit({ input: { population: { from: startedOn, to: daysFromToday(0), purpose: 'part' }, level: 'II', aql: 2.5, seed: 20261202 }, by: people.quality });
+  const audit = await createAudit({
+    input: { population: { from: startedOn, to: daysFromToday(0), purpose: 'part' }, level: 'II', aql: 2.5, seed: 20261202 },
+    by: people.quality,
+  });
   for (const item of audit.items) await recordHandCount({ auditId: audit.id, itemId: item.id, handCount: truth.get(item.countEventId)!, by: people.quality });
 }
 
@@ -187,13 +253,27 @@ async function demoVarianceWaiting(parts: Map<string, Part>, bench: Scale, clerk
   const spec = DEMO_PARTS.find((p) => p.partNumber === 'CMW-NUT-M3')!;
   const bin = (await Bin.findOne({ where: { code: spec.bin } }))!;
   const d = Number(bench.divisionG);
-  const weigh = (n: number) => roundTo(Array.from({ length: n }, () => spec.apw * (1 + spec.spread * random.normal())).reduce((a, b) => a + b, 0), d);
+  const weigh = (n: number) =>
+    roundTo(
+      Array.from({ length: n }, () => spec.apw * (1 + spec.spread * random.normal())).reduce((a, b) => a + b, 0),
+      d,
+    );
   await recordCount({
     idempotencyKey: 'demo-bin-recount-nuts',
     input: {
-      purpose: 'bin', partId: parts.get(spec.partNumber)!.id, scaleId: bench.id, containerId: null, unit: 'g',
-      gross: Number(weigh(spec.stock - 130).toFixed(6)), tare: 0, sample: { quantity: 50, netWeight: Number(weigh(50).toFixed(6)) },
-      sampleOnPan: false, targetQuantity: null, stable: true, binId: bin.id, binVersion: bin.version,
+      purpose: 'bin',
+      partId: parts.get(spec.partNumber)!.id,
+      scaleId: bench.id,
+      containerId: null,
+      unit: 'g',
+      gross: Number(weigh(spec.stock - 130).toFixed(6)),
+      tare: 0,
+      sample: { quantity: 50, netWeight: Number(weigh(50).toFixed(6)) },
+      sampleOnPan: false,
+      targetQuantity: null,
+      stable: true,
+      binId: bin.id,
+      binVersion: bin.version,
     },
     by: clerk,
   });

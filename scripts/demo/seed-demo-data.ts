@@ -12,7 +12,10 @@ export async function seedDemoData(password: string): Promise<'loaded' | 'skippe
   const passwordHash = await hashPassword(password);
   const users = await db.transaction(async (transaction) => {
     await SiteSettings.update({ siteName: DEMO_SITE_NAME }, { where: { id: 1 }, transaction });
-    return User.bulkCreate(DEMO_USERS.map((u) => ({ email: demoEmail(u.role), name: u.name, role: u.role, passwordHash })), { transaction });
+    return User.bulkCreate(
+      DEMO_USERS.map((u) => ({ email: demoEmail(u.role), name: u.name, role: u.role, passwordHash })),
+      { transaction },
+    );
   });
   const people = Object.fromEntries(users.map((u) => [u.role, { id: u.id, email: u.email, name: u.name, role: u.role }])) as Parameters<typeof loadDemo>[0];
   await loadDemo(people);

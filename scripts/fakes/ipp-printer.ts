@@ -48,7 +48,17 @@ function reply(request: IppMessage, statusCode: string, groups: Partial<IppMessa
   });
 }
 
-export async function startIppPrinter({ port, dir, host = '127.0.0.1', queues = ['labels'] }: { port: number; dir: string; host?: string; queues?: string[] }): Promise<IppPrinterFake> {
+export async function startIppPrinter({
+  port,
+  dir,
+  host = '127.0.0.1',
+  queues = ['labels'],
+}: {
+  port: number;
+  dir: string;
+  host?: string;
+  queues?: string[];
+}): Promise<IppPrinterFake> {
   mkdirSync(dir, { recursive: true });
   let nextJobId = 1;
   const handle = (req: IncomingMessage, body: Buffer): Buffer => {

@@ -7,7 +7,10 @@ async function main(): Promise<void> {
   const root = path.resolve(__dirname, '../..');
   const smtp = await startSmtpSink({ port: Number(process.env.SMTP_PORT ?? 2525), dir: process.env.MAIL_SINK_DIR ?? path.join(root, '.data/dev/mail') });
   console.log(`[fakes] SMTP sink on 127.0.0.1:${smtp.port}, messages in ${path.relative(root, smtp.dir)}`);
-  const printer = await startIppPrinter({ port: Number(process.env.PRINTER_PORT ?? 8631), dir: process.env.PRINT_SINK_DIR ?? path.join(root, '.data/dev/printed') });
+  const printer = await startIppPrinter({
+    port: Number(process.env.PRINTER_PORT ?? 8631),
+    dir: process.env.PRINT_SINK_DIR ?? path.join(root, '.data/dev/printed'),
+  });
   console.log(`[fakes] IPP printer at ${printer.url}, documents in ${path.relative(root, printer.dir)}`);
   const stop = async () => {
     await smtp.close();

@@ -87,7 +87,14 @@ export async function startSession(userId: number): Promise<void> {
   const { sessionHours } = await getSettings();
   const sid = randomBytes(32).toString('base64url');
   const now = Date.now();
-  await UserSession.create({ tokenHash: hashSid(sid), userId, lastSeenAt: new Date(now), expiresAt: new Date(now + sessionHours * 3_600_000), endedAt: null, endReason: null });
+  await UserSession.create({
+    tokenHash: hashSid(sid),
+    userId,
+    lastSeenAt: new Date(now),
+    expiresAt: new Date(now + sessionHours * 3_600_000),
+    endedAt: null,
+    endReason: null,
+  });
   const session = await getSession();
   session.sid = sid;
   session.seenAt = now;
@@ -107,7 +114,10 @@ export async function endSession(): Promise<void> {
 /** Ends every open session of a person (password changed, switched off, role changed, or asked for). */
 export async function endSessionsOf(userId: number, reason: SessionEndReason, transaction?: Transaction): Promise<number> {
   getDb();
-  const [ended] = await UserSession.update({ endedAt: new Date(), endReason: reason }, { where: { userId, endedAt: null, expiresAt: { [Op.gt]: new Date() } }, transaction });
+  const [ended] = await UserSession.update(
+    { endedAt: new Date(), endReason: reason },
+    { where: { userId, endedAt: null, expiresAt: { [Op.gt]: new Date() } }, transaction },
+  );
   return ended;
 }
 

@@ -16,8 +16,7 @@ const UPLOAD_ENVELOPE_BYTES = 64 * 1024;
 // of the 413 (the "lingering close" of RFC 9112 §9.6). Past it, the connection is simply cut.
 const DISCARD_LIMIT = 16 * 1024 * 1024;
 
-const tooLarge = (limit: number) =>
-  new AppError('payload_too_large', `The request body is larger than this address takes (${Math.round(limit / 1024)} KB)`);
+const tooLarge = (limit: number) => new AppError('payload_too_large', `The request body is larger than this address takes (${Math.round(limit / 1024)} KB)`);
 
 /** The body's bytes, refused (413) past `limit`: from its declared length at once, else once it passes. */
 export async function readBodyBytes(req: Request, limit: number): Promise<Buffer> {

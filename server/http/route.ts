@@ -35,10 +35,12 @@ export interface RouteContext<A extends Access, B, Q, P> {
 // carries the request's id and no-store unless the handler chose its own caching: answers about people
 // and stock are never kept by a browser or a proxy on the way.
 // A handler returns a Response, a plain object (200 JSON) or nothing (204).
-export function route<A extends Access, B extends z.ZodType | undefined = undefined, Q extends z.ZodType | undefined = undefined, P extends z.ZodType | undefined = undefined>(
-  spec: RouteSpec<A, B, Q, P>,
-  handler: (ctx: RouteContext<A, B, Q, P>) => Promise<unknown>,
-) {
+export function route<
+  A extends Access,
+  B extends z.ZodType | undefined = undefined,
+  Q extends z.ZodType | undefined = undefined,
+  P extends z.ZodType | undefined = undefined,
+>(spec: RouteSpec<A, B, Q, P>, handler: (ctx: RouteContext<A, B, Q, P>) => Promise<unknown>) {
   return async (req: NextRequest, ctx: { params: Promise<Record<string, string | string[]>> }): Promise<Response> => {
     const requestId = requestIdOf(req.headers);
     const res = await answer(req, ctx, requestId);
@@ -51,7 +53,11 @@ export function route<A extends Access, B extends z.ZodType | undefined = undefi
     try {
       rejectCrossSite(req);
       const user =
-        spec.access === 'public' ? await getCurrentUser() : spec.access === 'signed-in' ? await requireUser() : await requirePermission(spec.access as Permission);
+        spec.access === 'public'
+          ? await getCurrentUser()
+          : spec.access === 'signed-in'
+            ? await requireUser()
+            : await requirePermission(spec.access as Permission);
       if (user) await keepSessionFresh();
       const params = parseWith(spec.params, await ctx.params, 'Bad address');
       const query = parseWith(spec.query, Object.fromEntries(req.nextUrl.searchParams), 'Bad query');
@@ -100,6 +106,9 @@ function isJsonMediaType(header: string | null): boolean {
   if (!header) return false;
   const [type, ...params] = header.split(';').map((p) => p.trim().toLowerCase());
   if (type !== 'application/json' && !/^application\/[a-z0-9.!#$&^_-]+\+json$/.test(type)) return false;
-  const charset = params.find((p) => p.startsWith('charset='))?.slice('charset='.length).replace(/"/g, '');
+  const charset = params
+    .find((p) => p.startsWith('charset='))
+    ?.slice('charset='.length)
+    .replace(/"/g, '');
   return charset === undefined || charset === 'utf-8';
 }

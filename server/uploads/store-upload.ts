@@ -14,10 +14,12 @@ function uploadDir(): string {
 // to a temporary file first so a half-written upload is never served.
 export async function storeUpload(file: unknown, allowed: readonly FileKind[], field = 'file'): Promise<{ name: string; kind: FileKind }> {
   if (!(file instanceof Blob)) throw new AppError('validation_failed', 'Attach a file', { fields: { [field]: 'a file is required' } });
-  if (file.size > MAX_UPLOAD_BYTES) throw new AppError('validation_failed', 'The file is too large', { fields: { [field]: `at most ${MAX_UPLOAD_BYTES / 1024 / 1024} MB` } });
+  if (file.size > MAX_UPLOAD_BYTES)
+    throw new AppError('validation_failed', 'The file is too large', { fields: { [field]: `at most ${MAX_UPLOAD_BYTES / 1024 / 1024} MB` } });
   const bytes = new Uint8Array(await file.arrayBuffer());
   const kind = detectFileKind(bytes);
-  if (!kind || !allowed.includes(kind)) throw new AppError('validation_failed', 'That kind of file is not accepted here', { fields: { [field]: `must be ${allowed.join(', ').toUpperCase()}` } });
+  if (!kind || !allowed.includes(kind))
+    throw new AppError('validation_failed', 'That kind of file is not accepted here', { fields: { [field]: `must be ${allowed.join(', ').toUpperCase()}` } });
   const dir = uploadDir();
   await mkdir(dir, { recursive: true });
   const name = `${randomUUID()}.${kind === 'jpeg' ? 'jpg' : kind}`;

@@ -7,7 +7,12 @@ import { signedIn } from '../helpers/http';
 
 function childPids(pid: number): number[] {
   try {
-    return execFileSync('pgrep', ['-P', String(pid)]).toString().trim().split('\n').filter(Boolean).map(Number);
+    return execFileSync('pgrep', ['-P', String(pid)])
+      .toString()
+      .trim()
+      .split('\n')
+      .filter(Boolean)
+      .map(Number);
   } catch {
     return []; // pgrep exits 1 when there are none
   }
@@ -36,7 +41,11 @@ describe('several app processes', () => {
       process.kill(victim, 'SIGKILL');
       // A connection handed to the killed process before the primary heard of its end is lost (reset, or
       // never answered), as any crash loses its connections; from then on the other one serves alone.
-      const live = () => fetch(`${app.url}/api/v1/health/live`, { headers: { connection: 'close' }, signal: AbortSignal.timeout(5_000) }).then((r) => r.status, () => 'lost');
+      const live = () =>
+        fetch(`${app.url}/api/v1/health/live`, { headers: { connection: 'close' }, signal: AbortSignal.timeout(5_000) }).then(
+          (r) => r.status,
+          () => 'lost',
+        );
       await expect.poll(live, { timeout: 10_000 }).toBe(200);
       await expect.poll(() => childPids(primary).filter((p) => p !== survivor && p !== victim).length, { timeout: 30_000 }).toBe(1);
 

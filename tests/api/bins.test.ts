@@ -20,7 +20,18 @@ async function newBin(agent: Agent, partId: number, bookQuantity: number, abcCla
 
 // A bin count: the bulk weighed apart from a 20-piece sample of 0.5 g parts (10 g).
 function binCapture(partId: number, scaleId: number, bin: { id: number; version: number }, pieces: number) {
-  return { purpose: 'bin', binId: bin.id, binVersion: bin.version, partId, scaleId, gross: pieces * 0.5, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true };
+  return {
+    purpose: 'bin',
+    binId: bin.id,
+    binVersion: bin.version,
+    partId,
+    scaleId,
+    gross: pieces * 0.5,
+    tare: 0,
+    sample: { quantity: 20, netWeight: 10 },
+    sampleOnPan: false,
+    stable: true,
+  };
 }
 
 describe('bins and cycle counts', () => {
@@ -44,7 +55,10 @@ describe('bins and cycle counts', () => {
     const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
     const bin = await newBin(clerk.agent, part.id, 1000);
     // 997 counted: 3 pieces, 0.3 % — within the default limits (5 pcs and 2 %).
-    const small = await clerk.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, bin, 997));
+    const small = await clerk.agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send(binCapture(part.id, scale.id, bin, 997));
     expect(small.status).toBe(201);
     expect(small.body.binCount).toMatchObject({ bookQuantity: 1000, counted: 997, variance: -3, status: 'applied' });
     testDb();
@@ -52,7 +66,10 @@ describe('bins and cycle counts', () => {
     expect(afterSmall!.bookQuantity).toBe(997);
 
     // 900 counted: 97 pieces, 9.7 % — beyond both limits: pending, book unchanged.
-    const large = await clerk.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, { id: bin.id, version: afterSmall!.version }, 900));
+    const large = await clerk.agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send(binCapture(part.id, scale.id, { id: bin.id, version: afterSmall!.version }, 900));
     expect(large.body.binCount).toMatchObject({ variance: -97, status: 'pending' });
     expect((await Bin.findByPk(bin.id))!.bookQuantity).toBe(997);
     const pending = await quality.agent.get(`/api/v1/bin-counts?status=pending&binId=${bin.id}`);
@@ -81,7 +98,10 @@ describe('bins and cycle counts', () => {
     const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
     const bin = await newBin(admin.agent, part.id, 1000);
     // Book 1 000, counted 500 by a quality engineer, who then tries to approve it.
-    const own = await quality.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, bin, 500));
+    const own = await quality.agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send(binCapture(part.id, scale.id, bin, 500));
     expect(own.body.binCount.status).toBe('pending');
     const self = await quality.agent.post(`/api/v1/bin-counts/${own.body.binCount.id}/decision`).send({ decision: 'approve' });
     expect(self.status).toBe(403);
@@ -95,7 +115,10 @@ describe('bins and cycle counts', () => {
     expect(settings.fourEyesVariances).toBe(true);
     const off = await admin.agent.patch('/api/v1/settings').send({ fourEyesVariances: false, version: settings.version });
     try {
-      const again = await quality.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, { id: bin.id, version: (await Bin.findByPk(bin.id))!.version }, 500));
+      const again = await quality.agent
+        .post('/api/v1/counts')
+        .set('Idempotency-Key', randomUUID())
+        .send(binCapture(part.id, scale.id, { id: bin.id, version: (await Bin.findByPk(bin.id))!.version }, 500));
       expect((await quality.agent.post(`/api/v1/bin-counts/${again.body.binCount.id}/decision`).send({ decision: 'reject' })).status).toBe(200);
     } finally {
       await admin.agent.patch('/api/v1/settings').send({ fourEyesVariances: true, version: off.body.settings.version });
@@ -108,11 +131,16 @@ describe('bins and cycle counts', () => {
     const part = await createPart({ pieceSpread: 0.001 });
     const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
     const bin = await newBin(clerk.agent, part.id, 1000);
-    const large = await clerk.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, bin, 900));
+    const large = await clerk.agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send(binCapture(part.id, scale.id, bin, 900));
     expect(large.body.binCount.status).toBe('pending');
     testDb();
     expect((await Bin.findByPk(bin.id))!.lastCountedAt).not.toBeNull();
-    const rejected = await planner.agent.post(`/api/v1/bin-counts/${large.body.binCount.id}/decision`).send({ decision: 'reject', note: 'the tote was half on the pan' });
+    const rejected = await planner.agent
+      .post(`/api/v1/bin-counts/${large.body.binCount.id}/decision`)
+      .send({ decision: 'reject', note: 'the tote was half on the pan' });
     expect(rejected.status).toBe(200);
     expect(rejected.body.binCount).toMatchObject({ status: 'rejected', bookQuantity: 1000 });
     expect((await Bin.findByPk(bin.id))!.lastCountedAt).toBeNull();
@@ -130,13 +158,23 @@ describe('bins and cycle counts', () => {
     const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
     const bin = await newBin(clerk.agent, part.id, 1000);
     // A released order holds 800 of the 1 000.
-    const kit = await planner.agent.post('/api/v1/kits').send({ code: `SHORT-${randomUUID().slice(0, 8)}`.toUpperCase(), revision: 'A', description: 'Holds most of a bin', components: [{ partId: part.id, quantity: 8 }] });
+    const kit = await planner.agent.post('/api/v1/kits').send({
+      code: `SHORT-${randomUUID().slice(0, 8)}`.toUpperCase(),
+      revision: 'A',
+      description: 'Holds most of a bin',
+      components: [{ partId: part.id, quantity: 8 }],
+    });
     const order = await planner.agent.post('/api/v1/orders').send({ kitId: kit.body.kit.id, quantity: 100 });
     expect((await planner.agent.post(`/api/v1/orders/${order.body.order.id}/release`).send({ version: order.body.order.version })).status).toBe(200);
     // Counted 600, and the shortfall approved: 600 on hand against 800 held.
-    const count = await clerk.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, bin, 600));
+    const count = await clerk.agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send(binCapture(part.id, scale.id, bin, 600));
     expect(count.body.binCount.status).toBe('pending');
-    expect((await planner.agent.post(`/api/v1/bin-counts/${count.body.binCount.id}/decision`).send({ decision: 'approve', note: 'tote was split' })).status).toBe(200);
+    expect(
+      (await planner.agent.post(`/api/v1/bin-counts/${count.body.binCount.id}/decision`).send({ decision: 'approve', note: 'tote was split' })).status,
+    ).toBe(200);
     testDb();
     expect(await PartStock.findByPk(part.id)).toMatchObject({ onHand: 600, reserved: 800 });
     // The planner heard of the variance waiting, then of the shortage its approval made.
@@ -153,8 +191,14 @@ describe('bins and cycle counts', () => {
     const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
     const bin = await newBin(a.agent, part.id, 500);
     const [first, second] = await Promise.all([
-      a.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, bin, 498)),
-      b.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, bin, 499)),
+      a.agent
+        .post('/api/v1/counts')
+        .set('Idempotency-Key', randomUUID())
+        .send(binCapture(part.id, scale.id, bin, 498)),
+      b.agent
+        .post('/api/v1/counts')
+        .set('Idempotency-Key', randomUUID())
+        .send(binCapture(part.id, scale.id, bin, 499)),
     ]);
     const statuses = [first.status, second.status].sort();
     expect(statuses).toEqual([201, 409]);
@@ -162,7 +206,10 @@ describe('bins and cycle counts', () => {
     expect(loser.body.error.code).toBe('stale_version');
     testDb();
     const fresh = await Bin.findByPk(bin.id);
-    const retry = await b.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, { id: bin.id, version: fresh!.version }, 499));
+    const retry = await b.agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send(binCapture(part.id, scale.id, { id: bin.id, version: fresh!.version }, 499));
     expect(retry.status).toBe(201);
     const final = await Bin.findByPk(bin.id);
     expect(final!.bookQuantity).toBe(499);
@@ -175,7 +222,10 @@ describe('bins and cycle counts', () => {
     const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
     const counted = await newBin(clerk.agent, part.id, 100, 'A');
     const waiting = await newBin(clerk.agent, part.id, 100, 'C');
-    const capture = await clerk.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(binCapture(part.id, scale.id, counted, 100));
+    const capture = await clerk.agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send(binCapture(part.id, scale.id, counted, 100));
     expect(capture.status, JSON.stringify(capture.body)).toBe(201);
     const due = (await clerk.agent.get('/api/v1/bins/due')).body.bins.map((x: { id: number }) => x.id);
     expect(due).toContain(waiting.id);

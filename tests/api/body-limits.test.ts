@@ -4,15 +4,26 @@ import { createPart, createUser, TEST_PASSWORD } from '../helpers/db';
 import { anonymous, baseUrl, signedIn } from '../helpers/http';
 
 // A raw request, so the body can be sent without a declared length (chunked), as an attacker may.
-function chunkedPost(path: string, chunks: number, chunkBytes: number, { method = 'POST', headers = {} as Record<string, string> } = {}): Promise<{ status: number; body: string }> {
+function chunkedPost(
+  path: string,
+  chunks: number,
+  chunkBytes: number,
+  { method = 'POST', headers = {} as Record<string, string> } = {},
+): Promise<{ status: number; body: string }> {
   return new Promise((resolve, reject) => {
-    const req = http.request(new URL(path, baseUrl()), { method, headers: { 'Content-Type': 'application/json', 'Transfer-Encoding': 'chunked', ...headers } }, (res) => {
-      let body = '';
-      res.on('data', (d) => (body += d));
-      res.on('end', () => resolve({ status: res.statusCode ?? 0, body }));
-    });
+    const req = http.request(
+      new URL(path, baseUrl()),
+      { method, headers: { 'Content-Type': 'application/json', 'Transfer-Encoding': 'chunked', ...headers } },
+      (res) => {
+        let body = '';
+        res.on('data', (d) => (body += d));
+        res.on('end', () => resolve({ status: res.statusCode ?? 0, body }));
+      },
+    );
     // The server may answer and close before the whole body is out: that is the point.
-    req.on('error', (err) => ((err as NodeJS.ErrnoException).code === 'EPIPE' || (err as NodeJS.ErrnoException).code === 'ECONNRESET' ? undefined : reject(err)));
+    req.on('error', (err) =>
+      (err as NodeJS.ErrnoException).code === 'EPIPE' || (err as NodeJS.ErrnoException).code === 'ECONNRESET' ? undefined : reject(err),
+    );
     const piece = `{"k":"${'x'.repeat(chunkBytes - 8)}"}`;
     let sent = 0;
     const more = () => {
@@ -28,7 +39,10 @@ function chunkedPost(path: string, chunks: number, chunkBytes: number, { method 
 
 describe('request body limits', () => {
   it('refuses a sign-in body over its small limit with 413 from its declared length, and names the limit', async () => {
-    const res = await anonymous().post('/api/v1/session').set('Content-Type', 'application/json').send(JSON.stringify({ email: 'a@example.test', password: 'x'.repeat(20_000) }));
+    const res = await anonymous()
+      .post('/api/v1/session')
+      .set('Content-Type', 'application/json')
+      .send(JSON.stringify({ email: 'a@example.test', password: 'x'.repeat(20_000) }));
     expect(res.status).toBe(413);
     expect(res.body.error).toMatchObject({ code: 'payload_too_large', message: expect.stringContaining('8 KB') });
     expect(res.headers['cache-control']).toBe('no-store');
@@ -42,7 +56,10 @@ describe('request body limits', () => {
   it('stops reading an upload sent without a length once it passes the upload limit, before parsing it', async () => {
     const user = await createUser('clerk');
     const signIn = await anonymous().post('/api/v1/session').send({ email: user.email, password: TEST_PASSWORD });
-    const cookie = ([] as string[]).concat(signIn.headers['set-cookie'] ?? []).map((c) => c.split(';')[0]).join('; ');
+    const cookie = ([] as string[])
+      .concat(signIn.headers['set-cookie'] ?? [])
+      .map((c) => c.split(';')[0])
+      .join('; ');
     const part = await createPart();
     const res = await chunkedPost(`/api/v1/parts/${part.id}/photo`, 6 * 1024, 1024, {
       method: 'PUT',
@@ -55,16 +72,25 @@ describe('request body limits', () => {
   it('gets its 413 to a client that writes the whole oversized body before reading, on a connection that then closes', async () => {
     // supertest asks for Connection: close and reads only once its 6 MB are written.
     const { agent } = await signedIn('planner');
-    const res = await agent.post('/api/v1/kits').set('Content-Type', 'application/json').send(`${' '.repeat(6_000_000)}{}`);
+    const res = await agent
+      .post('/api/v1/kits')
+      .set('Content-Type', 'application/json')
+      .send(`${' '.repeat(6_000_000)}{}`);
     expect(res.status).toBe(413);
   });
 
   it('takes ordinary JSON up to 256 KB elsewhere, and refuses deeper nesting or a flood of keys', async () => {
     const { agent } = await signedIn('planner');
-    const big = await agent.post('/api/v1/kits').set('Content-Type', 'application/json').send(JSON.stringify({ code: 'X', pad: 'y'.repeat(300 * 1024) }));
+    const big = await agent
+      .post('/api/v1/kits')
+      .set('Content-Type', 'application/json')
+      .send(JSON.stringify({ code: 'X', pad: 'y'.repeat(300 * 1024) }));
     expect(big.status).toBe(413);
     // Under the limit the body is read and judged on what it says.
-    const within = await agent.post('/api/v1/kits').set('Content-Type', 'application/json').send(JSON.stringify({ code: 'X', description: 'y'.repeat(200 * 1024) }));
+    const within = await agent
+      .post('/api/v1/kits')
+      .set('Content-Type', 'application/json')
+      .send(JSON.stringify({ code: 'X', description: 'y'.repeat(200 * 1024) }));
     expect(within.status).toBe(400);
     expect(within.body.error.fields).toHaveProperty('description');
     let deep: unknown = 1;
@@ -81,7 +107,10 @@ describe('request body limits', () => {
   it('refuses text that is not well-formed Unicode instead of storing it as "?", and takes a real pair', async () => {
     const { agent } = await signedIn('planner');
     // Written as JSON escapes: a lone low surrogate, then a proper pair (U+1F529).
-    const lone = await agent.post('/api/v1/kits').set('Content-Type', 'application/json').send('{"code":"KX","revision":"A","description":"bolt \\udc00 tray","components":[]}');
+    const lone = await agent
+      .post('/api/v1/kits')
+      .set('Content-Type', 'application/json')
+      .send('{"code":"KX","revision":"A","description":"bolt \\udc00 tray","components":[]}');
     expect(lone.status).toBe(400);
     expect(lone.body.error.message).toMatch(/not well-formed Unicode/);
     const key = await agent.post('/api/v1/kits').set('Content-Type', 'application/json').send('{"\\ud83d":1}');

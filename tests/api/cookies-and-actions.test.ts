@@ -9,7 +9,9 @@ import { baseUrl, signedIn } from '../helpers/http';
 // The one server action (sign out), by the id the build gave it.
 function signOutActionId(): string {
   const manifest = JSON.parse(readFileSync(path.resolve(__dirname, '../../.next/server/server-reference-manifest.json'), 'utf8'));
-  const ids = Object.entries(manifest.node as Record<string, { exportedName?: string }>).filter(([, v]) => v.exportedName === 'signOutAction').map(([id]) => id);
+  const ids = Object.entries(manifest.node as Record<string, { exportedName?: string }>)
+    .filter(([, v]) => v.exportedName === 'signOutAction')
+    .map(([id]) => id);
   expect(ids).toHaveLength(1);
   return ids[0];
 }
@@ -30,9 +32,10 @@ describe('cookies behind https, and server actions from another site', () => {
     }
   });
 
-  it("refuses a server action from another site with 403: a cross-site sign-out does nothing, a same-site one works", async () => {
+  it('refuses a server action from another site with 403: a cross-site sign-out does nothing, a same-site one works', async () => {
     const { agent } = await signedIn('operator');
-    const action = (origin: string) => agent.post('/').set('Next-Action', signOutActionId()).set('Origin', origin).set('Content-Type', 'text/plain;charset=UTF-8').send('[]');
+    const action = (origin: string) =>
+      agent.post('/').set('Next-Action', signOutActionId()).set('Origin', origin).set('Content-Type', 'text/plain;charset=UTF-8').send('[]');
 
     const forged = await action('https://evil.example');
     expect(forged.status).toBe(403);

@@ -9,7 +9,17 @@ function capture(agent: Agent, partId: number, scaleId: number, pieces: number) 
   return agent
     .post('/api/v1/counts')
     .set('Idempotency-Key', randomUUID())
-    .send({ purpose: 'part', partId, scaleId, unit: 'g', gross: pieces * 0.5, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true });
+    .send({
+      purpose: 'part',
+      partId,
+      scaleId,
+      unit: 'g',
+      gross: pieces * 0.5,
+      tare: 0,
+      sample: { quantity: 20, netWeight: 10 },
+      sampleOnPan: false,
+      stable: true,
+    });
 }
 
 describe('count log', () => {
@@ -30,11 +40,22 @@ describe('count log', () => {
     expect(rows.map((r) => r.count)).toEqual(['400', '40']);
     // The part number starts with "=": the cell is made plain text (OWASP CSV injection).
     expect(rows[0].part_number).toBe(`'${part.partNumber}`);
-    expect(rows[0]).toMatchObject({ purpose: 'part', scale: scale.name, counted_by: expect.stringMatching(/\S/), order: '', bin: '', net_g: '200', sample_pcs: '20', apw_g: '0.5' });
+    expect(rows[0]).toMatchObject({
+      purpose: 'part',
+      scale: scale.name,
+      counted_by: expect.stringMatching(/\S/),
+      order: '',
+      bin: '',
+      net_g: '200',
+      sample_pcs: '20',
+      apw_g: '0.5',
+    });
     expect(Number(rows[0].expanded_uncertainty_pcs_k2)).toBeGreaterThan(Number(rows[1].expanded_uncertainty_pcs_k2));
     expect(rows[0].counted_at_utc).toMatch(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/);
 
-    const notExact: Record<string, string>[] = parse((await agent.get('/api/v1/counts/export').query({ partNumber: part.partNumber, notExact: '1' })).text, { columns: true });
+    const notExact: Record<string, string>[] = parse((await agent.get('/api/v1/counts/export').query({ partNumber: part.partNumber, notExact: '1' })).text, {
+      columns: true,
+    });
     expect(notExact.map((r) => r.count)).toEqual(['400']);
     expect(notExact[0].exact).toBe('no');
     expect(notExact[0].warnings.split(' ')).toContain('count_not_exact');
@@ -49,9 +70,22 @@ describe('count log', () => {
     const res = await agent
       .post('/api/v1/counts')
       .set('Idempotency-Key', randomUUID())
-      .send({ purpose: 'bin', binId: bin.id, binVersion: bin.version, partId: part.id, scaleId: scale.id, gross: 15, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true });
+      .send({
+        purpose: 'bin',
+        binId: bin.id,
+        binVersion: bin.version,
+        partId: part.id,
+        scaleId: scale.id,
+        gross: 15,
+        tare: 0,
+        sample: { quantity: 20, netWeight: 10 },
+        sampleOnPan: false,
+        stable: true,
+      });
     expect(res.status).toBe(201);
-    const rows: Record<string, string>[] = parse((await agent.get('/api/v1/counts/export').query({ partNumber: part.partNumber, purpose: 'bin' })).text, { columns: true });
+    const rows: Record<string, string>[] = parse((await agent.get('/api/v1/counts/export').query({ partNumber: part.partNumber, purpose: 'bin' })).text, {
+      columns: true,
+    });
     expect(rows).toHaveLength(1);
     expect(rows[0]).toMatchObject({ purpose: 'bin', bin: bin.code, order: '', count: '30' });
   });

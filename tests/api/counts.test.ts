@@ -25,7 +25,10 @@ describe('POST /api/v1/counts', () => {
     const { agent, userId } = await signedIn('operator');
     const part = await createPart({ pieceSpread: 0.01 });
     const scale = await createScale();
-    const res = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send({ ...capture(part.id, scale.id), count: 5000 });
+    const res = await agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send({ ...capture(part.id, scale.id), count: 5000 });
     expect(res.status).toBe(201);
     // net 60.0 g at APW 0.6 g → 100 pieces
     expect(res.body.count).toMatchObject({ count: 100, net: 60, tare: 52.3, averagePieceWeight: 0.6, operatorId: userId, pieceSpread: 0.01 });
@@ -53,7 +56,9 @@ describe('POST /api/v1/counts', () => {
     const part = await createPart();
     const scale = await createScale();
     const key = randomUUID();
-    const results = await Promise.all(Array.from({ length: 5 }, () => agent.post('/api/v1/counts').set('Idempotency-Key', key).send(capture(part.id, scale.id))));
+    const results = await Promise.all(
+      Array.from({ length: 5 }, () => agent.post('/api/v1/counts').set('Idempotency-Key', key).send(capture(part.id, scale.id))),
+    );
     expect(results.map((r) => r.status)).toEqual([201, 201, 201, 201, 201]);
     expect(new Set(results.map((r) => r.body.count.id)).size).toBe(1);
     expect(await CountEvent.count({ where: { idempotencyKey: key } })).toBe(1);
@@ -65,7 +70,10 @@ describe('POST /api/v1/counts', () => {
     const scale = await createScale();
     const key = randomUUID();
     await agent.post('/api/v1/counts').set('Idempotency-Key', key).send(capture(part.id, scale.id));
-    const other = await agent.post('/api/v1/counts').set('Idempotency-Key', key).send(capture(part.id, scale.id, { gross: 130 }));
+    const other = await agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', key)
+      .send(capture(part.id, scale.id, { gross: 130 }));
     expect(other.status).toBe(409);
   });
 
@@ -85,10 +93,16 @@ describe('POST /api/v1/counts', () => {
     const { agent } = await signedIn('operator');
     const part = await createPart({ pieceSpread: 0.01 });
     const scale = await createScale(); // d = 0.1 g
-    const drifted = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(capture(part.id, scale.id, { gross: 60, tare: -0.048 }));
+    const drifted = await agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send(capture(part.id, scale.id, { gross: 60, tare: -0.048 }));
     expect(drifted.status).toBe(201);
     expect(drifted.body.count).toMatchObject({ tare: 0, net: 60, count: 100 });
-    const far = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(capture(part.id, scale.id, { gross: 60, tare: -0.5 }));
+    const far = await agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send(capture(part.id, scale.id, { gross: 60, tare: -0.5 }));
     expect(far.status).toBe(400);
     expect(far.body.error.fields.tare).toMatch(/below zero.*zero the scale/);
   });
@@ -97,7 +111,10 @@ describe('POST /api/v1/counts', () => {
     const { agent } = await signedIn('operator');
     const part = await createPart({ pieceSpread: 0.01 });
     const scale = await createScale({ divisionG: 0.01, eG: 0.1, repeatabilityG: 0.005 });
-    const res = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(capture(part.id, scale.id, { gross: 52.3 + 15 + 0.6 * 10 }));
+    const res = await agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send(capture(part.id, scale.id, { gross: 52.3 + 15 + 0.6 * 10 }));
     expect(res.status).toBe(201);
     const c = res.body.count;
     expect(c.count).toBe(35);
@@ -105,19 +122,31 @@ describe('POST /api/v1/counts', () => {
     expect(c.wholePieceRange === 0).toBe(c.exact);
   });
 
-  it('counts a bulk weighed on a platform from a sample weighed on a fine scale, with both scales\' calibration', async () => {
+  it("counts a bulk weighed on a platform from a sample weighed on a fine scale, with both scales' calibration", async () => {
     const { agent } = await signedIn('clerk');
     const part = await createPart({ pieceSpread: 0.005 });
     const fine = await createScale({ divisionG: 0.001, eG: 0.01, capacityG: 600, repeatabilityG: 0.0005 });
     const platform = await createScale({ divisionG: 1, eG: 10, capacityG: 60000, repeatabilityG: 0.5 });
-    const body = capture(part.id, fine.id, { bulkScaleId: platform.id, sampleOnPan: false, gross: 6450, tare: 450, sample: { quantity: 50, netWeight: 30.012 } });
+    const body = capture(part.id, fine.id, {
+      bulkScaleId: platform.id,
+      sampleOnPan: false,
+      gross: 6450,
+      tare: 450,
+      sample: { quantity: 50, netWeight: 30.012 },
+    });
     const res = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(body);
     expect(res.status).toBe(201);
     expect(res.body.count).toMatchObject({ scaleId: fine.id, bulkScaleId: platform.id, count: 9996, exact: false });
-    const onePlatform = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send({ ...body, bulkScaleId: fine.id });
+    const onePlatform = await agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send({ ...body, bulkScaleId: fine.id });
     expect(onePlatform.status).toBe(400);
     expect(onePlatform.body.error.fields.bulkScaleId).toBeTruthy();
-    const onPan = await agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send({ ...body, sampleOnPan: true });
+    const onPan = await agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send({ ...body, sampleOnPan: true });
     expect(onPan.status).toBe(400);
     expect(onPan.body.error.fields.sampleOnPan).toBeTruthy();
   });
@@ -134,7 +163,10 @@ describe('POST /api/v1/counts', () => {
     const part = await createPart();
     const scale = await createScale();
     const key = randomUUID();
-    const res = await agent.post('/api/v1/counts').set('Idempotency-Key', key).send(capture(part.id, scale.id, patch));
+    const res = await agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', key)
+      .send(capture(part.id, scale.id, patch));
     expect(res.status).toBe(status);
     expect(res.body.error.code).toBe(code);
     expect(await CountEvent.count({ where: { idempotencyKey: key } })).toBe(0);
@@ -154,7 +186,10 @@ describe('POST /api/v1/counts', () => {
     const part = await createPart();
     const scale = await createScale();
     await op.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(capture(part.id, scale.id));
-    await op.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(capture(part.id, scale.id, { purpose: 'bin', sampleOnPan: false, gross: 112.3 }));
+    await op.agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send(capture(part.id, scale.id, { purpose: 'bin', sampleOnPan: false, gross: 112.3 }));
     const all = await op.agent.get(`/api/v1/counts?partId=${part.id}`);
     expect(all.body.total).toBe(2);
     expect(all.body.counts[0].purpose).toBe('bin');

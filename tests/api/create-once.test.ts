@@ -36,7 +36,10 @@ describe('creates with an Idempotency-Key', () => {
     expect(later.headers['idempotent-replayed']).toBe('true');
 
     // The key with other input is a mistake, not a replay.
-    const changed = await planner.agent.post('/api/v1/orders').set('Idempotency-Key', key).send({ ...body, quantity: 6 });
+    const changed = await planner.agent
+      .post('/api/v1/orders')
+      .set('Idempotency-Key', key)
+      .send({ ...body, quantity: 6 });
     expect(changed.status).toBe(409);
     expect(changed.body.error.message).toMatch(/already used for a different request/);
 
@@ -59,14 +62,20 @@ describe('creates with an Idempotency-Key', () => {
     const part = await createPart();
     const code = `Q${String.fromCharCode(65 + Math.floor(Math.random() * 26))}-${String(10 + Math.floor(Math.random() * 89))}-${1 + Math.floor(Math.random() * 9)}-${String(10 + Math.floor(Math.random() * 89))}`;
     const bins = await twice(clerk.agent, '/api/v1/bins', { code, partId: part.id, bookQuantity: 40, abcClass: 'C' }, randomUUID());
-    expect(bins.map((a) => a.status), JSON.stringify(bins.map((b) => b.body))).toEqual([201, 201]);
+    expect(
+      bins.map((a) => a.status),
+      JSON.stringify(bins.map((b) => b.body)),
+    ).toEqual([201, 201]);
     expect(bins[0].body.bin.id).toBe(bins[1].body.bin.id);
     expect(await Bin.count({ where: { code } })).toBe(1);
   });
 
   it('refuses a key that is not a plain token, naming the header', async () => {
     const planner = await signedIn('planner');
-    const res = await planner.agent.post('/api/v1/kits').set('Idempotency-Key', 'no spaces allowed').send(await kitBody());
+    const res = await planner.agent
+      .post('/api/v1/kits')
+      .set('Idempotency-Key', 'no spaces allowed')
+      .send(await kitBody());
     expect(res.status).toBe(400);
     expect(res.body.error.fields['Idempotency-Key']).toMatch(/letters, digits/);
   });

@@ -20,7 +20,21 @@ describe('POST /api/v1/counting/estimate', () => {
     });
     expect(res.status).toBe(200);
     expect(Object.keys(res.body).sort()).toEqual(
-      ['averagePieceWeight', 'count', 'countRaw', 'coverageFactor', 'exact', 'expandedUncertainty', 'maxExactQuantity', 'pieceSpread', 'probabilityExact', 'recommendedSampleQuantity', 'standardUncertainty', 'warnings', 'wholePieceRange'].sort(),
+      [
+        'averagePieceWeight',
+        'count',
+        'countRaw',
+        'coverageFactor',
+        'exact',
+        'expandedUncertainty',
+        'maxExactQuantity',
+        'pieceSpread',
+        'probabilityExact',
+        'recommendedSampleQuantity',
+        'standardUncertainty',
+        'warnings',
+        'wholePieceRange',
+      ].sort(),
     );
     expect(res.body.averagePieceWeight).toBeCloseTo(14.87 / 25, 6);
     expect(res.body.count).toBe(1011);
@@ -44,7 +58,11 @@ describe('POST /api/v1/counting/estimate', () => {
     expect(grams.body.probabilityExact).toBeCloseTo(0.99926, 4);
     expect(grams.body.warnings).toEqual([]);
     // NIST SP 811 exact factors: 1 lb = 453.592 37 g, 1 oz = 28.349 523 125 g.
-    for (const [unit, perGram] of [['kg', 1 / 1000], ['lb', 1 / 453.59237], ['oz', 1 / 28.349523125]] as const) {
+    for (const [unit, perGram] of [
+      ['kg', 1 / 1000],
+      ['lb', 1 / 453.59237],
+      ['oz', 1 / 28.349523125],
+    ] as const) {
       const scaled = {
         unit,
         scale: { division: 0.1 * perGram, repeatability: 0 },
@@ -99,7 +117,10 @@ describe('POST /api/v1/counting/estimate', () => {
   it('takes the contract additions: increments, degrees of freedom, a tare and a bulk scale', async () => {
     const { agent } = await signedIn('operator');
     const base = { unit: 'g', scale: { division: 0.001, repeatability: 0.0005, max: 600 }, sample: { quantity: 10, netWeight: 5.948 }, netWeight: 5.948 * 3 };
-    const learned = await estimate(agent, { ...base, sample: { ...base.sample, increments: [0.5931, 0.6012, 0.5874, 0.5969, 0.5908, 0.6003, 0.5951, 0.5889, 0.5977, 0.5942] } });
+    const learned = await estimate(agent, {
+      ...base,
+      sample: { ...base.sample, increments: [0.5931, 0.6012, 0.5874, 0.5969, 0.5908, 0.6003, 0.5951, 0.5889, 0.5977, 0.5942] },
+    });
     expect(learned.status).toBe(200);
     expect(learned.body.pieceSpread).toMatchObject({ source: 'learned', degreesOfFreedom: 9 });
     expect(learned.body.warnings.map((w: { code: string }) => w.code)).not.toContain('cv_assumed');
@@ -107,7 +128,12 @@ describe('POST /api/v1/counting/estimate', () => {
     expect(given.body.pieceSpread).toEqual({ value: 0.01, source: 'given', degreesOfFreedom: 9 });
     const heavy = await estimate(agent, { ...base, netWeight: 590, tare: 20 });
     expect(heavy.body.warnings.map((w: { code: string }) => w.code)).toContain('over_capacity');
-    const platform = await estimate(agent, { ...base, netWeight: 5948, sampleOnPan: false, bulkScale: { division: 1, repeatability: 0.5, calibrationUncertainty: 2 } });
+    const platform = await estimate(agent, {
+      ...base,
+      netWeight: 5948,
+      sampleOnPan: false,
+      bulkScale: { division: 1, repeatability: 0.5, calibrationUncertainty: 2 },
+    });
     expect(platform.status).toBe(200);
     expect(platform.body.count).toBe(10_000);
     expect(platform.body.exact).toBe(false);
@@ -133,7 +159,10 @@ describe('POST /api/v1/counting/estimate', () => {
     );
     await fc.assert(
       fc.asyncProperty(body, async (b) => {
-        const res = await agent.post('/api/v1/counting/estimate').set('Content-Type', 'application/json').send(JSON.stringify(b) ?? 'null');
+        const res = await agent
+          .post('/api/v1/counting/estimate')
+          .set('Content-Type', 'application/json')
+          .send(JSON.stringify(b) ?? 'null');
         expect([200, 400]).toContain(res.status);
         if (res.status === 400) expect(res.body.error.code).toMatch(/validation_failed|invalid_json/);
         else expect(Number.isFinite(res.body.count)).toBe(true);

@@ -136,7 +136,12 @@ const PNG = Buffer.from('89504e470d0a1a0a0000000d4948445200000001000000010806000
 const PDF = Buffer.from('%PDF-1.4\n%fuzz certificate\n');
 
 const SAMPLES: Record<string, (w: World) => Sample> = {
-  'POST /api/v1/session': (w) => ({ bodies: [{ email: fresh('e-mail', (n) => `fuzz-${RUN}-${n}@example.test`), password: 'not the password' }, { email: w.user.email, password: TEST_PASSWORD }] }),
+  'POST /api/v1/session': (w) => ({
+    bodies: [
+      { email: fresh('e-mail', (n) => `fuzz-${RUN}-${n}@example.test`), password: 'not the password' },
+      { email: w.user.email, password: TEST_PASSWORD },
+    ],
+  }),
   'DELETE /api/v1/session': () => ({}),
   'DELETE /api/v1/session/everywhere': () => ({ ownSession: true }),
   'DELETE /api/v1/users/[id]/sessions': () => ({}),
@@ -149,38 +154,134 @@ const SAMPLES: Record<string, (w: World) => Sample> = {
   'POST /api/v1/users': () => ({ bodies: [{ name: 'Fuzz Invitee', email: fresh('e-mail', (n) => `fuzz-${RUN}-${n}@example.test`), role: 'operator' }] }),
   'PATCH /api/v1/users/[id]': (w) => ({ bodies: [{ role: 'clerk', active: true, version: new Live('users', w.user.id) }] }),
   'POST /api/v1/users/[id]/invitation': () => ({}),
-  'PATCH /api/v1/settings': (w) => ({ bodies: [{ siteName: 'Fuzzed works', displayUnit: 'g', defaultPieceSpread: 0.02, stabilityWindowMs: 1000, varianceThresholdPct: 2, varianceThresholdPcs: 5, version: new Live('site_settings', w.settingsId) }] }),
+  'PATCH /api/v1/settings': (w) => ({
+    bodies: [
+      {
+        siteName: 'Fuzzed works',
+        displayUnit: 'g',
+        defaultPieceSpread: 0.02,
+        stabilityWindowMs: 1000,
+        varianceThresholdPct: 2,
+        varianceThresholdPcs: 5,
+        version: new Live('site_settings', w.settingsId),
+      },
+    ],
+  }),
   'POST /api/v1/counting/estimate': () => ({
-    bodies: [{ unit: 'g', scale: { division: 0.1, repeatability: 0.05, max: 6000, min: 2 }, sample: { quantity: 10, netWeight: 5 }, netWeight: 50, sampleOnPan: true, pieceSpread: 0.01, targetQuantity: 100 }],
+    bodies: [
+      {
+        unit: 'g',
+        scale: { division: 0.1, repeatability: 0.05, max: 6000, min: 2 },
+        sample: { quantity: 10, netWeight: 5 },
+        netWeight: 50,
+        sampleOnPan: true,
+        pieceSpread: 0.01,
+        targetQuantity: 100,
+      },
+    ],
   }),
   'POST /api/v1/scales': () => ({
     bodies: [
-      { name: freshCode('SCALE'), location: 'bench 9', unit: 'g', capacity: 6000, minLoad: 20, division: 0.1, verificationInterval: 1, accuracyClass: 'III', repeatability: 0.05, connection: { kind: 'simulator', settleMs: 250, driftPerMinute: 0, rateHz: 20 } },
-      { name: freshCode('SERIAL'), unit: 'kg', capacity: 30, division: 0.001, accuracyClass: 'III', connection: { kind: 'serial', baudRate: 9600, dataBits: 8, parity: 'none', stopBits: 1, lineFormat: 'plain-grams', mode: 'polled', pollRequest: 'P\\r\\n', pollIntervalMs: 200 } },
-      { name: freshCode('ADC'), unit: 'lb', capacity: 100, division: 0.01, accuracyClass: 'IIII', connection: { kind: 'raw_adc', bits: 24, fullScaleVolts: 5, gain: 128, reversedExcitation: false, averaging: 4 } },
+      {
+        name: freshCode('SCALE'),
+        location: 'bench 9',
+        unit: 'g',
+        capacity: 6000,
+        minLoad: 20,
+        division: 0.1,
+        verificationInterval: 1,
+        accuracyClass: 'III',
+        repeatability: 0.05,
+        connection: { kind: 'simulator', settleMs: 250, driftPerMinute: 0, rateHz: 20 },
+      },
+      {
+        name: freshCode('SERIAL'),
+        unit: 'kg',
+        capacity: 30,
+        division: 0.001,
+        accuracyClass: 'III',
+        connection: {
+          kind: 'serial',
+          baudRate: 9600,
+          dataBits: 8,
+          parity: 'none',
+          stopBits: 1,
+          lineFormat: 'plain-grams',
+          mode: 'polled',
+          pollRequest: 'P\\r\\n',
+          pollIntervalMs: 200,
+        },
+      },
+      {
+        name: freshCode('ADC'),
+        unit: 'lb',
+        capacity: 100,
+        division: 0.01,
+        accuracyClass: 'IIII',
+        connection: { kind: 'raw_adc', bits: 24, fullScaleVolts: 5, gain: 128, reversedExcitation: false, averaging: 4 },
+      },
     ],
   }),
-  'PATCH /api/v1/scales/[id]': (w) => ({ ids: { id: w.spareScale.id }, bodies: [{ name: freshCode('SPARE'), location: 'bench 8', capacity: 6000, division: 0.1, repeatability: null, connection: { kind: 'keyed' }, version: new Live('scales', w.spareScale.id) }] }),
+  'PATCH /api/v1/scales/[id]': (w) => ({
+    ids: { id: w.spareScale.id },
+    bodies: [
+      {
+        name: freshCode('SPARE'),
+        location: 'bench 8',
+        capacity: 6000,
+        division: 0.1,
+        repeatability: null,
+        connection: { kind: 'keyed' },
+        version: new Live('scales', w.spareScale.id),
+      },
+    ],
+  }),
   'POST /api/v1/containers': () => ({ bodies: [{ name: freshCode('TOTE'), kind: 'tote', unit: 'g', tare: 120.5 }] }),
-  'PATCH /api/v1/containers/[id]': (w) => ({ bodies: [{ name: freshCode('BAG'), kind: 'bag', unit: 'kg', tare: 0.12, version: new Live('containers', w.container.id) }] }),
+  'PATCH /api/v1/containers/[id]': (w) => ({
+    bodies: [{ name: freshCode('BAG'), kind: 'bag', unit: 'kg', tare: 0.12, version: new Live('containers', w.container.id) }],
+  }),
   'GET /api/v1/parts': () => ({ query: { q: 'FZ', sort: 'description', dir: 'desc', page: '1', pageSize: '50' } }),
-  'POST /api/v1/parts': () => ({ bodies: [{ partNumber: fresh('part number', (n) => `fz-${RUN}/${n}`.toLowerCase()), description: 'Fuzz washer', countingMethod: 'scale' }] }),
+  'POST /api/v1/parts': () => ({
+    bodies: [{ partNumber: fresh('part number', (n) => `fz-${RUN}/${n}`.toLowerCase()), description: 'Fuzz washer', countingMethod: 'scale' }],
+  }),
   'GET /api/v1/parts/export': () => ({ query: { q: 'FZ', sort: 'updatedAt', dir: 'asc' } }),
   'POST /api/v1/parts/import': () => {
     const csv = fresh('parts CSV', (n) => `${PART_CSV_COLUMNS.join(',')}\nFZ-${RUN}-B${n},Fuzz bolt,scale\nFZ-${RUN}-N${n},"Fuzz nut, M4",hand\n`);
-    return { bodies: [{ csv, commit: false }, { csv, commit: true }], extra: csvBody(PART_CSV_COLUMNS) };
+    return {
+      bodies: [
+        { csv, commit: false },
+        { csv, commit: true },
+      ],
+      extra: csvBody(PART_CSV_COLUMNS),
+    };
   },
   'GET /api/v1/parts/[id]': () => ({}),
-  'PATCH /api/v1/parts/[id]': (w) => ({ ids: { id: w.sparePart.id }, bodies: [{ description: 'Fuzz spare part', countingMethod: 'hand', version: new Live('parts', w.sparePart.id) }] }),
+  'PATCH /api/v1/parts/[id]': (w) => ({
+    ids: { id: w.sparePart.id },
+    bodies: [{ description: 'Fuzz spare part', countingMethod: 'hand', version: new Live('parts', w.sparePart.id) }],
+  }),
   'GET /api/v1/parts/[id]/samples': () => ({}),
   'POST /api/v1/parts/[id]/samples': (w) => ({ bodies: [{ scaleId: w.scale.id, unit: 'g', quantity: 4, netWeight: 2, increments: [0.5, 0.5, 0.5, 0.5] }] }),
   'POST /api/v1/parts/[id]/samples/[sampleId]/decision': () => ({ bodies: [{ decision: 'reject' }] }),
   'GET /api/v1/parts/[id]/photo': () => ({}),
   'PUT /api/v1/parts/[id]/photo': () => ({ file: { name: 'washer.png', type: 'image/png', bytes: PNG } }),
-  'GET /api/v1/counts': (w) => ({ query: { partId: String(w.part.id), scaleId: String(w.scale.id), purpose: 'part', from: w.today, to: `${w.today}T23:59:59Z`, page: '1', pageSize: '20' } }),
-  'GET /api/v1/counts/export': (w) => ({ query: { partNumber: w.part.partNumber, scaleId: String(w.scale.id), purpose: 'part', from: w.today, to: w.today, notExact: '1', page: '1' } }),
+  'GET /api/v1/counts': (w) => ({
+    query: { partId: String(w.part.id), scaleId: String(w.scale.id), purpose: 'part', from: w.today, to: `${w.today}T23:59:59Z`, page: '1', pageSize: '20' },
+  }),
+  'GET /api/v1/counts/export': (w) => ({
+    query: { partNumber: w.part.partNumber, scaleId: String(w.scale.id), purpose: 'part', from: w.today, to: w.today, notExact: '1', page: '1' },
+  }),
   'POST /api/v1/counts': (w) => {
-    const weighing = { partId: w.part.id, scaleId: w.scale.id, unit: 'g', gross: 25, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true };
+    const weighing = {
+      partId: w.part.id,
+      scaleId: w.scale.id,
+      unit: 'g',
+      gross: 25,
+      tare: 0,
+      sample: { quantity: 20, netWeight: 10 },
+      sampleOnPan: false,
+      stable: true,
+    };
     return {
       bodies: [
         { purpose: 'part', ...weighing, containerId: null, targetQuantity: 50 },
@@ -190,13 +291,31 @@ const SAMPLES: Record<string, (w: World) => Sample> = {
       headers: () => ({ 'Idempotency-Key': randomUUID() }),
     };
   },
-  'POST /api/v1/kits': (w) => ({ bodies: [{ code: freshCode('kit'), revision: 'a', description: 'Fuzz kit', components: [{ partId: w.part.id, quantity: 2, toleranceBelow: 0, toleranceAbove: 1 }] }] }),
+  'POST /api/v1/kits': (w) => ({
+    bodies: [
+      {
+        code: freshCode('kit'),
+        revision: 'a',
+        description: 'Fuzz kit',
+        components: [{ partId: w.part.id, quantity: 2, toleranceBelow: 0, toleranceAbove: 1 }],
+      },
+    ],
+  }),
   'POST /api/v1/kits/import': (w) => {
     const csv = fresh('BOM CSV', (n) => `${BOM_CSV_COLUMNS.join(',')}\nFZ-BOM-${RUN}-${n},A,Fuzz bom,${w.part.partNumber},2,0,1\n`);
-    return { bodies: [{ csv, commit: false }, { csv, commit: true }], extra: csvBody(BOM_CSV_COLUMNS, w.part.partNumber) };
+    return {
+      bodies: [
+        { csv, commit: false },
+        { csv, commit: true },
+      ],
+      extra: csvBody(BOM_CSV_COLUMNS, w.part.partNumber),
+    };
   },
   'GET /api/v1/kits/[id]': () => ({}),
-  'PATCH /api/v1/kits/[id]': (w) => ({ ids: { id: w.spareKit.id }, bodies: [{ description: 'Fuzz kit', active: true, components: [{ partId: w.part.id, quantity: 4 }], version: new Live('kits', w.spareKit.id) }] }),
+  'PATCH /api/v1/kits/[id]': (w) => ({
+    ids: { id: w.spareKit.id },
+    bodies: [{ description: 'Fuzz kit', active: true, components: [{ partId: w.part.id, quantity: 4 }], version: new Live('kits', w.spareKit.id) }],
+  }),
   'POST /api/v1/kits/[id]/revisions': () => ({ bodies: [{ revision: fresh('revision', (n) => n.toString(36)) }] }),
   'GET /api/v1/orders': () => ({ query: { status: 'open' } }),
   'POST /api/v1/orders': (w) => ({ bodies: [{ kitId: w.kit.id, quantity: 2, dueDate: '2031-01-31' }] }),
@@ -205,10 +324,32 @@ const SAMPLES: Record<string, (w: World) => Sample> = {
   'POST /api/v1/orders/[id]/release': (w) => ({ ids: { id: w.drafts[0].id }, bodies: [{ version: new Live('build_orders', w.drafts[0].id) }] }),
   'POST /api/v1/orders/[id]/cancel': (w) => ({ ids: { id: w.drafts[1].id }, bodies: [{ version: new Live('build_orders', w.drafts[1].id) }] }),
   // The world's released order has no uncertain line: the answer is a 422 the fuzzer checks writes nothing.
-  'POST /api/v1/orders/[id]/lines/[lineId]/recount': (w) => ({ ids: { id: w.order.id, lineId: w.order.lines[0].id }, bodies: [{ version: new Live('build_orders', w.order.id) }] }),
+  'POST /api/v1/orders/[id]/lines/[lineId]/recount': (w) => ({
+    ids: { id: w.order.id, lineId: w.order.lines[0].id },
+    bodies: [{ version: new Live('build_orders', w.order.id) }],
+  }),
   'POST /api/v1/orders/[id]/complete': (w) => ({ bodies: [{ version: new Live('build_orders', w.order.id), overrideReason: 'fuzzing the complete action' }] }),
   'GET /api/v1/bins': (w) => ({ query: { code: w.bin.code, partId: String(w.part.id) } }),
-  'POST /api/v1/bins': (w) => ({ bodies: [{ code: fresh('bin code', (n) => `${RUN.replace(/[^A-Z]/g, '').padEnd(2, 'Q').slice(0, 2)}-${String(1 + (n % 99)).padStart(2, '0')}-${1 + (Math.floor(n / 99) % 9)}-${String(1 + (Math.floor(n / 891) % 99)).padStart(2, '0')}`), partId: w.part.id, containerId: w.container.id, bookQuantity: 10, abcClass: 'B' }] }),
+  'POST /api/v1/bins': (w) => ({
+    bodies: [
+      {
+        code: fresh(
+          'bin code',
+          (n) =>
+            `${RUN.replace(/[^A-Z]/g, '')
+              .padEnd(2, 'Q')
+              .slice(
+                0,
+                2,
+              )}-${String(1 + (n % 99)).padStart(2, '0')}-${1 + (Math.floor(n / 99) % 9)}-${String(1 + (Math.floor(n / 891) % 99)).padStart(2, '0')}`,
+        ),
+        partId: w.part.id,
+        containerId: w.container.id,
+        bookQuantity: 10,
+        abcClass: 'B',
+      },
+    ],
+  }),
   'GET /api/v1/bins/[id]/label.pdf': () => ({ query: { stock: '4x2in' } }),
   'POST /api/v1/calibration/evaluate': () => ({
     bodies: [
@@ -224,7 +365,9 @@ const SAMPLES: Record<string, (w: World) => Sample> = {
       },
     ],
   }),
-  'POST /api/v1/test-weights': () => ({ bodies: [{ identifier: freshCode('tw'), nominal: 500, unit: 'g', weightClass: 'F1', certificateNumber: 'CAL-FZ', dueAt: '2031-06-30' }] }),
+  'POST /api/v1/test-weights': () => ({
+    bodies: [{ identifier: freshCode('tw'), nominal: 500, unit: 'g', weightClass: 'F1', certificateNumber: 'CAL-FZ', dueAt: '2031-06-30' }],
+  }),
   'GET /api/v1/test-weights/[id]/certificate': () => ({}),
   'PUT /api/v1/test-weights/[id]/certificate': () => ({ file: { name: 'certificate.pdf', type: 'application/pdf', bytes: PDF } }),
   'GET /api/v1/scales/[id]': () => ({}),
@@ -249,7 +392,9 @@ const SAMPLES: Record<string, (w: World) => Sample> = {
   'POST /api/v1/scales/[id]/lock': (w) => ({ ids: { id: w.spareScale.id }, bodies: [{ reason: 'fuzzing the lock-out' }] }),
   'POST /api/v1/jobs/calibration-reminders': () => ({}),
   'GET /api/v1/audits/sampling-plan': () => ({ query: { lotSize: '500', level: 'II', aql: '1.0' } }),
-  'POST /api/v1/audits': (w) => ({ bodies: [{ population: { from: w.today, to: w.today, partId: w.part.id, scaleId: w.scale.id, purpose: 'part' }, level: 'II', aql: 2.5, seed: 12345 }] }),
+  'POST /api/v1/audits': (w) => ({
+    bodies: [{ population: { from: w.today, to: w.today, partId: w.part.id, scaleId: w.scale.id, purpose: 'part' }, level: 'II', aql: 2.5, seed: 12345 }],
+  }),
   'GET /api/v1/audits/[id]': () => ({}),
   'PUT /api/v1/audits/[id]/items/[itemId]': () => ({ bodies: [{ handCount: 50 }] }),
   'GET /api/v1/reports/accuracy': (w) => ({ query: { from: w.today, to: w.today, by: 'operator', format: 'csv' } }),
@@ -284,7 +429,43 @@ class Shown<T> {
 const repeated = (unit: string, times: number) => new Shown(unit.repeat(times), `${JSON.stringify(unit)}×${times}`);
 
 const edgeNumber = fc.oneof(
-  { weight: 3, arbitrary: fc.constantFrom(0, -0, -1, 1, 0.1, 0.5, 1.5, -1.5, 1e-7, 1e-10, 1e-300, 5e-324, 2 ** 31 - 1, 2 ** 31, 2 ** 32, 2 ** 53 - 1, 2 ** 53 + 2, 1e15, 1e20, 1e21, 1e100, 1e300, Number.MAX_VALUE, -Number.MAX_VALUE, 9_999_999, 10_000_000, 10_000_001, 99_999_999.999_999, 100_000_000, 100_001, NaN, Infinity) },
+  {
+    weight: 3,
+    arbitrary: fc.constantFrom(
+      0,
+      -0,
+      -1,
+      1,
+      0.1,
+      0.5,
+      1.5,
+      -1.5,
+      1e-7,
+      1e-10,
+      1e-300,
+      5e-324,
+      2 ** 31 - 1,
+      2 ** 31,
+      2 ** 32,
+      2 ** 53 - 1,
+      2 ** 53 + 2,
+      1e15,
+      1e20,
+      1e21,
+      1e100,
+      1e300,
+      Number.MAX_VALUE,
+      -Number.MAX_VALUE,
+      9_999_999,
+      10_000_000,
+      10_000_001,
+      99_999_999.999_999,
+      100_000_000,
+      100_001,
+      NaN,
+      Infinity,
+    ),
+  },
   { weight: 1, arbitrary: fc.double({ noNaN: true, noDefaultInfinity: true }) },
   { weight: 1, arbitrary: fc.integer({ min: -(2 ** 31), max: 2 ** 32 }) },
 );
@@ -304,7 +485,7 @@ const edgeString = fc.oneof(
     '[]',
     '{}',
     "' OR '1'='1",
-    "1; DROP TABLE parts; --",
+    '1; DROP TABLE parts; --',
     '" OR ""="',
     '\\',
     "\\'",
@@ -334,7 +515,41 @@ const edgeString = fc.oneof(
   fc.string({ unit: 'binary', maxLength: 30 }),
 );
 const longString = fc
-  .tuple(fc.constantFrom(2, 8, 20, 21, 40, 41, 60, 61, 64, 65, 80, 81, 100, 101, 120, 121, 200, 201, 254, 255, 256, 300, 301, 500, 501, 1000, 1001, 5000, 65_536, 1_000_000), fc.constantFrom('x', 'A', '9', '😀', 'ß', 'é', ' '))
+  .tuple(
+    fc.constantFrom(
+      2,
+      8,
+      20,
+      21,
+      40,
+      41,
+      60,
+      61,
+      64,
+      65,
+      80,
+      81,
+      100,
+      101,
+      120,
+      121,
+      200,
+      201,
+      254,
+      255,
+      256,
+      300,
+      301,
+      500,
+      501,
+      1000,
+      1001,
+      5000,
+      65_536,
+      1_000_000,
+    ),
+    fc.constantFrom('x', 'A', '9', '😀', 'ß', 'é', ' '),
+  )
   .map(([n, unit]) => repeated(unit, unit === '😀' ? Math.min(n, 70_000) : n));
 const DANGEROUS_KEYS = ['__proto__', 'constructor', 'prototype', 'toString', 'valueOf', 'hasOwnProperty', 'then'];
 const key = fc.oneof(fc.constantFrom(...DANGEROUS_KEYS), fc.string({ maxLength: 12 }));
@@ -353,7 +568,12 @@ function nested(depth: number, kind: 'array' | 'object'): Shown<unknown> {
 }
 
 const leaf = fc.oneof(edgeNumber, edgeString, longString, numericString, fc.constantFrom(null, true, false));
-const bigArrays = fc.constantFrom(new Shown(Array(5001).fill(1), '[1×5001]'), new Shown(Array(100_000).fill(0), '[0×100000]'), nested(2000, 'array'), nested(2000, 'object'));
+const bigArrays = fc.constantFrom(
+  new Shown(Array(5001).fill(1), '[1×5001]'),
+  new Shown(Array(100_000).fill(0), '[0×100000]'),
+  nested(2000, 'array'),
+  nested(2000, 'object'),
+);
 const hostile: fc.Arbitrary<unknown> = fc.letrec((tie) => ({
   value: fc.oneof({ depthSize: 'small', withCrossShrink: true }, leaf, tie('array'), tie('object'), bigArrays),
   array: fc.array(tie('value'), { maxLength: 4 }),
@@ -362,8 +582,10 @@ const hostile: fc.Arbitrary<unknown> = fc.letrec((tie) => ({
 
 // A replacement for a field, mostly of the field's own type so the value reaches the checks behind it.
 function likeOf(original: unknown): fc.Arbitrary<unknown> {
-  if (typeof original === 'number' || original instanceof Live) return fc.oneof({ weight: 4, arbitrary: edgeNumber }, { weight: 1, arbitrary: numericString }, { weight: 1, arbitrary: hostile });
-  if (typeof original === 'string' || original instanceof Fresh) return fc.oneof({ weight: 4, arbitrary: fc.oneof(edgeString, longString) }, { weight: 1, arbitrary: hostile });
+  if (typeof original === 'number' || original instanceof Live)
+    return fc.oneof({ weight: 4, arbitrary: edgeNumber }, { weight: 1, arbitrary: numericString }, { weight: 1, arbitrary: hostile });
+  if (typeof original === 'string' || original instanceof Fresh)
+    return fc.oneof({ weight: 4, arbitrary: fc.oneof(edgeString, longString) }, { weight: 1, arbitrary: hostile });
   if (typeof original === 'boolean') return fc.oneof(fc.constantFrom('true', 'false', 1, 0, null), hostile);
   if (Array.isArray(original)) return fc.oneof(fc.constant([]), bigArrays, fc.array(edgeNumber, { maxLength: 5 }), hostile);
   return hostile;
@@ -372,10 +594,15 @@ function likeOf(original: unknown): fc.Arbitrary<unknown> {
 // ---- mutations of a valid sample ---------------------------------------------------------------
 
 type Path = Array<string | number>;
-type Mutation = { op: 'set'; path: Path; value: unknown } | { op: 'delete'; path: Path } | { op: 'add'; path: Path; key: string; value: unknown } | { op: 'wrap'; path: Path };
+type Mutation =
+  | { op: 'set'; path: Path; value: unknown }
+  | { op: 'delete'; path: Path }
+  | { op: 'add'; path: Path; key: string; value: unknown }
+  | { op: 'wrap'; path: Path };
 
 // Markers (Shown, Fresh, Live) are leaves, not objects to walk into.
-const isPlainObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && [Object.prototype, null].includes(Object.getPrototypeOf(v));
+const isPlainObject = (v: unknown): v is Record<string, unknown> =>
+  typeof v === 'object' && v !== null && [Object.prototype, null].includes(Object.getPrototypeOf(v));
 
 function pathsOf(value: unknown, prefix: Path = []): Array<[Path, unknown]> {
   const here: [Path, unknown] = [prefix, value];
@@ -427,23 +654,54 @@ function mutated(sample: object): fc.Arbitrary<unknown> {
     { weight: 1, arbitrary: fc.constantFrom(...all).map(([p]): Mutation => ({ op: 'wrap', path: p })) },
   ];
   if (inner.length) ops.push({ weight: 2, arbitrary: fc.constantFrom(...inner).map(([p]): Mutation => ({ op: 'delete', path: p })) });
-  if (objects.length) ops.push({ weight: 2, arbitrary: fc.tuple(fc.constantFrom(...objects), key, hostile).map(([[p], k, value]): Mutation => ({ op: 'add', path: p, key: k, value })) });
+  if (objects.length)
+    ops.push({
+      weight: 2,
+      arbitrary: fc.tuple(fc.constantFrom(...objects), key, hostile).map(([[p], k, value]): Mutation => ({ op: 'add', path: p, key: k, value })),
+    });
   // Mostly one change, so a bad value is not hidden behind another field's message.
   const one = fc.oneof(...ops);
-  return fc.oneof({ weight: 4, arbitrary: one.map((m) => [m]) }, { weight: 1, arbitrary: fc.array(one, { minLength: 2, maxLength: 3 }) }).map((ms) => ms.reduce<unknown>(applyMutation, sample));
+  return fc
+    .oneof({ weight: 4, arbitrary: one.map((m) => [m]) }, { weight: 1, arbitrary: fc.array(one, { minLength: 2, maxLength: 3 }) })
+    .map((ms) => ms.reduce<unknown>(applyMutation, sample));
 }
 
 // CSV files: the header, then rows of hostile cells, quoted or not.
 function csvBody(columns: readonly string[], partNumber = 'FZ-300'): fc.Arbitrary<object> {
   const cell = fc.oneof(
-    fc.constantFrom('', 'FZ-301', partNumber, 'A', '2', '0', '-1', '1e309', '100001', 'scale', 'hand', '"', '""', '"unterminated', 'a,b', 'line\nbreak', '=1+1', '\u0000', '😀'),
+    fc.constantFrom(
+      '',
+      'FZ-301',
+      partNumber,
+      'A',
+      '2',
+      '0',
+      '-1',
+      '1e309',
+      '100001',
+      'scale',
+      'hand',
+      '"',
+      '""',
+      '"unterminated',
+      'a,b',
+      'line\nbreak',
+      '=1+1',
+      '\u0000',
+      '😀',
+    ),
     edgeString,
     longString.map((s) => s.value.slice(0, 300)),
   );
   const quoted = fc.tuple(cell, fc.boolean()).map(([c, q]) => (q ? `"${c.replaceAll('"', '""')}"` : c));
   const row = fc.array(quoted, { minLength: 0, maxLength: columns.length + 2 }).map((cells) => cells.join(','));
   return fc
-    .record({ header: fc.oneof(fc.constant(columns.join(',')), fc.constant(columns.slice().reverse().join(',')), edgeString), rows: fc.array(row, { maxLength: 6 }), eol: fc.constantFrom('\n', '\r\n', '\r'), commit: fc.boolean() })
+    .record({
+      header: fc.oneof(fc.constant(columns.join(',')), fc.constant(columns.slice().reverse().join(',')), edgeString),
+      rows: fc.array(row, { maxLength: 6 }),
+      eol: fc.constantFrom('\n', '\r\n', '\r'),
+      commit: fc.boolean(),
+    })
     .map(({ header, rows, eol, commit }) => ({ csv: [header, ...rows].join(eol), commit }));
 }
 
@@ -469,7 +727,9 @@ interface FuzzRequest {
 
 // Percent-encodes UTF-8 bytes; lone surrogates become U+FFFD as any client would send them.
 function encode(text: string): string {
-  return [...Buffer.from(text, 'utf8')].map((b) => (/[A-Za-z0-9\-_.~]/.test(String.fromCharCode(b)) ? String.fromCharCode(b) : `%${b.toString(16).toUpperCase().padStart(2, '0')}`)).join('');
+  return [...Buffer.from(text, 'utf8')]
+    .map((b) => (/[A-Za-z0-9\-_.~]/.test(String.fromCharCode(b)) ? String.fromCharCode(b) : `%${b.toString(16).toUpperCase().padStart(2, '0')}`))
+    .join('');
 }
 const text = (v: unknown) => (v instanceof Shown ? String(v.value) : String(v));
 
@@ -486,7 +746,28 @@ const queryValue = fc.oneof(
 const RAW_QUERY_JUNK = ['&', '&&', '=', '&=', '&a', '%', '%ZZ', '%00', '%ED%A0%80', '%C0%AF', '+', '%2B', ';', 'k[]=1', 'a[b]=c'];
 // Not '%2e%2e' or '%2F': Next resolves those to another path, so the request never reaches this handler.
 const RAW_IDS = ['%00', '%20', '%ZZ', '%ED%A0%80', '%C3%28', '%F0%9F%98%80', '-'];
-const HOSTILE_IDS = ['-1', '0', '-0', '1e309', '1e9', 'abc', '1.5', '0x7fffffff', '4294967296', '9007199254740993', '9'.repeat(400), 'null', 'undefined', 'NaN', 'Infinity', '__proto__', 'constructor', '1;DROP TABLE users', "1' OR '1'='1", 'x'.repeat(5000)];
+const HOSTILE_IDS = [
+  '-1',
+  '0',
+  '-0',
+  '1e309',
+  '1e9',
+  'abc',
+  '1.5',
+  '0x7fffffff',
+  '4294967296',
+  '9007199254740993',
+  '9'.repeat(400),
+  'null',
+  'undefined',
+  'NaN',
+  'Infinity',
+  '__proto__',
+  'constructor',
+  '1;DROP TABLE users',
+  "1' OR '1'='1",
+  'x'.repeat(5000),
+];
 
 function idArb(real: number | undefined): fc.Arbitrary<string> {
   const hostileId = fc.oneof(fc.constantFrom(...HOSTILE_IDS).map(encode), fc.constantFrom(...RAW_IDS));
@@ -531,9 +812,36 @@ function queryString(list: Array<[string, unknown]>, junk: string | null = null)
   return parts.length ? `?${parts.join('&')}` : '';
 }
 
-const INVALID_JSON = ['{', '[', '{"a":', '{"a":1,}', "{'a':1}", 'NaN', 'undefined', '{"a":1}{"b":2}', '"unterminated', '\uFEFF{}', '\u0000', 'null', 'true', '0', '""', '[]', ' \t\n ', '{"__proto__":{"polluted":1}}', '{"constructor":{"prototype":{"polluted":1}}}'];
+const INVALID_JSON = [
+  '{',
+  '[',
+  '{"a":',
+  '{"a":1,}',
+  "{'a':1}",
+  'NaN',
+  'undefined',
+  '{"a":1}{"b":2}',
+  '"unterminated',
+  '\uFEFF{}',
+  '\u0000',
+  'null',
+  'true',
+  '0',
+  '""',
+  '[]',
+  ' \t\n ',
+  '{"__proto__":{"polluted":1}}',
+  '{"constructor":{"prototype":{"polluted":1}}}',
+];
 const NUMBER_TEXT = ['1e309', '-1e309', '1E400', '1e-400', '-0', '0.000000000000000000000000000001', '123456789012345678901234567890'];
-const WRONG_TYPES = ['text/plain', 'application/x-www-form-urlencoded', 'application/xml', 'multipart/form-data; boundary=x', 'application/json; charset=utf-16', 'application/octet-stream'];
+const WRONG_TYPES = [
+  'text/plain',
+  'application/x-www-form-urlencoded',
+  'application/xml',
+  'multipart/form-data; boundary=x',
+  'application/json; charset=utf-16',
+  'application/octet-stream',
+];
 
 // Bodies for a handler that reads JSON: mutations of its samples, whole hostile values, broken JSON text, other types.
 function jsonPayload(s: Sample): fc.Arbitrary<Payload> {
@@ -546,7 +854,11 @@ function jsonPayload(s: Sample): fc.Arbitrary<Payload> {
       arbitrary: fc
         .oneof(
           fc.constantFrom(...INVALID_JSON),
-          fc.constantFrom(new Shown('['.repeat(100_000) + ']'.repeat(100_000), '[ nested 100000 deep'), new Shown('{"a":'.repeat(50_000) + '1' + '}'.repeat(50_000), '{ nested 50000 deep'), new Shown(' '.repeat(6_000_000) + anyJson, '6 MB of spaces, then a sample')),
+          fc.constantFrom(
+            new Shown('['.repeat(100_000) + ']'.repeat(100_000), '[ nested 100000 deep'),
+            new Shown('{"a":'.repeat(50_000) + '1' + '}'.repeat(50_000), '{ nested 50000 deep'),
+            new Shown(' '.repeat(6_000_000) + anyJson, '6 MB of spaces, then a sample'),
+          ),
           fc.nat().map((n) => anyJson.slice(0, n % Math.max(anyJson.length, 1))),
           // A number in the sample's text swapped for one JSON.stringify never writes.
           fc.tuple(fc.nat(), fc.constantFrom(...NUMBER_TEXT)).map(([n, num]) => {
@@ -558,7 +870,12 @@ function jsonPayload(s: Sample): fc.Arbitrary<Payload> {
         )
         .map((t): Payload => ({ kind: 'text', contentType: 'application/json', text: t })),
     },
-    { weight: 1, arbitrary: fc.tuple(fc.constantFrom(...WRONG_TYPES), fc.constantFrom(anyJson, 'a=1&b=2', '<a>1</a>')).map(([contentType, t]): Payload => ({ kind: 'text', contentType, text: t })) },
+    {
+      weight: 1,
+      arbitrary: fc
+        .tuple(fc.constantFrom(...WRONG_TYPES), fc.constantFrom(anyJson, 'a=1&b=2', '<a>1</a>'))
+        .map(([contentType, t]): Payload => ({ kind: 'text', contentType, text: t })),
+    },
   ];
   if (bodies.length) {
     arbs.push({ weight: 10, arbitrary: fc.oneof(...bodies.map(mutated)).map((value): Payload => ({ kind: 'json', value })) });
@@ -589,19 +906,68 @@ function uploadPayload(field: string, s: Sample): fc.Arbitrary<Payload> {
     { weight: 2, arbitrary: fc.uint8Array({ maxLength: 300 }).map((a) => shownBytes(Buffer.from(a), `random ${a.length} bytes`)) },
   );
   const part = fc.record({
-    name: fc.oneof({ weight: 5, arbitrary: fc.constant(field) }, { weight: 1, arbitrary: fc.constantFrom('', 'file', `${field}[]`, field.toUpperCase(), '__proto__') }),
+    name: fc.oneof(
+      { weight: 5, arbitrary: fc.constant(field) },
+      { weight: 1, arbitrary: fc.constantFrom('', 'file', `${field}[]`, field.toUpperCase(), '__proto__') },
+    ),
     filename: fc.oneof(
       { weight: 4, arbitrary: fc.constant(file.name) },
-      { weight: 2, arbitrary: fc.constantFrom('../../../etc/passwd', `${'a'.repeat(300)}.png`, 'x.png.exe', '.htaccess', 'photo.svg', '', '😀.pdf', 'a"b.png', 'nul\u0000.png', 'back\\slash.pdf') },
+      {
+        weight: 2,
+        arbitrary: fc.constantFrom(
+          '../../../etc/passwd',
+          `${'a'.repeat(300)}.png`,
+          'x.png.exe',
+          '.htaccess',
+          'photo.svg',
+          '',
+          '😀.pdf',
+          'a"b.png',
+          'nul\u0000.png',
+          'back\\slash.pdf',
+        ),
+      },
       { weight: 1, arbitrary: fc.constant(null) },
     ),
-    type: fc.oneof({ weight: 3, arbitrary: fc.constant(file.type) }, { weight: 2, arbitrary: fc.constantFrom('image/png', 'image/jpeg', 'image/svg+xml', 'text/html', 'application/pdf', 'application/octet-stream', 'multipart/mixed', ';;;') }, { weight: 1, arbitrary: fc.constant(null) }),
+    type: fc.oneof(
+      { weight: 3, arbitrary: fc.constant(file.type) },
+      {
+        weight: 2,
+        arbitrary: fc.constantFrom(
+          'image/png',
+          'image/jpeg',
+          'image/svg+xml',
+          'text/html',
+          'application/pdf',
+          'application/octet-stream',
+          'multipart/mixed',
+          ';;;',
+        ),
+      },
+      { weight: 1, arbitrary: fc.constant(null) },
+    ),
     bytes,
   });
   return fc.oneof(
-    { weight: 6, arbitrary: fc.record({ boundary: fc.constantFrom<'ok' | 'missing' | 'mismatched' | 'truncated'>('ok', 'ok', 'ok', 'missing', 'mismatched', 'truncated'), parts: fc.array(part, { maxLength: 3 }) }).map((m): Payload => ({ kind: 'multipart', ...m })) },
+    {
+      weight: 6,
+      arbitrary: fc
+        .record({
+          boundary: fc.constantFrom<'ok' | 'missing' | 'mismatched' | 'truncated'>('ok', 'ok', 'ok', 'missing', 'mismatched', 'truncated'),
+          parts: fc.array(part, { maxLength: 3 }),
+        })
+        .map((m): Payload => ({ kind: 'multipart', ...m })),
+    },
     { weight: 1, arbitrary: hostile.map((value): Payload => ({ kind: 'json', value })) },
-    { weight: 1, arbitrary: fc.tuple(fc.constantFrom(...WRONG_TYPES, 'multipart/form-data', 'multipart/form-data; boundary='), fc.constantFrom('', 'garbage', '--x\r\n\r\n', '{"photo":"x"}')).map(([contentType, t]): Payload => ({ kind: 'text', contentType, text: t })) },
+    {
+      weight: 1,
+      arbitrary: fc
+        .tuple(
+          fc.constantFrom(...WRONG_TYPES, 'multipart/form-data', 'multipart/form-data; boundary='),
+          fc.constantFrom('', 'garbage', '--x\r\n\r\n', '{"photo":"x"}'),
+        )
+        .map(([contentType, t]): Payload => ({ kind: 'text', contentType, text: t })),
+    },
   );
 }
 
@@ -614,8 +980,21 @@ const junkPayload: fc.Arbitrary<Payload> = fc.oneof(
 
 function requestArb(h: Handler, s: Sample, w: World): fc.Arbitrary<FuzzRequest> {
   const ids = Object.fromEntries(h.params.map((p) => [p, idArb(s.ids?.[p] ?? fixtureId(h, p, w))]));
-  const payload = h.method === 'GET' ? fc.constant<Payload>({ kind: 'none' }) : h.uploadField ? uploadPayload(h.uploadField, s) : h.body ? jsonPayload(s) : junkPayload;
-  const headers = s.headers ? fc.oneof({ weight: 5, arbitrary: fc.constant('sample') }, { weight: 1, arbitrary: fc.constant('none') }, { weight: 1, arbitrary: fc.oneof(fc.constantFrom('', 'short', 'k'.repeat(101), '../../x', "' OR 1=1"), fc.string({ unit: 'binary-ascii', maxLength: 40 }).map((v) => v.replace(/[^\x20-\x7e]/g, ''))) }) : fc.constant('sample');
+  const payload =
+    h.method === 'GET' ? fc.constant<Payload>({ kind: 'none' }) : h.uploadField ? uploadPayload(h.uploadField, s) : h.body ? jsonPayload(s) : junkPayload;
+  const headers = s.headers
+    ? fc.oneof(
+        { weight: 5, arbitrary: fc.constant('sample') },
+        { weight: 1, arbitrary: fc.constant('none') },
+        {
+          weight: 1,
+          arbitrary: fc.oneof(
+            fc.constantFrom('', 'short', 'k'.repeat(101), '../../x', "' OR 1=1"),
+            fc.string({ unit: 'binary-ascii', maxLength: 40 }).map((v) => v.replace(/[^\x20-\x7e]/g, '')),
+          ),
+        },
+      )
+    : fc.constant('sample');
   return fc.record({ ids: fc.record(ids), query: h.query ? queryArb(s.query) : fc.constant(''), headers, payload });
 }
 
@@ -636,13 +1015,17 @@ function sweep(h: Handler, s: Sample, w: World): FuzzRequest[] {
   if (h.method === 'GET') {
     // The largest safe integer (an offset of page × pageSize), and text as long as a request line allows.
     const values = ['9007199254740991', '1e8', 'x'.repeat(3000)];
-    return query.flatMap(([k]) => values.map((x): FuzzRequest => ({ ...base, query: queryString([...query.filter(([q]) => q !== k), [k, x]]), payload: { kind: 'none' } })));
+    return query.flatMap(([k]) =>
+      values.map((x): FuzzRequest => ({ ...base, query: queryString([...query.filter(([q]) => q !== k), [k, x]]), payload: { kind: 'none' } })),
+    );
   }
   if (h.uploadField) return [];
   return (s.bodies ?? []).flatMap((body) =>
     pathsOf(body)
       .filter(([p]) => p.length > 0)
-      .flatMap(([p, v]) => sweepValues(v).map((value): FuzzRequest => ({ ...base, payload: { kind: 'json', value: applyMutation(body, { op: 'set', path: p, value }) } }))),
+      .flatMap(([p, v]) =>
+        sweepValues(v).map((value): FuzzRequest => ({ ...base, payload: { kind: 'json', value: applyMutation(body, { op: 'set', path: p, value }) } })),
+      ),
   );
 }
 
@@ -655,7 +1038,9 @@ function fixtureId(h: Handler, param: string, w: World): number | undefined {
 function multipartBody(p: Extract<Payload, { kind: 'multipart' }>): { contentType: string; body: Buffer } {
   const boundary = `----fuzz${randomUUID()}`;
   const chunks = p.parts.flatMap((part) => [
-    Buffer.from(`--${boundary}\r\nContent-Disposition: form-data; name="${part.name}"${part.filename === null ? '' : `; filename="${part.filename}"`}\r\n${part.type ? `Content-Type: ${part.type}\r\n` : ''}\r\n`),
+    Buffer.from(
+      `--${boundary}\r\nContent-Disposition: form-data; name="${part.name}"${part.filename === null ? '' : `; filename="${part.filename}"`}\r\n${part.type ? `Content-Type: ${part.type}\r\n` : ''}\r\n`,
+    ),
     part.bytes.value,
     Buffer.from('\r\n'),
   ]);
@@ -675,7 +1060,10 @@ function livesIn(v: unknown): Live[] {
 async function jsonText(value: unknown): Promise<string> {
   const versions = new Map<Live, number>();
   for (const live of livesIn(value)) {
-    const [row] = await testDb().query<{ version: number }>(`SELECT version FROM \`${live.table}\` WHERE id = ?`, { replacements: [live.id], type: QueryTypes.SELECT });
+    const [row] = await testDb().query<{ version: number }>(`SELECT version FROM \`${live.table}\` WHERE id = ?`, {
+      replacements: [live.id],
+      type: QueryTypes.SELECT,
+    });
     versions.set(live, row.version);
   }
   return JSON.stringify(value, (_, v: unknown) => (v instanceof Live ? versions.get(v) : v)) ?? 'null';
@@ -707,7 +1095,13 @@ let tables: string[] = [];
 const SESSION_ROWS = `SELECT COUNT(*) AS n, SUM(CRC32(CONCAT_WS('|', id, user_id, token_hash, expires_at, IFNULL(ended_at, '-'), IFNULL(end_reason, '-')))) AS s FROM user_sessions`;
 async function fingerprint(): Promise<Map<string, string>> {
   const db = testDb();
-  const rows = await db.query<{ Table: string; Checksum: number | string | null }>(`CHECKSUM TABLE ${tables.filter((t) => t !== 'user_sessions').map((t) => `\`${t}\``).join(', ')}`, { type: QueryTypes.SELECT });
+  const rows = await db.query<{ Table: string; Checksum: number | string | null }>(
+    `CHECKSUM TABLE ${tables
+      .filter((t) => t !== 'user_sessions')
+      .map((t) => `\`${t}\``)
+      .join(', ')}`,
+    { type: QueryTypes.SELECT },
+  );
   const [sessions] = await db.query<{ n: number; s: string | null }>(SESSION_ROWS, { type: QueryTypes.SELECT });
   return new Map([...rows.map((r): [string, string] => [r.Table.split('.').pop()!, String(r.Checksum)]), ['user_sessions', `${sessions.n}:${sessions.s}`]]);
 }
@@ -718,7 +1112,8 @@ function writesAllowed(h: Handler, status: number): string[] {
 }
 
 // What internals look like: stack frames, source paths, driver codes and SQL.
-const LEAK = /\n\s+at |node_modules|\.[jt]sx?:\d+|\bER_[A-Z_]{3,}|sqlMessage|sqlState|Sequelize|\bSELECT\b[\s\S]+\bFROM\b|\bINSERT INTO\b|\bUPDATE\b[\s\S]+\bSET\b/i;
+const LEAK =
+  /\n\s+at |node_modules|\.[jt]sx?:\d+|\bER_[A-Z_]{3,}|sqlMessage|sqlState|Sequelize|\bSELECT\b[\s\S]+\bFROM\b|\bINSERT INTO\b|\bUPDATE\b[\s\S]+\bSET\b/i;
 
 function expectErrorShape(res: { status: number; headers: Record<string, string>; body: unknown; text: string }, what: string) {
   expect(res.headers['content-type'], what).toMatch(/^application\/json/);
@@ -727,7 +1122,11 @@ function expectErrorShape(res: { status: number; headers: Record<string, string>
   const { code, message, fields, ...rest } = body.error ?? {};
   expect(rest, what).toEqual({});
   expect(typeof code === 'string' && typeof message === 'string', what).toBe(true);
-  if (fields !== undefined) expect(Object.values(fields as object).every((v) => typeof v === 'string'), what).toBe(true);
+  if (fields !== undefined)
+    expect(
+      Object.values(fields as object).every((v) => typeof v === 'string'),
+      what,
+    ).toBe(true);
   expect(res.text, what).not.toMatch(LEAK);
 }
 
@@ -745,7 +1144,11 @@ let savedSettings: Record<string, unknown>;
 
 beforeAll(async () => {
   const db = testDb();
-  tables = (await db.query<{ name: string }>('SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE() ORDER BY 1', { type: QueryTypes.SELECT })).map((r) => r.name);
+  tables = (
+    await db.query<{ name: string }>('SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE() ORDER BY 1', {
+      type: QueryTypes.SELECT,
+    })
+  ).map((r) => r.name);
   // Site settings are shared by every test file; whatever a valid PATCH here sets is put back after.
   [savedSettings] = await db.query<Record<string, unknown>>('SELECT * FROM site_settings', { type: QueryTypes.SELECT });
 
@@ -763,25 +1166,61 @@ beforeAll(async () => {
   const user = await createUser('operator');
   const container = (await clerk.post('/api/v1/containers').send({ name: unique('tote'), kind: 'tote', tare: 120 })).body.container;
   const { kit, order } = await releasedOrder(planner, { quantity: 2 });
-  const spareKit = (await planner.post('/api/v1/kits').send({ code: unique('FZ-KIT').toUpperCase(), revision: 'A', description: 'Fuzz spare kit', components: [{ partId: part.id, quantity: 1 }] })).body.kit;
+  const spareKit = (
+    await planner
+      .post('/api/v1/kits')
+      .send({ code: unique('FZ-KIT').toUpperCase(), revision: 'A', description: 'Fuzz spare kit', components: [{ partId: part.id, quantity: 1 }] })
+  ).body.kit;
   const drafts = [];
   for (let i = 0; i < 2; i++) drafts.push((await planner.post('/api/v1/orders').send({ kitId: kit.id, quantity: 3 })).body.order);
   const fullOrder = (await planner.get(`/api/v1/orders/${order.id}`)).body.order;
-  const capture = (body: object) => clerk.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send({ partId: part.id, scaleId: scale.id, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true, ...body });
+  const capture = (body: object) =>
+    clerk
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send({ partId: part.id, scaleId: scale.id, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true, ...body });
   // A cycle count 10 % under the book is held for a decision; two part counts make a lot to audit.
   const binCount = (await capture({ purpose: 'bin', binId: bin.id, binVersion: bin.version, gross: 450 })).body.binCount;
   for (const gross of [25, 25.5]) expect((await capture({ purpose: 'part', gross })).status).toBe(201);
   const today = utcDay();
-  const audit = (await agents.get('quality')!.post('/api/v1/audits').send({ population: { from: utcDay(-1), to: today, partId: part.id }, aql: 2.5 })).body.audit;
+  const audit = (
+    await agents
+      .get('quality')!
+      .post('/api/v1/audits')
+      .send({ population: { from: utcDay(-1), to: today, partId: part.id }, aql: 2.5 })
+  ).body.audit;
   expect(binCount?.status).toBe('pending');
   expect(audit?.items.length).toBeGreaterThan(0);
   const binNow = (await clerk.get(`/api/v1/bins?code=${bin.code}`)).body.bins[0];
   // A sample held for review, for the decision route.
-  const heldSample = await PieceWeightSample.create({ partId: part.id, scaleId: scale.id, quantity: 10, netWeightG: '5.5', apwG: '0.55', incrementsG: null, createdBy: user.id, status: 'held', holdReason: 'fuzz: far from the history' });
+  const heldSample = await PieceWeightSample.create({
+    partId: part.id,
+    scaleId: scale.id,
+    quantity: 10,
+    netWeightG: '5.5',
+    apwG: '0.55',
+    incrementsG: null,
+    createdBy: user.id,
+    status: 'held',
+    holdReason: 'fuzz: far from the history',
+  });
 
   world = {
     agents,
-    ids: { samples: heldSample.id, users: user.id, scales: scale.id, containers: container.id, parts: part.id, kits: kit.id, orders: order.id, audits: audit.id, items: audit.items[0].id, 'bin-counts': binCount.id, bins: bin.id, 'test-weights': weight.id },
+    ids: {
+      samples: heldSample.id,
+      users: user.id,
+      scales: scale.id,
+      containers: container.id,
+      parts: part.id,
+      kits: kit.id,
+      orders: order.id,
+      audits: audit.id,
+      items: audit.items[0].id,
+      'bin-counts': binCount.id,
+      bins: bin.id,
+      'test-weights': weight.id,
+    },
     part,
     scale,
     spareScale,
@@ -802,7 +1241,9 @@ beforeAll(async () => {
 afterAll(async () => {
   if (!savedSettings) return;
   const columns = Object.keys(savedSettings).filter((c) => c !== 'id');
-  await testDb().query(`UPDATE site_settings SET ${columns.map((c) => `\`${c}\` = ?`).join(', ')} WHERE id = ?`, { replacements: [...columns.map((c) => savedSettings[c]), savedSettings.id] });
+  await testDb().query(`UPDATE site_settings SET ${columns.map((c) => `\`${c}\` = ?`).join(', ')} WHERE id = ?`, {
+    replacements: [...columns.map((c) => savedSettings[c]), savedSettings.id],
+  });
 });
 
 describe('fuzzing every route handler', () => {

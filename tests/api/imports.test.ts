@@ -10,7 +10,14 @@ describe('parts import', () => {
     const { agent } = await signedIn('clerk');
     const tag = unique('IMP').toUpperCase();
     const res = await agent.post('/api/v1/parts/import').send({
-      csv: csv('part_number,description,counting_method', `${tag}-1,Hex nut M4,scale`, `${tag} 2,Bad number,scale`, `${tag}-3,,hand`, `${tag}-4,Wrong method,guess`, `${tag}-1,Repeated,scale`),
+      csv: csv(
+        'part_number,description,counting_method',
+        `${tag}-1,Hex nut M4,scale`,
+        `${tag} 2,Bad number,scale`,
+        `${tag}-3,,hand`,
+        `${tag}-4,Wrong method,guess`,
+        `${tag}-1,Repeated,scale`,
+      ),
       commit: true,
     });
     expect(res.status).toBe(200);
@@ -31,7 +38,9 @@ describe('parts import', () => {
     const { agent } = await signedIn('planner');
     const known = await createPart();
     const tag = unique('IMP').toUpperCase();
-    const body = { csv: csv('Part_Number,Description,Counting_Method', `${tag}-a,Dowel pin 3 × 12,`, `${known.partNumber.toLowerCase()},Renamed by import,hand`) };
+    const body = {
+      csv: csv('Part_Number,Description,Counting_Method', `${tag}-a,Dowel pin 3 × 12,`, `${known.partNumber.toLowerCase()},Renamed by import,hand`),
+    };
     const preview = await agent.post('/api/v1/parts/import').send(body);
     expect(preview.body).toMatchObject({ valid: true, committed: false });
     expect(preview.body.rows.map((r: { action: string }) => r.action)).toEqual(['create', 'update']);
@@ -66,7 +75,13 @@ describe('bill-of-material import', () => {
     const nut = await createPart();
     const code = unique('KIT').toUpperCase();
     const res = await agent.post('/api/v1/kits/import').send({
-      csv: csv(header, `${code},A,End-cap kit,${screw.partNumber},4,0,1`, `${code},A,,${nut.partNumber},four,,`, `${code},A,,NO-SUCH-PART,2,,`, `${code},A,,${screw.partNumber},1,,`),
+      csv: csv(
+        header,
+        `${code},A,End-cap kit,${screw.partNumber},4,0,1`,
+        `${code},A,,${nut.partNumber},four,,`,
+        `${code},A,,NO-SUCH-PART,2,,`,
+        `${code},A,,${screw.partNumber},1,,`,
+      ),
       commit: true,
     });
     expect(res.status).toBe(200);
@@ -94,7 +109,9 @@ describe('bill-of-material import', () => {
     expect(revA.description).toBe('Gearbox kit');
     expect(await KitComponent.count({ where: { kitId: revA.id } })).toBe(2);
     const revB = (await Kit.findOne({ where: { code, revision: 'B' } }))!;
-    expect(await KitComponent.findAll({ where: { kitId: revB.id } })).toEqual([expect.objectContaining({ partId: c.id, quantity: 6, toleranceBelow: 1, toleranceAbove: 1 })]);
+    expect(await KitComponent.findAll({ where: { kitId: revB.id } })).toEqual([
+      expect.objectContaining({ partId: c.id, quantity: 6, toleranceBelow: 1, toleranceAbove: 1 }),
+    ]);
 
     const replace = await agent.post('/api/v1/kits/import').send({ csv: csv(header, `${code},A,,${c.partNumber},3,,`), commit: true });
     expect(replace.body).toMatchObject({ valid: true, committed: true, rows: [expect.objectContaining({ action: 'replace' })] });
@@ -109,7 +126,18 @@ describe('bill-of-material import', () => {
     await planner.agent.post('/api/v1/kits/import').send({ csv: csv(header, `${code},A,Spacer kit,${part.partNumber},2,,`), commit: true });
     testDb();
     const kit = (await Kit.findOne({ where: { code, revision: 'A' } }))!;
-    await BuildOrder.create({ number: unique('BO').slice(0, 20), kitId: kit.id, quantity: 1, dueDate: null, status: 'released', createdBy: planner.userId, releasedAt: new Date(), completedAt: null, cancelledAt: null, overrideReason: null });
+    await BuildOrder.create({
+      number: unique('BO').slice(0, 20),
+      kitId: kit.id,
+      quantity: 1,
+      dueDate: null,
+      status: 'released',
+      createdBy: planner.userId,
+      releasedAt: new Date(),
+      completedAt: null,
+      cancelledAt: null,
+      overrideReason: null,
+    });
     const res = await planner.agent.post('/api/v1/kits/import').send({ csv: csv(header, `${code},A,,${part.partNumber},5,,`), commit: true });
     expect(res.body).toMatchObject({ valid: false, committed: false });
     expect(res.body.rows[0].errors.kit_code).toMatch(/orders were released/);

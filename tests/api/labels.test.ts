@@ -60,7 +60,12 @@ describe('label PDFs', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-disposition']).toBe('inline; filename="bin-2-labels-letter-30up.pdf"');
     const [page] = await decodePdf(res.body);
-    expect(page.filter((s) => s.format === 'Code128').map((s) => s.text).sort()).toEqual(bins.map((b) => b.code).sort());
+    expect(
+      page
+        .filter((s) => s.format === 'Code128')
+        .map((s) => s.text)
+        .sort(),
+    ).toEqual(bins.map((b) => b.code).sort());
   });
 
   it('a part label carries the part number in Code 128 and the part page in the QR', async () => {
@@ -84,8 +89,17 @@ describe('label PDFs', () => {
     const [page] = await decodePdf(res.body);
     const matrix = page.find((s) => s.format === 'DataMatrix')!;
     // GS1 DataMatrix (]d2): company-internal AIs (91) kit:rev, (92) order, (93) count, FNC1 as GS between them.
-    expect(matrix).toMatchObject({ symbologyIdentifier: ']d2', raw: `91${kit.code}:C${GS}92${order.number}${GS}9312`, text: `(91)${kit.code}:C(92)${order.number}(93)12` });
-    expect(page.filter((s) => s.format === 'Code128').map((s) => [s.symbologyIdentifier, s.text]).sort()).toEqual([
+    expect(matrix).toMatchObject({
+      symbologyIdentifier: ']d2',
+      raw: `91${kit.code}:C${GS}92${order.number}${GS}9312`,
+      text: `(91)${kit.code}:C(92)${order.number}(93)12`,
+    });
+    expect(
+      page
+        .filter((s) => s.format === 'Code128')
+        .map((s) => [s.symbologyIdentifier, s.text])
+        .sort(),
+    ).toEqual([
       [']C1', `(91)${kit.code}:C`],
       [']C1', `(92)${order.number}(93)12`],
     ]);
@@ -109,7 +123,11 @@ describe('label PDFs', () => {
     expect(Object.keys(empty.body.error.fields).sort()).toEqual(['ids', 'stock', 'template']);
     const bad = await agent.post('/api/v1/labels').send({ template: 'box', stock: '4x2in', ids: ['a', -1] });
     expect(bad.status).toBe(400);
-    expect(bad.body.error.fields).toMatchObject({ template: 'Template must be bin, part or kit', 'ids.0': 'Each id must be a record id', 'ids.1': 'Each id must be a record id' });
+    expect(bad.body.error.fields).toMatchObject({
+      template: 'Template must be bin, part or kit',
+      'ids.0': 'Each id must be a record id',
+      'ids.1': 'Each id must be a record id',
+    });
     expect((await agent.post('/api/v1/labels').send({ template: 'bin', stock: '4x2in', ids: [] })).body.error.fields.ids).toBe('Give at least one id');
     const tooMany = await agent.post('/api/v1/labels').send({ template: 'bin', stock: '4x2in', ids: Array.from({ length: 1001 }, (_, i) => i + 1) });
     expect(tooMany.body.error.fields.ids).toBe('At most 1000 labels at a time');
@@ -121,32 +139,39 @@ describe('label PDFs', () => {
 });
 
 describe('label rendering off the request thread', () => {
-  it('renders in a worker pool with a bounded queue: past it a render is refused with 503 and Retry-After, health keeps answering', { timeout: 90_000 }, async () => {
-    const app = await startAnotherApp({ LABEL_QUEUE_LIMIT: '1' });
-    try {
-      const { agent } = await signedIn('clerk', app.url);
-      const bin = await stockPart((await createPart()).id, 1);
-      const body = { template: 'bin', stock: '2x1in', ids: Array.from({ length: 400 }, () => bin.id) };
-      // Warm the pool, so every request below meets a running worker.
-      expect((await binary(agent.post('/api/v1/labels').send({ ...body, ids: [bin.id] }))).status).toBe(200);
-      const renders = Promise.all(Array.from({ length: 5 }, () => binary(agent.post('/api/v1/labels').send(body))));
-      // While they render, the app answers other requests.
-      const health = await request(app.url).get('/api/v1/health');
-      expect(health.status).toBe(200);
-      const answers = await renders;
-      const statuses = answers.map((r) => r.status).sort();
-      expect(statuses.every((st) => st === 200 || st === 503), statuses.join(',')).toBe(true);
-      // One rendering and one waiting at the most: of five sent at once, some were turned away.
-      expect(statuses.filter((st) => st === 503).length).toBeGreaterThan(0);
-      const refused = answers.find((r) => r.status === 503)!;
-      expect(Number(refused.headers['retry-after'])).toBeGreaterThan(0);
-      const done = answers.find((r) => r.status === 200)!;
-      expect(isPdf(done.body)).toBe(true);
-      expect((await PDFDocument.load(done.body)).getPageCount()).toBe(400);
-    } finally {
-      app.child.kill('SIGKILL');
-    }
-  });
+  it(
+    'renders in a worker pool with a bounded queue: past it a render is refused with 503 and Retry-After, health keeps answering',
+    { timeout: 90_000 },
+    async () => {
+      const app = await startAnotherApp({ LABEL_QUEUE_LIMIT: '1' });
+      try {
+        const { agent } = await signedIn('clerk', app.url);
+        const bin = await stockPart((await createPart()).id, 1);
+        const body = { template: 'bin', stock: '2x1in', ids: Array.from({ length: 400 }, () => bin.id) };
+        // Warm the pool, so every request below meets a running worker.
+        expect((await binary(agent.post('/api/v1/labels').send({ ...body, ids: [bin.id] }))).status).toBe(200);
+        const renders = Promise.all(Array.from({ length: 5 }, () => binary(agent.post('/api/v1/labels').send(body))));
+        // While they render, the app answers other requests.
+        const health = await request(app.url).get('/api/v1/health');
+        expect(health.status).toBe(200);
+        const answers = await renders;
+        const statuses = answers.map((r) => r.status).sort();
+        expect(
+          statuses.every((st) => st === 200 || st === 503),
+          statuses.join(','),
+        ).toBe(true);
+        // One rendering and one waiting at the most: of five sent at once, some were turned away.
+        expect(statuses.filter((st) => st === 503).length).toBeGreaterThan(0);
+        const refused = answers.find((r) => r.status === 503)!;
+        expect(Number(refused.headers['retry-after'])).toBeGreaterThan(0);
+        const done = answers.find((r) => r.status === 200)!;
+        expect(isPdf(done.body)).toBe(true);
+        expect((await PDFDocument.load(done.body)).getPageCount()).toBe(400);
+      } finally {
+        app.child.kill('SIGKILL');
+      }
+    },
+  );
 });
 
 describe('kit label order status', () => {

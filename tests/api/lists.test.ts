@@ -56,14 +56,17 @@ describe('list routes answer pages', () => {
     expect(none.body).toMatchObject({ orders: [], total: 0 });
   });
 
-  it.each(['/api/v1/orders', '/api/v1/bins', '/api/v1/parts', '/api/v1/counts'])('refuses a page larger than 500 rows or past a million pages: %s', async (path) => {
-    const { agent } = await signedIn('planner');
-    const big = await agent.get(`${path}?pageSize=501`);
-    expect(big.status).toBe(400);
-    expect(big.body.error.fields.pageSize).toBeTruthy();
-    const far = await agent.get(`${path}?page=1000001`);
-    expect(far.status).toBe(400);
-    expect(far.body.error.fields.page).toBeTruthy();
-    expect((await agent.get(`${path}?page=999999&pageSize=500`)).status).toBe(200);
-  });
+  it.each(['/api/v1/orders', '/api/v1/bins', '/api/v1/parts', '/api/v1/counts'])(
+    'refuses a page larger than 500 rows or past a million pages: %s',
+    async (path) => {
+      const { agent } = await signedIn('planner');
+      const big = await agent.get(`${path}?pageSize=501`);
+      expect(big.status).toBe(400);
+      expect(big.body.error.fields.pageSize).toBeTruthy();
+      const far = await agent.get(`${path}?page=1000001`);
+      expect(far.status).toBe(400);
+      expect(far.body.error.fields.page).toBeTruthy();
+      expect((await agent.get(`${path}?page=999999&pageSize=500`)).status).toBe(200);
+    },
+  );
 });

@@ -33,7 +33,9 @@ describe('kits and build orders', () => {
     expect(kit.components).toEqual([expect.objectContaining({ partId: screw.id, quantity: 8, toleranceBelow: 0, toleranceAbove: 1 })]);
     const dup = await agent.post('/api/v1/kits').send({ code: kit.code, revision: 'a', description: 'x', components: [{ partId: screw.id, quantity: 1 }] });
     expect(dup.status).toBe(409);
-    const ghost = await agent.post('/api/v1/kits').send({ code: unique('KIT'), revision: 'A', description: 'x', components: [{ partId: 9999999, quantity: 1 }] });
+    const ghost = await agent
+      .post('/api/v1/kits')
+      .send({ code: unique('KIT'), revision: 'A', description: 'x', components: [{ partId: 9999999, quantity: 1 }] });
     expect(ghost.status).toBe(400);
     expect(ghost.body.error.fields['components.0.partId']).toBe('no such part');
     const copy = await agent.post(`/api/v1/kits/${kit.id}/revisions`).send({ revision: 'B' });
@@ -71,7 +73,10 @@ describe('kits and build orders', () => {
     const nut = await createPart();
     await stockPart(washer.id, 100);
     await stockPart(nut.id, 5000);
-    const kit = await makeKit(planner.agent, [{ id: washer.id, quantity: 4 }, { id: nut.id, quantity: 4 }]);
+    const kit = await makeKit(planner.agent, [
+      { id: washer.id, quantity: 4 },
+      { id: nut.id, quantity: 4 },
+    ]);
     const order = await makeOrder(planner.agent, kit.id, 30);
     const res = await planner.agent.post(`/api/v1/orders/${order.id}/release`).send({ version: order.version });
     expect(res.status).toBe(422);
@@ -101,25 +106,40 @@ describe('kits and build orders', () => {
     expect(await StockReservation.sum('quantity', { where: { partId: spring.id, status: 'active' } })).toBe(100);
   });
 
-  it('answers 16 parallel releases sharing parts with 200 (or 503 to try again), never 500, and reserves exactly what the 200s hold', { timeout: 60_000 }, async () => {
-    const planner = await signedIn('planner');
-    // Three parts in every kit, listed in different orders, so the releases meet on the same rows from different sides.
-    const [a, b, c] = [await createPart(), await createPart(), await createPart()];
-    for (const part of [a, b, c]) await stockPart(part.id, 100_000);
-    const kits = [
-      await makeKit(planner.agent, [{ id: a.id, quantity: 1 }, { id: b.id, quantity: 1 }, { id: c.id, quantity: 1 }]),
-      await makeKit(planner.agent, [{ id: c.id, quantity: 1 }, { id: a.id, quantity: 1 }, { id: b.id, quantity: 1 }]),
-    ];
-    const orders = [];
-    for (let i = 0; i < 16; i++) orders.push(await makeOrder(planner.agent, kits[i % 2].id, 3));
-    const results = await Promise.all(orders.map((o) => planner.agent.post(`/api/v1/orders/${o.id}/release`).send({ version: o.version })));
-    const statuses = results.map((r) => r.status);
-    expect(statuses.every((s) => s === 200 || s === 503), statuses.join(',')).toBe(true);
-    for (const r of results.filter((x) => x.status === 503)) expect(Number(r.headers['retry-after'])).toBeGreaterThan(0);
-    const released = statuses.filter((s) => s === 200).length;
-    testDb();
-    for (const part of [a, b, c]) expect((await PartStock.findByPk(part.id))!.reserved).toBe(3 * released);
-  });
+  it(
+    'answers 16 parallel releases sharing parts with 200 (or 503 to try again), never 500, and reserves exactly what the 200s hold',
+    { timeout: 60_000 },
+    async () => {
+      const planner = await signedIn('planner');
+      // Three parts in every kit, listed in different orders, so the releases meet on the same rows from different sides.
+      const [a, b, c] = [await createPart(), await createPart(), await createPart()];
+      for (const part of [a, b, c]) await stockPart(part.id, 100_000);
+      const kits = [
+        await makeKit(planner.agent, [
+          { id: a.id, quantity: 1 },
+          { id: b.id, quantity: 1 },
+          { id: c.id, quantity: 1 },
+        ]),
+        await makeKit(planner.agent, [
+          { id: c.id, quantity: 1 },
+          { id: a.id, quantity: 1 },
+          { id: b.id, quantity: 1 },
+        ]),
+      ];
+      const orders = [];
+      for (let i = 0; i < 16; i++) orders.push(await makeOrder(planner.agent, kits[i % 2].id, 3));
+      const results = await Promise.all(orders.map((o) => planner.agent.post(`/api/v1/orders/${o.id}/release`).send({ version: o.version })));
+      const statuses = results.map((r) => r.status);
+      expect(
+        statuses.every((s) => s === 200 || s === 503),
+        statuses.join(','),
+      ).toBe(true);
+      for (const r of results.filter((x) => x.status === 503)) expect(Number(r.headers['retry-after'])).toBeGreaterThan(0);
+      const released = statuses.filter((s) => s === 200).length;
+      testDb();
+      for (const part of [a, b, c]) expect((await PartStock.findByPk(part.id))!.reserved).toBe(3 * released);
+    },
+  );
 
   it('fills a line from bench captures, shows it in the queue, completes, and books the consumption', async () => {
     const planner = await signedIn('planner');
@@ -132,13 +152,28 @@ describe('kits and build orders', () => {
     const released = (await planner.agent.post(`/api/v1/orders/${order.id}/release`).send({ version: order.version })).body.order;
     const lineId = released.lines[0].id;
     const queue = await operator.agent.get('/api/v1/kitting-queue');
-    expect(queue.body.lines.find((l: { orderLineId: number }) => l.orderLineId === lineId)).toMatchObject({ required: 100, remaining: 100, orderNumber: order.number });
+    expect(queue.body.lines.find((l: { orderLineId: number }) => l.orderLineId === lineId)).toMatchObject({
+      required: 100,
+      remaining: 100,
+      orderNumber: order.number,
+    });
 
     // 100 pins of 0.25 g: sample of 20 on the pan, whole pan 25.00 g.
     const capture = await operator.agent
       .post('/api/v1/counts')
       .set('Idempotency-Key', randomUUID())
-      .send({ purpose: 'kit_line', orderLineId: lineId, partId: pin.id, scaleId: scale.id, gross: 25, tare: 0, sample: { quantity: 20, netWeight: 5 }, sampleOnPan: true, targetQuantity: 100, stable: true });
+      .send({
+        purpose: 'kit_line',
+        orderLineId: lineId,
+        partId: pin.id,
+        scaleId: scale.id,
+        gross: 25,
+        tare: 0,
+        sample: { quantity: 20, netWeight: 5 },
+        sampleOnPan: true,
+        targetQuantity: 100,
+        stable: true,
+      });
     expect(capture.status).toBe(201);
     expect(capture.body.line).toMatchObject({ id: lineId, counted: 100, verdict: 'in' });
     const inProgress = (await planner.agent.get(`/api/v1/orders/${order.id}`)).body.order;
@@ -149,7 +184,18 @@ describe('kits and build orders', () => {
     const again = await operator.agent
       .post('/api/v1/counts')
       .set('Idempotency-Key', randomUUID())
-      .send({ purpose: 'kit_line', orderLineId: lineId, partId: pin.id, scaleId: scale.id, gross: 25, tare: 0, sample: { quantity: 20, netWeight: 5 }, sampleOnPan: true, targetQuantity: 100, stable: true });
+      .send({
+        purpose: 'kit_line',
+        orderLineId: lineId,
+        partId: pin.id,
+        scaleId: scale.id,
+        gross: 25,
+        tare: 0,
+        sample: { quantity: 20, netWeight: 5 },
+        sampleOnPan: true,
+        targetQuantity: 100,
+        stable: true,
+      });
     expect(again.status).toBe(422);
     expect(again.body.error.message).toContain('already counted in full (100 of 100)');
     testDb();
@@ -187,10 +233,12 @@ describe('kits and build orders', () => {
 
     const second = await makeOrder(planner.agent, kit.id, 10);
     const rel2 = (await planner.agent.post(`/api/v1/orders/${second.id}/release`).send({ version: second.version })).body.order;
-    const overridden = await planner.agent.post(`/api/v1/orders/${second.id}/complete`).send({ version: rel2.version, overrideReason: 'Kits were hand counted at the line after a scale fault' });
+    const overridden = await planner.agent
+      .post(`/api/v1/orders/${second.id}/complete`)
+      .send({ version: rel2.version, overrideReason: 'Kits were hand counted at the line after a scale fault' });
     expect(overridden.status).toBe(200);
     expect(overridden.body.order.overrideReason).toMatch(/hand counted/);
-    expect((await PartStock.findByPk(clip.id))).toMatchObject({ reserved: 0, onHand: 300 });
+    expect(await PartStock.findByPk(clip.id)).toMatchObject({ reserved: 0, onHand: 300 });
   });
 
   it('rejects bad order input with field messages', async () => {
@@ -211,8 +259,22 @@ describe('sending a kit line back for a recount', () => {
     testDb();
     await Part.update({ pieceSpread: '0.001', spreadScatter: 1e-6, spreadNoise: 0, spreadDof: 99, spreadObservations: 100 }, { where: { id: line.partId } });
     // 0.5 g pieces: 10 on the pan for a line of 4 (−0/+0) is out of tolerance.
-    const capture = (pieces: number) => operator.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID())
-      .send({ purpose: 'kit_line', orderLineId: line.id, partId: line.partId, scaleId: scale.id, gross: pieces * 0.5, tare: 0, sample: { quantity: 2, netWeight: 1 }, sampleOnPan: true, targetQuantity: 4, stable: true });
+    const capture = (pieces: number) =>
+      operator.agent
+        .post('/api/v1/counts')
+        .set('Idempotency-Key', randomUUID())
+        .send({
+          purpose: 'kit_line',
+          orderLineId: line.id,
+          partId: line.partId,
+          scaleId: scale.id,
+          gross: pieces * 0.5,
+          tare: 0,
+          sample: { quantity: 2, netWeight: 1 },
+          sampleOnPan: true,
+          targetQuantity: 4,
+          stable: true,
+        });
     expect((await capture(10)).body.line).toMatchObject({ counted: 10, verdict: 'out' });
     const now = (await planner.agent.get(`/api/v1/orders/${order.id}`)).body.order;
 

@@ -33,7 +33,13 @@ const PAGES: Array<[path: string, allowed: readonly Role[], detail?: true]> = [
   ['/admin/mail', admin],
 ];
 
-const WHO: Record<Role, string> = { operator: 'a kitting operator', planner: 'a production planner', clerk: 'a stockroom clerk', quality: 'a quality engineer', admin: 'an administrator' };
+const WHO: Record<Role, string> = {
+  operator: 'a kitting operator',
+  planner: 'a production planner',
+  clerk: 'a stockroom clerk',
+  quality: 'a quality engineer',
+  admin: 'an administrator',
+};
 
 describe('page access', () => {
   const agents = new Map<Role, Agent>();
@@ -46,7 +52,8 @@ describe('page access', () => {
       for (const [path, allowed, detail] of PAGES) {
         const res = await agent.get(path);
         const refused = !allowed.includes(role);
-        if (refused ? res.status !== 403 : detail ? res.status === 403 : res.status !== 200) wrong.push(`${path}: ${res.status}, expected ${refused ? 403 : 200}`);
+        if (refused ? res.status !== 403 : detail ? res.status === 403 : res.status !== 200)
+          wrong.push(`${path}: ${res.status}, expected ${refused ? 403 : 200}`);
         // The notice comes in the page's payload (rendered by its script), naming the role.
         if (refused && !res.text.includes(`Not available to ${WHO[role]}`)) wrong.push(`${path}: 403 without the explanation`);
       }

@@ -9,13 +9,32 @@ describe('parts CSV export', () => {
     const { agent } = await signedIn('operator');
     const tag = unique('EXP').toUpperCase();
     testDb();
-    await Part.create({ partNumber: `${tag}-1`, description: '=HYPERLINK("http://example.test","click")', countingMethod: 'scale', apwG: '0.250000000', apwSampleSize: 20, pieceSpread: null, photoFile: null });
-    await Part.create({ partNumber: `${tag}-2`, description: '@SUM(A1:A9)', countingMethod: 'hand', apwG: null, apwSampleSize: null, pieceSpread: null, photoFile: null });
-    const res = await agent.get(`/api/v1/parts/export?q=${tag}`).buffer(true).parse((r, done) => {
-      let text = '';
-      r.on('data', (d: Buffer) => (text += d));
-      r.on('end', () => done(null, text));
+    await Part.create({
+      partNumber: `${tag}-1`,
+      description: '=HYPERLINK("http://example.test","click")',
+      countingMethod: 'scale',
+      apwG: '0.250000000',
+      apwSampleSize: 20,
+      pieceSpread: null,
+      photoFile: null,
     });
+    await Part.create({
+      partNumber: `${tag}-2`,
+      description: '@SUM(A1:A9)',
+      countingMethod: 'hand',
+      apwG: null,
+      apwSampleSize: null,
+      pieceSpread: null,
+      photoFile: null,
+    });
+    const res = await agent
+      .get(`/api/v1/parts/export?q=${tag}`)
+      .buffer(true)
+      .parse((r, done) => {
+        let text = '';
+        r.on('data', (d: Buffer) => (text += d));
+        r.on('end', () => done(null, text));
+      });
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename="parts-\d{4}-\d{2}-\d{2}\.csv"$/);

@@ -19,9 +19,21 @@ describe('print jobs over IPP', () => {
     expect(res.status).toBe(202);
     expect(res.body.jobs).toEqual([expect.objectContaining({ status: 'queued', labels: 2, batchCount: 1 })]);
     const [job] = await waitForBatch(agent, res.body.batchId);
-    expect(job).toMatchObject({ status: 'sent', pages: 2, error: null, note: null, printer: expect.stringMatching(/^ipp:\/\/127\.0\.0\.1:\d+\/printers\/labels$/) });
+    expect(job).toMatchObject({
+      status: 'sent',
+      pages: 2,
+      error: null,
+      note: null,
+      printer: expect.stringMatching(/^ipp:\/\/127\.0\.0\.1:\d+\/printers\/labels$/),
+    });
     const received = printedJob(job.printerJobId as number)!;
-    expect(received).toMatchObject({ queue: 'labels', documentFormat: 'application/pdf', userName: email, bytes: job.bytes, jobName: 'bin-2-labels-4x2in.pdf' });
+    expect(received).toMatchObject({
+      queue: 'labels',
+      documentFormat: 'application/pdf',
+      userName: email,
+      bytes: job.bytes,
+      jobName: 'bin-2-labels-4x2in.pdf',
+    });
     expect(isPdf(received.pdf)).toBe(true);
     const pages = await decodePdf(received.pdf);
     expect(pages.map((p) => p.find((s) => s.format === 'Code128')?.text)).toEqual(bins.map((b) => b.code));
@@ -47,9 +59,17 @@ describe('print jobs over IPP', () => {
     const bin = await stockPart((await createPart()).id, 1);
     const res = await agent.post('/api/v1/print-jobs').send({ template: 'bin', stock: 'letter-30up', ids: Array(250).fill(bin.id) });
     expect(res.status).toBe(202);
-    expect(res.body.jobs.map((j: { labels: number; batchIndex: number }) => [j.batchIndex, j.labels])).toEqual([[0, 100], [1, 100], [2, 50]]);
+    expect(res.body.jobs.map((j: { labels: number; batchIndex: number }) => [j.batchIndex, j.labels])).toEqual([
+      [0, 100],
+      [1, 100],
+      [2, 50],
+    ]);
     const jobs = await waitForBatch(agent, res.body.batchId);
-    expect(jobs.map((j) => [j.status, j.pages])).toEqual([['sent', 4], ['sent', 4], ['sent', 2]]);
+    expect(jobs.map((j) => [j.status, j.pages])).toEqual([
+      ['sent', 4],
+      ['sent', 4],
+      ['sent', 2],
+    ]);
     for (const job of jobs) {
       const received = printedJob(job.printerJobId as number)!;
       expect((await PDFDocument.load(received.pdf)).getPageCount()).toBe(job.pages);
@@ -62,7 +82,12 @@ describe('print jobs over IPP', () => {
     const bin = await stockPart((await createPart()).id, 1);
     const res = await agent.post('/api/v1/print-jobs').send({ template: 'bin', stock: '2x1in', ids: [bin.id], printer: 'nowhere' });
     const [job] = await waitForBatch(agent, res.body.batchId);
-    expect(job).toMatchObject({ status: 'failed', printerJobId: null, error: expect.stringContaining('client-error-not-found'), printer: expect.stringMatching(/\/printers\/nowhere$/) });
+    expect(job).toMatchObject({
+      status: 'failed',
+      printerJobId: null,
+      error: expect.stringContaining('client-error-not-found'),
+      printer: expect.stringMatching(/\/printers\/nowhere$/),
+    });
     const list = await agent.get('/api/v1/print-jobs');
     expect(list.status).toBe(200);
     expect(list.body.jobs.find((j: { id: number }) => j.id === job.id)).toMatchObject({ status: 'failed' });
@@ -87,7 +112,20 @@ describe('print jobs an app left behind when it stopped', () => {
     testDb();
     const job = (minutesAgo: number) => {
       const at = new Date(Date.now() - minutesAgo * 60_000);
-      return PrintJob.create({ batchId: crypto.randomUUID(), batchIndex: 0, batchCount: 1, template: 'bin', stock: '2x1in', itemIds: '[1]', labels: 1, printerUrl: 'ipp://127.0.0.1:1/printers/x', status: 'queued', requestedBy: null, createdAt: at, updatedAt: at });
+      return PrintJob.create({
+        batchId: crypto.randomUUID(),
+        batchIndex: 0,
+        batchCount: 1,
+        template: 'bin',
+        stock: '2x1in',
+        itemIds: '[1]',
+        labels: 1,
+        printerUrl: 'ipp://127.0.0.1:1/printers/x',
+        status: 'queued',
+        requestedBy: null,
+        createdAt: at,
+        updatedAt: at,
+      });
     };
     const stranded = await job(11);
     const fresh = await job(2);

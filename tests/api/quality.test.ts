@@ -81,7 +81,10 @@ describe('calibration records and lock-out', () => {
     expect(locked).toMatchObject({ status: 'locked' });
     expect(locked!.statusReason).toMatch(/error beyond MPE at 1000 g/);
 
-    const capture = await operator.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send({ purpose: 'part', partId: part.id, scaleId: scale.id, gross: 60, tare: 0, sample: { quantity: 10, netWeight: 6 }, stable: true });
+    const capture = await operator.agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send({ purpose: 'part', partId: part.id, scaleId: scale.id, gross: 60, tare: 0, sample: { quantity: 10, netWeight: 6 }, stable: true });
     expect(capture.status).toBe(422);
     expect(capture.body.error.code).toBe('scale_locked');
 
@@ -165,7 +168,17 @@ describe('a scale past its calibration date', () => {
       agent
         .post('/api/v1/counts')
         .set('Idempotency-Key', randomUUID())
-        .send({ purpose: 'part', partId: part.id, scaleId: scale.id, unit: 'g', gross: 20, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true });
+        .send({
+          purpose: 'part',
+          partId: part.id,
+          scaleId: scale.id,
+          unit: 'g',
+          gross: 20,
+          tare: 0,
+          sample: { quantity: 20, netWeight: 10 },
+          sampleOnPan: false,
+          stable: true,
+        });
     // The test server's site days are UTC days (TZ=UTC).
     await Scale.update({ calibrationDueAt: utcDay(0) }, { where: { id: scale.id } });
     expect((await capture()).status).toBe(201);
@@ -174,7 +187,9 @@ describe('a scale past its calibration date', () => {
     expect(refused.status).toBe(422);
     expect(refused.body.error).toMatchObject({ code: 'scale_locked', message: expect.stringContaining(`was due for calibration on ${utcDay(-1)}`) });
     expect((await Scale.findByPk(scale.id))!.status).toBe('in_service');
-    const sample = await agent.post(`/api/v1/parts/${part.id}/samples`).send({ scaleId: scale.id, unit: 'g', quantity: 3, netWeight: 1.5, increments: [0.5, 0.5, 0.5] });
+    const sample = await agent
+      .post(`/api/v1/parts/${part.id}/samples`)
+      .send({ scaleId: scale.id, unit: 'g', quantity: 3, netWeight: 1.5, increments: [0.5, 0.5, 0.5] });
     expect(sample.status).toBe(422);
   });
 });
@@ -196,7 +211,10 @@ describe('sampling plans and count audits', () => {
     const part = await createPart({ pieceSpread: 0.001 });
     const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
     for (let i = 0; i < 10; i++) {
-      const res = await operator.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send({ purpose: 'part', partId: part.id, scaleId: scale.id, gross: 25 + i * 0.25, tare: 0, sample: { quantity: 20, netWeight: 5 }, stable: true });
+      const res = await operator.agent
+        .post('/api/v1/counts')
+        .set('Idempotency-Key', randomUUID())
+        .send({ purpose: 'part', partId: part.id, scaleId: scale.id, gross: 25 + i * 0.25, tare: 0, sample: { quantity: 20, netWeight: 5 }, stable: true });
       expect(res.status).toBe(201);
     }
     const [from, today] = [utcDay(-1), utcDay()];
@@ -206,7 +224,9 @@ describe('sampling plans and count audits', () => {
     const audit = created.body.audit;
     expect(audit).toMatchObject({ lotSize: 10, codeLetter: 'B', sampleSize: 5, accept: 0, reject: 1, seed: 12345, status: 'open' });
     const again = await quality.agent.post('/api/v1/audits').send({ population: { from, to: today, partId: part.id }, aql: 2.5, seed: 12345 });
-    expect(again.body.audit.items.map((i: { countEventId: number }) => i.countEventId)).toEqual(audit.items.map((i: { countEventId: number }) => i.countEventId));
+    expect(again.body.audit.items.map((i: { countEventId: number }) => i.countEventId)).toEqual(
+      audit.items.map((i: { countEventId: number }) => i.countEventId),
+    );
 
     // Key in recounts: all right except one that is two pieces off an exact count.
     let last;
@@ -235,7 +255,10 @@ describe('sampling plans and count audits', () => {
     const op = request.agent(baseUrl());
     await op.post('/api/v1/session').send({ email: sneaky.email, password: 'correct horse battery' });
     for (let i = 0; i < 2; i++) {
-      await op.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send({ purpose: 'part', partId: part.id, scaleId: scale.id, gross: 60, tare: 0, sample: { quantity: 10, netWeight: 6 }, stable: true });
+      await op
+        .post('/api/v1/counts')
+        .set('Idempotency-Key', randomUUID())
+        .send({ purpose: 'part', partId: part.id, scaleId: scale.id, gross: 60, tare: 0, sample: { quantity: 10, netWeight: 6 }, stable: true });
     }
     const [from, today] = [utcDay(-1), utcDay()];
     const audit = (await quality.agent.post('/api/v1/audits').send({ population: { from, to: today, partId: part.id }, aql: 6.5 })).body.audit;

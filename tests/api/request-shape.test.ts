@@ -33,7 +33,10 @@ describe('request shape', () => {
     // The same body declared as JSON, with the charset spelled out or as a +json type, is taken.
     const ok = await agent.post('/api/v1/parts').set('Content-Type', 'application/json; charset=UTF-8').send(json);
     expect(ok.status).toBe(201);
-    const other = await agent.post('/api/v1/parts').set('Content-Type', 'application/merge-patch+json').send(JSON.stringify({ partNumber: `${partNumber}-2`, description: 'Spring washer M5' }));
+    const other = await agent
+      .post('/api/v1/parts')
+      .set('Content-Type', 'application/merge-patch+json')
+      .send(JSON.stringify({ partNumber: `${partNumber}-2`, description: 'Spring washer M5' }));
     expect(other.status).toBe(201);
   });
 

@@ -58,7 +58,13 @@ const MATRIX: Entry[] = [
   { method: 'PATCH', route: '/api/v1/parts/[id]', allowed: partEditors, path: '/api/v1/parts/999999', body: {} },
   { method: 'GET', route: '/api/v1/parts/[id]/samples', allowed: everyone, path: '/api/v1/parts/999999/samples' },
   { method: 'POST', route: '/api/v1/parts/[id]/samples', allowed: capture, path: '/api/v1/parts/999999/samples', body: {} },
-  { method: 'POST', route: '/api/v1/parts/[id]/samples/[sampleId]/decision', allowed: deciders, path: '/api/v1/parts/999999/samples/999999/decision', body: {} },
+  {
+    method: 'POST',
+    route: '/api/v1/parts/[id]/samples/[sampleId]/decision',
+    allowed: deciders,
+    path: '/api/v1/parts/999999/samples/999999/decision',
+    body: {},
+  },
   { method: 'GET', route: '/api/v1/counts', allowed: everyone },
   { method: 'POST', route: '/api/v1/counts', allowed: capture, body: {} },
   { method: 'GET', route: '/api/v1/counts/export', allowed: everyone },
@@ -105,7 +111,12 @@ const MATRIX: Entry[] = [
   { method: 'GET', route: '/api/v1/test-weights/[id]/certificate', allowed: everyone, path: '/api/v1/test-weights/999999/certificate' },
   { method: 'PUT', route: '/api/v1/test-weights/[id]/certificate', allowed: quality, path: '/api/v1/test-weights/999999/certificate' },
   // Addresses no route serves answer 404 to anyone, signed in or not.
-  ...(['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const).map((method): Entry => ({ method, route: '/api/[...path]', allowed: 'public', path: '/api/v1/no-such-route' })),
+  ...(['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const).map((method): Entry => ({
+    method,
+    route: '/api/[...path]',
+    allowed: 'public',
+    path: '/api/v1/no-such-route',
+  })),
 ];
 
 const declared = apiRouteFiles().flatMap(({ route, source }) => {

@@ -39,7 +39,11 @@ describe('samples that teach a part', () => {
   });
 
   it('holds a sample far from the history: it is kept but moves neither APW nor spread until someone accepts it', async () => {
-    const { agent, part, scale } = await partFrom([{ quantity: 20, netWeight: 24.06 }, { quantity: 25, netWeight: 30.09 }, { quantity: 20, netWeight: 24.02 }]);
+    const { agent, part, scale } = await partFrom([
+      { quantity: 20, netWeight: 24.06 },
+      { quantity: 25, netWeight: 30.09 },
+      { quantity: 20, netWeight: 24.02 },
+    ]);
     const before = (await agent.get(`/api/v1/parts/${part.id}`)).body.part;
     // 1.5 g a piece against a history of 1.203 g: a wrong part, or a miscount
     const far = await agent.post(`/api/v1/parts/${part.id}/samples`).send({ scaleId: scale.id, quantity: 20, netWeight: 30 });
@@ -61,7 +65,10 @@ describe('samples that teach a part', () => {
   });
 
   it('keeps a rejected sample out of everything the part learns', async () => {
-    const { agent, part, scale } = await partFrom([{ quantity: 20, netWeight: 24.06 }, { quantity: 20, netWeight: 24.1 }]);
+    const { agent, part, scale } = await partFrom([
+      { quantity: 20, netWeight: 24.06 },
+      { quantity: 20, netWeight: 24.1 },
+    ]);
     const far = await agent.post(`/api/v1/parts/${part.id}/samples`).send({ scaleId: scale.id, quantity: 20, netWeight: 12 });
     expect(far.body.held).toBe(true);
     const { agent: planner } = await signedIn('planner');
@@ -80,7 +87,10 @@ describe('samples that teach a part', () => {
     const part = await createPart();
     const scale = await fineScale();
     const pieces = [1.2, 1.212, 1.188, 1.2, 1.224, 1.176, 1.2, 1.206, 1.194, 1.2];
-    const send = (increments: number[]) => agent.post(`/api/v1/parts/${part.id}/samples`).send({ scaleId: scale.id, quantity: increments.length, netWeight: increments.reduce((a, b) => a + b, 0), increments });
+    const send = (increments: number[]) =>
+      agent
+        .post(`/api/v1/parts/${part.id}/samples`)
+        .send({ scaleId: scale.id, quantity: increments.length, netWeight: increments.reduce((a, b) => a + b, 0), increments });
     const first = await send(pieces);
     expect(first.status).toBe(201);
     expect(first.body.part).toMatchObject({ spreadLearned: true, spreadDegreesOfFreedom: 9, spreadBelief: { kind: 'learned', degreesOfFreedom: 9 } });

@@ -17,7 +17,15 @@ describe('scales and containers', () => {
     const { agent } = await signedIn('admin');
     const res = await agent.post('/api/v1/scales').send(bench());
     expect(res.status).toBe(201);
-    expect(res.body.scale).toMatchObject({ unit: 'g', capacity: 6000, division: 0.1, verificationInterval: 1, minLoad: 20, intervals: 6000, status: 'in_service' });
+    expect(res.body.scale).toMatchObject({
+      unit: 'g',
+      capacity: 6000,
+      division: 0.1,
+      verificationInterval: 1,
+      minLoad: 20,
+      intervals: 6000,
+      status: 'in_service',
+    });
     expect(res.body.scale.connection).toMatchObject({ kind: 'serial', dataBits: 8, parity: 'none', stopBits: 1, pollIntervalMs: 200 });
   });
 

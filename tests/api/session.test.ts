@@ -47,7 +47,9 @@ describe('session API', () => {
   it('answers wrong credentials with 401 invalid_credentials and the same message for unknown accounts', async () => {
     const user = await createUser('clerk');
     const wrong = await anonymous().post('/api/v1/session').send({ email: user.email, password: 'not the password' });
-    const unknown = await anonymous().post('/api/v1/session').send({ email: `${unique('nobody')}@example.test`, password: 'whatever' });
+    const unknown = await anonymous()
+      .post('/api/v1/session')
+      .send({ email: `${unique('nobody')}@example.test`, password: 'whatever' });
     expect(wrong.status).toBe(401);
     expect(wrong.body.error.code).toBe('invalid_credentials');
     expect(unknown.status).toBe(401);
@@ -135,10 +137,15 @@ describe('session API', () => {
       [`address:${tag}-blocked`, 'UTC_TIMESTAMP() - INTERVAL 2 DAY', 'UTC_TIMESTAMP() + INTERVAL 1 HOUR'],
     ];
     for (const [key, start, blocked] of rows) {
-      await db.query(`INSERT INTO sign_in_throttles (scope_key, failures, window_start, blocked_until) VALUES (?, 3, ${start}, ${blocked})`, { replacements: [key] });
+      await db.query(`INSERT INTO sign_in_throttles (scope_key, failures, window_start, blocked_until) VALUES (?, 3, ${start}, ${blocked})`, {
+        replacements: [key],
+      });
     }
     expect(await pruneSignInThrottles()).toBeGreaterThanOrEqual(1);
-    const left = await db.query<{ scope_key: string }>('SELECT scope_key FROM sign_in_throttles WHERE scope_key LIKE ? ORDER BY scope_key', { replacements: [`address:${tag}%`], type: QueryTypes.SELECT });
+    const left = await db.query<{ scope_key: string }>('SELECT scope_key FROM sign_in_throttles WHERE scope_key LIKE ? ORDER BY scope_key', {
+      replacements: [`address:${tag}%`],
+      type: QueryTypes.SELECT,
+    });
     expect(left.map((r) => r.scope_key)).toEqual([`address:${tag}-blocked`, `address:${tag}-fresh`]);
   });
 
@@ -148,7 +155,8 @@ describe('session API', () => {
       const user = await createUser('operator');
       // Sent from a loopback address of this test's own, so its tries count against no one else's.
       const from = someAddress('127.0');
-      const send = (password: string, claimed: string) => postFrom(from, `${app.url}/api/v1/session`, { email: user.email, password }, { 'X-Forwarded-For': claimed });
+      const send = (password: string, claimed: string) =>
+        postFrom(from, `${app.url}/api/v1/session`, { email: user.email, password }, { 'X-Forwarded-For': claimed });
       for (let i = 0; i < 5; i++) expect(await send(`wrong-${i}`, `10.92.0.${i}`)).toBe(401);
       // Every try came from the same socket address, whatever the header said: that pair is blocked.
       expect(await send(TEST_PASSWORD, '10.92.1.1')).toBe(429);

@@ -30,7 +30,10 @@ describe('graceful shutdown', () => {
 
       // The release waits halfway in on a stock row held here while the app is told to stop.
       const locks = await holdRowLocks([{ sql: 'SELECT * FROM part_stock WHERE part_id = ?', values: [partId] }]);
-      const release = planner.agent.post(`/api/v1/orders/${order.id}/release`).send({ version: order.version }).then((r) => r);
+      const release = planner.agent
+        .post(`/api/v1/orders/${order.id}/release`)
+        .send({ version: order.version })
+        .then((r) => r);
       await waitForLockWaits(1);
       const exited = once(app.child, 'exit');
       app.child.kill('SIGTERM');

@@ -42,13 +42,24 @@ describe('site time zone', () => {
     const made = await agent
       .post('/api/v1/counts')
       .set('Idempotency-Key', randomUUID())
-      .send({ purpose: 'part', partId: part.id, scaleId: scale.id, unit: 'g', gross: 20, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true });
+      .send({
+        purpose: 'part',
+        partId: part.id,
+        scaleId: scale.id,
+        unit: 'g',
+        gross: 20,
+        tare: 0,
+        sample: { quantity: 20, netWeight: 10 },
+        sampleOnPan: false,
+        stable: true,
+      });
     expect(made.status).toBe(201);
     const at = DateTime.fromISO(made.body.count.createdAt, { zone: ZONE });
     const day = at.toISODate()!;
     const dayBefore = at.minus({ days: 1 }).toISODate()!;
 
-    const ids = async (from: string, to: string) => (await agent.get('/api/v1/counts').query({ partId: part.id, from, to })).body.counts.map((c: { id: number }) => c.id);
+    const ids = async (from: string, to: string) =>
+      (await agent.get('/api/v1/counts').query({ partId: part.id, from, to })).body.counts.map((c: { id: number }) => c.id);
     expect(await ids(day, day)).toEqual([made.body.count.id]);
     expect(await ids(dayBefore, dayBefore)).toEqual([]);
 

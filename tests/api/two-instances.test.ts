@@ -16,7 +16,11 @@ async function signedInOnBoth(role: Role, urls: [string, string]): Promise<{ a: 
   expect(res.status).toBe(200);
   const cookie = res.headers['set-cookie'] as unknown as string[];
   const b = request.agent(urls[1]);
-  b.jar.setCookies(cookie.map((c) => c.split(';')[0]), '127.0.0.1', '/');
+  b.jar.setCookies(
+    cookie.map((c) => c.split(';')[0]),
+    '127.0.0.1',
+    '/',
+  );
   return { a, b, email: user.email };
 }
 
@@ -39,7 +43,9 @@ describe('two app instances on one database', () => {
     const pin = await createPart({ pieceSpread: 0.001 });
     await stockPart(pin.id, 500);
     const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
-    const kit = await planner.a.post('/api/v1/kits').send({ code: unique('KIT'), revision: 'A', description: 'Spindle kit', components: [{ partId: pin.id, quantity: 10 }] });
+    const kit = await planner.a
+      .post('/api/v1/kits')
+      .send({ code: unique('KIT'), revision: 'A', description: 'Spindle kit', components: [{ partId: pin.id, quantity: 10 }] });
     expect(kit.status).toBe(201);
     const order = (await planner.a.post('/api/v1/orders').send({ kitId: kit.body.kit.id, quantity: 10 })).body.order;
     const released = await planner.b.post(`/api/v1/orders/${order.id}/release`).send({ version: order.version });
@@ -47,9 +53,23 @@ describe('two app instances on one database', () => {
     const lineId = released.body.order.lines[0].id;
 
     // 100 pins of 0.25 g, sample of 20 on the pan; the same capture reaches both instances.
-    const body = { purpose: 'kit_line', orderLineId: lineId, partId: pin.id, scaleId: scale.id, gross: 25, tare: 0, sample: { quantity: 20, netWeight: 5 }, sampleOnPan: true, targetQuantity: 100, stable: true };
+    const body = {
+      purpose: 'kit_line',
+      orderLineId: lineId,
+      partId: pin.id,
+      scaleId: scale.id,
+      gross: 25,
+      tare: 0,
+      sample: { quantity: 20, netWeight: 5 },
+      sampleOnPan: true,
+      targetQuantity: 100,
+      stable: true,
+    };
     const key = randomUUID();
-    const [onA, onB] = await Promise.all([operator.a.post('/api/v1/counts').set('Idempotency-Key', key).send(body), operator.b.post('/api/v1/counts').set('Idempotency-Key', key).send(body)]);
+    const [onA, onB] = await Promise.all([
+      operator.a.post('/api/v1/counts').set('Idempotency-Key', key).send(body),
+      operator.b.post('/api/v1/counts').set('Idempotency-Key', key).send(body),
+    ]);
     expect([onA.status, onB.status]).toEqual([201, 201]);
     expect(onA.body.count.id).toBe(onB.body.count.id);
     expect([onA.headers['idempotent-replayed'], onB.headers['idempotent-replayed']].sort()).toEqual(['false', 'true']);
@@ -64,10 +84,16 @@ describe('two app instances on one database', () => {
     const planner = await signedInOnBoth('planner', urls);
     const washer = await createPart();
     await stockPart(washer.id, 60);
-    const kit = (await planner.a.post('/api/v1/kits').send({ code: unique('KIT'), revision: 'A', description: 'Washer kit', components: [{ partId: washer.id, quantity: 4 }] })).body.kit;
+    const kit = (
+      await planner.a
+        .post('/api/v1/kits')
+        .send({ code: unique('KIT'), revision: 'A', description: 'Washer kit', components: [{ partId: washer.id, quantity: 4 }] })
+    ).body.kit;
     // Each order needs 48 of the 60 on hand: only one of them can be released.
     const orders = await Promise.all([1, 2].map(async () => (await planner.a.post('/api/v1/orders').send({ kitId: kit.id, quantity: 12 })).body.order));
-    const results = await Promise.all([planner.a, planner.b].map((agent, i) => agent.post(`/api/v1/orders/${orders[i].id}/release`).send({ version: orders[i].version })));
+    const results = await Promise.all(
+      [planner.a, planner.b].map((agent, i) => agent.post(`/api/v1/orders/${orders[i].id}/release`).send({ version: orders[i].version })),
+    );
     expect(results.map((r) => r.status).sort()).toEqual([200, 422]);
     testDb();
     expect(await PartStock.findByPk(washer.id)).toMatchObject({ onHand: 60, reserved: 48 });

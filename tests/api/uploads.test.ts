@@ -23,7 +23,9 @@ describe('uploads', () => {
   it('refuses a file that only claims to be an image, and an oversized one, writing nothing', async () => {
     const { agent } = await signedIn('clerk');
     const part = await createPart();
-    const fake = await agent.put(`/api/v1/parts/${part.id}/photo`).attach('photo', Buffer.from('<html><script>alert(1)</script>'), { filename: 'photo.jpg', contentType: 'image/jpeg' });
+    const fake = await agent
+      .put(`/api/v1/parts/${part.id}/photo`)
+      .attach('photo', Buffer.from('<html><script>alert(1)</script>'), { filename: 'photo.jpg', contentType: 'image/jpeg' });
     expect(fake.status).toBe(400);
     expect(fake.body.error.fields.photo).toMatch(/JPEG, PNG, WEBP/);
     const big = await agent.put(`/api/v1/parts/${part.id}/photo`).attach('photo', Buffer.concat([PNG, Buffer.alloc(5 * 1024 * 1024)]), { filename: 'big.png' });

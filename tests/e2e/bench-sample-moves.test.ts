@@ -48,7 +48,12 @@ describe('the bench: a sample that moves on (browser, simulated scales)', () => 
     await putOn(page, 60);
     expect(await liveCount(page)).toBe(60);
     const result = page.getByTestId('capture-result');
-    await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await result.count()) === 1, CAPTURE_WAIT_MS);
+    await whenSettled(
+      page,
+      () => page.getByRole('button', { name: /Capture this count/ }).click(),
+      async () => (await result.count()) === 1,
+      CAPTURE_WAIT_MS,
+    );
     testDb();
     const [event] = await CountEvent.findAll({ where: { partId: part.id } });
     expect(event).toMatchObject({ scaleId: fine.id, bulkScaleId: bulk.id, count: 60, sampleQuantity: 10, sampleOnPan: false });
@@ -89,7 +94,12 @@ describe('the bench: a sample that moves on (browser, simulated scales)', () => 
     await putOn(page, 50);
     expect(await liveCount(page)).toBe(50);
     const result = page.getByTestId('capture-result');
-    await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await result.count()) === 1, CAPTURE_WAIT_MS);
+    await whenSettled(
+      page,
+      () => page.getByRole('button', { name: /Capture this count/ }).click(),
+      async () => (await result.count()) === 1,
+      CAPTURE_WAIT_MS,
+    );
     testDb();
     const [event] = await CountEvent.findAll({ where: { partId: part.id } });
     expect(event).toMatchObject({ scaleId: scale.id, bulkScaleId: null, count: 50, sampleQuantity: 20, sampleOnPan: false });

@@ -59,7 +59,12 @@ describe('the bench (browser, simulated scale)', () => {
     await screenshot(page, 'bench-4-count');
 
     const result = page.getByTestId('capture-result');
-    await whenSettled(page, () => page.keyboard.press('c'), async () => (await result.count()) === 1, CAPTURE_WAIT_MS);
+    await whenSettled(
+      page,
+      () => page.keyboard.press('c'),
+      async () => (await result.count()) === 1,
+      CAPTURE_WAIT_MS,
+    );
     expect(await result.getAttribute('data-count')).toBe('100');
     await screenshot(page, 'bench-5-captured');
     testDb();
@@ -156,7 +161,11 @@ describe('the bench (browser, simulated scale)', () => {
     const part = await createPart({ pieceSpread: 0.01 });
     await stockPart(part.id, 500);
     const planner = await signedIn('planner');
-    const kit = (await planner.agent.post('/api/v1/kits').send({ code: unique('KIT'), revision: 'A', description: 'Bench kit', components: [{ partId: part.id, quantity: 10 }] })).body.kit;
+    const kit = (
+      await planner.agent
+        .post('/api/v1/kits')
+        .send({ code: unique('KIT'), revision: 'A', description: 'Bench kit', components: [{ partId: part.id, quantity: 10 }] })
+    ).body.kit;
     // Due today: the queue lists dated orders first, so the suite's undated ones cannot push this line out of it.
     const draft = (await planner.agent.post('/api/v1/orders').send({ kitId: kit.id, quantity: 10, dueDate: new Date().toISOString().slice(0, 10) })).body.order;
     const order = (await planner.agent.post(`/api/v1/orders/${draft.id}/release`).send({ version: draft.version })).body.order;
@@ -179,7 +188,12 @@ describe('the bench (browser, simulated scale)', () => {
     await putOn(page, 70);
     await screenshot(page, 'bench-queue-count');
     const result = page.getByTestId('capture-result');
-    await whenSettled(page, () => page.keyboard.press('c'), async () => (await result.count()) === 1, CAPTURE_WAIT_MS);
+    await whenSettled(
+      page,
+      () => page.keyboard.press('c'),
+      async () => (await result.count()) === 1,
+      CAPTURE_WAIT_MS,
+    );
     testDb();
     const line = await BuildOrderLine.findByPk(order.lines[0].id);
     expect(line).toMatchObject({ counted: 100, captures: 1, verdict: 'in' });
@@ -214,7 +228,12 @@ describe('the bench (browser, simulated scale)', () => {
     await putOn(page, 300);
     await screenshot(page, 'bench-bin-2-count');
     const result = page.getByTestId('capture-result');
-    await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await result.count()) === 1, CAPTURE_WAIT_MS);
+    await whenSettled(
+      page,
+      () => page.getByRole('button', { name: /Capture this count/ }).click(),
+      async () => (await result.count()) === 1,
+      CAPTURE_WAIT_MS,
+    );
     await screenshot(page, 'bench-bin-3-captured');
     // The clerk is told what became of the bin, with the count's own range.
     expect(await page.getByTestId('bin-outcome').textContent()).toMatch(/^(Booked|Held for a decision|Nothing to change)/);
@@ -345,13 +364,21 @@ describe('the bench (browser, simulated scale)', () => {
     await putOn(page, 10);
     await landscape.setOffline(true);
     const queued = page.getByTestId('capture-queue').locator('li');
-    await whenSettled(page, () => page.getByRole('button', { name: /Capture this count/ }).click(), async () => (await queued.count()) === 1, CAPTURE_WAIT_MS);
+    await whenSettled(
+      page,
+      () => page.getByRole('button', { name: /Capture this count/ }).click(),
+      async () => (await queued.count()) === 1,
+      CAPTURE_WAIT_MS,
+    );
     const key = (await queued.first().getAttribute('data-key'))!;
     await screenshot(page, 'bench-offline-queued');
     testDb();
     expect(await CountEvent.count({ where: { partId: part.id } })).toBe(0);
     await landscape.setOffline(false);
-    await page.getByRole('button', { name: 'Send now' }).click({ timeout: 1000 }).catch(() => undefined); // the 'online' event may have sent it already
+    await page
+      .getByRole('button', { name: 'Send now' })
+      .click({ timeout: 1000 })
+      .catch(() => undefined); // the 'online' event may have sent it already
     await expect.poll(() => page.getByTestId('capture-queue').count(), { timeout: 15_000 }).toBe(0);
     const events = await CountEvent.findAll({ where: { partId: part.id } });
     expect(events).toHaveLength(1);

@@ -26,11 +26,24 @@ describe('count log (browser)', () => {
       const res = await agent
         .post('/api/v1/counts')
         .set('Idempotency-Key', randomUUID())
-        .send({ purpose: 'part', partId: part.id, scaleId: scale.id, unit: 'g', gross: pieces * 0.5, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true });
+        .send({
+          purpose: 'part',
+          partId: part.id,
+          scaleId: scale.id,
+          unit: 'g',
+          gross: pieces * 0.5,
+          tare: 0,
+          sample: { quantity: 20, netWeight: 10 },
+          sampleOnPan: false,
+          stable: true,
+        });
       expect(res.status).toBe(201);
     }
 
-    for (const [context, size] of [[desk, '1280x800'], [tablet, '800x1280']] as const) {
+    for (const [context, size] of [
+      [desk, '1280x800'],
+      [tablet, '800x1280'],
+    ] as const) {
       const page = await context.newPage();
       await signInThroughPage(page, 'quality');
       await followNav(page, 'Count log');
@@ -49,7 +62,9 @@ describe('count log (browser)', () => {
       const row = gridRows(page, 'Count log', part.partNumber);
       await expect.poll(() => row.textContent()).toContain('not exact');
       expect(await row.textContent()).toContain('400');
-      expect(await page.getByRole('link', { name: 'Download CSV' }).getAttribute('href')).toBe(`/api/v1/counts/export?partNumber=${part.partNumber}&notExact=1`);
+      expect(await page.getByRole('link', { name: 'Download CSV' }).getAttribute('href')).toBe(
+        `/api/v1/counts/export?partNumber=${part.partNumber}&notExact=1`,
+      );
       await page.close();
     }
   });

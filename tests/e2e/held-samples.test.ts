@@ -14,11 +14,12 @@ describe('samples held for review (browser)', () => {
     await desk.close();
   });
 
-  it('a quality engineer sees a sample far from its part\'s history, is told what accepting does, and accepts it', async () => {
+  it("a quality engineer sees a sample far from its part's history, is told what accepting does, and accepts it", async () => {
     const { agent } = await signedIn('operator');
     const part = await createPart();
     const scale = await createScale({ divisionG: 0.001, eG: 0.01, capacityG: 600, repeatabilityG: 0.0005 });
-    for (const netWeight of [24.06, 24.1]) expect((await agent.post(`/api/v1/parts/${part.id}/samples`).send({ scaleId: scale.id, quantity: 20, netWeight })).status).toBe(201);
+    for (const netWeight of [24.06, 24.1])
+      expect((await agent.post(`/api/v1/parts/${part.id}/samples`).send({ scaleId: scale.id, quantity: 20, netWeight })).status).toBe(201);
     const far = await agent.post(`/api/v1/parts/${part.id}/samples`).send({ scaleId: scale.id, quantity: 20, netWeight: 30 });
     expect(far.body.held).toBe(true);
 

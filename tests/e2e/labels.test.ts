@@ -22,14 +22,30 @@ describe('labels (browser)', () => {
     const bin = await stockPart(part.id, 40);
     // Older jobs already in the log, as in any shop: the new one must be found among them.
     testDb();
-    for (const labels of [3, 7]) await PrintJob.create({ batchId: randomUUID(), batchIndex: 0, batchCount: 1, template: 'part', stock: '2x1in', itemIds: '[1]', labels, printerUrl: 'ipp://127.0.0.1:1/printers/labels', status: 'sent', requestedBy: null });
+    for (const labels of [3, 7])
+      await PrintJob.create({
+        batchId: randomUUID(),
+        batchIndex: 0,
+        batchCount: 1,
+        template: 'part',
+        stock: '2x1in',
+        itemIds: '[1]',
+        labels,
+        printerUrl: 'ipp://127.0.0.1:1/printers/labels',
+        status: 'sent',
+        requestedBy: null,
+      });
     const page = await desk.newPage();
     await signInThroughPage(page, 'clerk');
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Labels' }).click();
     await page.waitForURL('**/labels');
 
     await page.getByLabel('Find').fill(bin.code);
-    await page.getByRole('region', { name: 'Bins to label' }).getByRole('row', { name: new RegExp(bin.code) }).getByRole('checkbox').check();
+    await page
+      .getByRole('region', { name: 'Bins to label' })
+      .getByRole('row', { name: new RegExp(bin.code) })
+      .getByRole('checkbox')
+      .check();
     await expect.poll(() => page.getByTestId('label-status').textContent()).toBe('1 bin label chosen.');
     await page.getByLabel('Label stock').selectOption('2x1in');
 
@@ -43,7 +59,10 @@ describe('labels (browser)', () => {
     await page.getByRole('button', { name: 'Send to printer' }).click();
     await expect.poll(() => page.getByTestId('label-status').textContent()).toMatch(/^1 bin label queued for the printer as job \d+\.$/);
     const jobId = /job (\d+)/.exec((await page.getByTestId('label-status').textContent())!)![1];
-    const row = page.getByRole('region', { name: 'Print log' }).getByRole('row').filter({ has: page.getByRole('gridcell', { name: jobId, exact: true }) });
+    const row = page
+      .getByRole('region', { name: 'Print log' })
+      .getByRole('row')
+      .filter({ has: page.getByRole('gridcell', { name: jobId, exact: true }) });
     await expect.poll(() => row.textContent(), { timeout: 20_000 }).toMatch(/1 bin.*2x1in.*Sent/);
     await expect.poll(() => printedJobs().length).toBe(before + 1);
     const [printed] = await decodePdf(printedJobs().at(-1)!.pdf);

@@ -72,7 +72,18 @@ describe('planner (browser)', () => {
       operator.agent
         .post('/api/v1/counts')
         .set('Idempotency-Key', randomUUID())
-        .send({ purpose: 'kit_line', orderLineId: lineOf(partId).id, partId, scaleId: scale.id, gross: pieces * 0.25, tare: 0, sample: { quantity: 20, netWeight: 5 }, sampleOnPan: true, targetQuantity: pieces, stable: true });
+        .send({
+          purpose: 'kit_line',
+          orderLineId: lineOf(partId).id,
+          partId,
+          scaleId: scale.id,
+          gross: pieces * 0.25,
+          tare: 0,
+          sample: { quantity: 20, netWeight: 5 },
+          sampleOnPan: true,
+          targetQuantity: pieces,
+          stable: true,
+        });
     expect((await capture(pin.id, 100)).status).toBe(201);
     await expect.poll(() => page.getByTestId('order-progress').textContent(), { timeout: 15_000 }).toContain('1 / 2');
     expect(await page.getByTestId('order-status').textContent()).toBe('Being kitted');
@@ -135,7 +146,14 @@ describe('planner (browser)', () => {
     await expect.poll(() => form.getByTestId('part-photo').textContent()).toContain('Photo saved');
     const img = form.getByRole('img', { name: `Photo of ${part.partNumber}` });
     await expect.poll(() => img.evaluate((el: HTMLImageElement) => el.complete && el.naturalWidth)).toBeGreaterThan(0);
-    await expect.poll(() => page.getByRole('row', { name: new RegExp(part.partNumber) }).getByRole('img').count()).toBe(1);
+    await expect
+      .poll(() =>
+        page
+          .getByRole('row', { name: new RegExp(part.partNumber) })
+          .getByRole('img')
+          .count(),
+      )
+      .toBe(1);
 
     // The photo bumped the part's version; the form took the new one, so saving still works.
     await form.getByLabel('Description').fill('Pin with a photo');

@@ -28,7 +28,10 @@ async function openAudit(): Promise<number> {
   const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
   const from = today();
   for (let i = 0; i < 10; i++) {
-    await operator.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(partCapture(part.id, scale.id, i));
+    await operator.agent
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send(partCapture(part.id, scale.id, i));
   }
   const res = await quality.agent.post('/api/v1/audits').send({ population: { from, to: today(), partId: part.id }, aql: 2.5 });
   expect(res.status).toBe(201);
@@ -100,7 +103,10 @@ describe('quality pages (browser)', () => {
     const scale = await createScale({ divisionG: 0.01, eG: 0.1, capacityG: 600, repeatabilityG: 0 });
     const from = today();
     for (let i = 0; i < 10; i++) {
-      const res = await operator.agent.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send(partCapture(part.id, scale.id, i));
+      const res = await operator.agent
+        .post('/api/v1/counts')
+        .set('Idempotency-Key', randomUUID())
+        .send(partCapture(part.id, scale.id, i));
       expect(res.status).toBe(201);
     }
     const page = await desk.newPage();
@@ -127,7 +133,9 @@ describe('quality pages (browser)', () => {
     // Everything right except the first, two pieces off: outside its ± U, so the lot (Ac 0) is rejected.
     await page.getByLabel(/^Hand count for item 1/).focus();
     for (const [i, item] of audit.items.entries()) {
-      await expect.poll(() => page.evaluate(() => document.activeElement?.getAttribute('aria-label') ?? ''), SAVED).toMatch(new RegExp(`^Hand count for item ${i + 1},`));
+      await expect
+        .poll(() => page.evaluate(() => document.activeElement?.getAttribute('aria-label') ?? ''), SAVED)
+        .toMatch(new RegExp(`^Hand count for item ${i + 1},`));
       await page.keyboard.type(String(i === 0 ? item.count - 2 : item.count));
       await page.keyboard.press('Enter');
     }
@@ -138,7 +146,14 @@ describe('quality pages (browser)', () => {
     await screenshot(page, 'audit-rejected');
 
     await page.goto(`/quality/reports?from=${from}&to=${today()}&by=part`);
-    await expect.poll(() => page.getByRole('table', { name: 'Accuracy by group' }).getByRole('row', { name: new RegExp(part.partNumber) }).textContent()).toContain('20.0 %');
+    await expect
+      .poll(() =>
+        page
+          .getByRole('table', { name: 'Accuracy by group' })
+          .getByRole('row', { name: new RegExp(part.partNumber) })
+          .textContent(),
+      )
+      .toContain('20.0 %');
     await page.close();
   });
 
@@ -151,7 +166,21 @@ describe('quality pages (browser)', () => {
     const code = `VZ-${String(1 + Math.floor(Math.random() * 99)).padStart(2, '0')}-${1 + Math.floor(Math.random() * 9)}-${String(1 + Math.floor(Math.random() * 99)).padStart(2, '0')}`;
     const bin = (await api.post('/api/v1/bins').send({ code, partId: part.id, bookQuantity: 1000, abcClass: 'A' })).body.bin;
     // 900 of 1 000 counted (0.5 g pieces): 100 pieces and 10 %, beyond both default limits.
-    const capture = await api.post('/api/v1/counts').set('Idempotency-Key', randomUUID()).send({ purpose: 'bin', binId: bin.id, binVersion: bin.version, partId: part.id, scaleId: scale.id, gross: 450, tare: 0, sample: { quantity: 20, netWeight: 10 }, sampleOnPan: false, stable: true });
+    const capture = await api
+      .post('/api/v1/counts')
+      .set('Idempotency-Key', randomUUID())
+      .send({
+        purpose: 'bin',
+        binId: bin.id,
+        binVersion: bin.version,
+        partId: part.id,
+        scaleId: scale.id,
+        gross: 450,
+        tare: 0,
+        sample: { quantity: 20, netWeight: 10 },
+        sampleOnPan: false,
+        stable: true,
+      });
     expect(capture.body.binCount).toMatchObject({ status: 'pending', variance: -100 });
 
     await clerkPage.goto('/');
@@ -185,7 +214,10 @@ describe('quality pages (browser)', () => {
     await qualityPage.close();
   });
 
-  for (const viewport of [{ width: 1280, height: 800 }, { width: 800, height: 1280 }]) {
+  for (const viewport of [
+    { width: 1280, height: 800 },
+    { width: 800, height: 1280 },
+  ]) {
     it(`shows every quality and stockroom page to an admin at ${viewport.width}×${viewport.height}`, async () => {
       const browser = await openBrowser(viewport);
       const page = await browser.newPage();

@@ -23,11 +23,18 @@ async function sidewaysOverflow(page: Page): Promise<number> {
 /** Visible buttons, selects and text fields in the page that are shorter than 44 px (labels of checkboxes are the target, not the box). */
 async function smallControls(page: Page): Promise<string[]> {
   return page.evaluate(() =>
-    [...document.querySelectorAll<HTMLElement>('main button, main select, main input:not([type=checkbox]):not([type=radio]):not([type=hidden]):not([type=file]), main [role=tab]')]
+    [
+      ...document.querySelectorAll<HTMLElement>(
+        'main button, main select, main input:not([type=checkbox]):not([type=radio]):not([type=hidden]):not([type=file]), main [role=tab]',
+      ),
+    ]
       .filter((el) => el.offsetParent !== null && !el.closest('.ag-root-wrapper'))
       .map((el) => [el, el.getBoundingClientRect()] as const)
       .filter(([, r]) => r.height < 43.5)
-      .map(([el, r]) => `${el.tagName.toLowerCase()} "${(el.textContent || el.getAttribute('aria-label') || el.getAttribute('name') || '').trim().slice(0, 40)}" ${Math.round(r.height)} px`),
+      .map(
+        ([el, r]) =>
+          `${el.tagName.toLowerCase()} "${(el.textContent || el.getAttribute('aria-label') || el.getAttribute('name') || '').trim().slice(0, 40)}" ${Math.round(r.height)} px`,
+      ),
   );
 }
 

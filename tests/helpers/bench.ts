@@ -10,7 +10,10 @@ export async function waitSettled(page: Page): Promise<void> {
 }
 
 export async function panButton(page: Page, name: string | RegExp): Promise<void> {
-  await page.getByRole('region', { name: /Practice pan/ }).getByRole('button', { name }).click();
+  await page
+    .getByRole('region', { name: /Practice pan/ })
+    .getByRole('button', { name })
+    .click();
 }
 
 export async function putOn(page: Page, n: number): Promise<void> {

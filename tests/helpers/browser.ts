@@ -18,7 +18,15 @@ export async function openBrowser(viewport = { width: 1280, height: 800 }, { jav
     viewport,
     javaScriptEnabled,
     baseURL: baseUrl(),
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   // Once close() resolves the browser process has exited and nothing writes to the profile any more.
   const close = context.close.bind(context);

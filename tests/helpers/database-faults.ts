@@ -21,7 +21,11 @@ export async function startDatabase(): Promise<void> {
 // An administrator's connection over the private socket: it may read information_schema.INNODB_TRX,
 // which the application account may not.
 export async function adminConnection(): Promise<mariadb.Connection> {
-  const conn = await mariadb.createConnection({ socketPath: path.join(root, `.data/${profile}/run/mariadb.sock`), user: 'root', database: process.env.DB_NAME });
+  const conn = await mariadb.createConnection({
+    socketPath: path.join(root, `.data/${profile}/run/mariadb.sock`),
+    user: 'root',
+    database: process.env.DB_NAME,
+  });
   // A crash closes it under us; that is expected here, not an unhandled error.
   conn.on('error', () => undefined);
   return conn;
@@ -60,7 +64,9 @@ export async function waitForLockWaits(n: number, timeoutMs = 20_000): Promise<v
 export async function waitForNoOpenTransactions(): Promise<void> {
   const conn = await adminConnection();
   try {
-    await expect.poll(async () => Number((await conn.query('SELECT COUNT(*) AS n FROM information_schema.INNODB_TRX'))[0].n), { timeout: 30_000, interval: 100 }).toBe(0);
+    await expect
+      .poll(async () => Number((await conn.query('SELECT COUNT(*) AS n FROM information_schema.INNODB_TRX'))[0].n), { timeout: 30_000, interval: 100 })
+      .toBe(0);
   } finally {
     await conn.end();
   }

@@ -44,7 +44,16 @@ export async function createUser(role: Role, overrides: Partial<{ name: string; 
 }
 
 // A class III bench scale, 6 kg × 0.1 g with 1 g verification interval unless told otherwise (grams).
-export async function createScale(overrides: Partial<{ name: string; capacityG: number; divisionG: number; eG: number; repeatabilityG: number | null; status: 'in_service' | 'due' | 'locked' }> = {}): Promise<Scale> {
+export async function createScale(
+  overrides: Partial<{
+    name: string;
+    capacityG: number;
+    divisionG: number;
+    eG: number;
+    repeatabilityG: number | null;
+    status: 'in_service' | 'due' | 'locked';
+  }> = {},
+): Promise<Scale> {
   testDb();
   const e = overrides.eG ?? 1;
   return Scale.create({
@@ -63,7 +72,9 @@ export async function createScale(overrides: Partial<{ name: string; capacityG: 
   });
 }
 
-export async function createPart(overrides: Partial<{ partNumber: string; pieceSpread: number | null; countingMethod: 'scale' | 'hand'; apwG: number }> = {}): Promise<Part> {
+export async function createPart(
+  overrides: Partial<{ partNumber: string; pieceSpread: number | null; countingMethod: 'scale' | 'hand'; apwG: number }> = {},
+): Promise<Part> {
   testDb();
   return Part.create({
     partNumber: overrides.partNumber ?? unique('P').toUpperCase(),
@@ -86,13 +97,27 @@ export async function stockPart(partId: number, quantity: number): Promise<Bin> 
     const two = () => String(1 + Math.floor(Math.random() * 99)).padStart(2, '0');
     const code = `${letter()}${letter()}-${two()}-${1 + Math.floor(Math.random() * 9)}-${two()}`;
     const bin = await Bin.create({ code, partId, containerId: null, bookQuantity: quantity, lastCountedAt: null }, { transaction });
-    await db.query('INSERT INTO part_stock (part_id, on_hand, reserved) VALUES (?, ?, 0) ON DUPLICATE KEY UPDATE on_hand = on_hand + VALUES(on_hand)', { replacements: [partId, quantity], transaction });
+    await db.query('INSERT INTO part_stock (part_id, on_hand, reserved) VALUES (?, ?, 0) ON DUPLICATE KEY UPDATE on_hand = on_hand + VALUES(on_hand)', {
+      replacements: [partId, quantity],
+      transaction,
+    });
     return bin;
   });
 }
 
 // A certified test weight (nominal in grams) of an OIML R 111 class.
-export async function createTestWeight(nominalG: number, weightClass: 'E2' | 'F1' | 'F2' | 'M1' | 'M2' | 'M3' = 'F1', dueAt: string | null = null): Promise<TestWeight> {
+export async function createTestWeight(
+  nominalG: number,
+  weightClass: 'E2' | 'F1' | 'F2' | 'M1' | 'M2' | 'M3' = 'F1',
+  dueAt: string | null = null,
+): Promise<TestWeight> {
   testDb();
-  return TestWeight.create({ identifier: unique(`TW-${weightClass}-${nominalG}G`).toUpperCase(), nominalG: String(nominalG), weightClass, certificateNumber: 'CAL-TEST', certificateFile: null, dueAt });
+  return TestWeight.create({
+    identifier: unique(`TW-${weightClass}-${nominalG}G`).toUpperCase(),
+    nominalG: String(nominalG),
+    weightClass,
+    certificateNumber: 'CAL-TEST',
+    certificateFile: null,
+    dueAt,
+  });
 }

@@ -23,7 +23,10 @@ let ready: Promise<unknown> | undefined;
 
 function zxing(): Promise<unknown> {
   // In Node the module must be handed its wasm file, or it tries to fetch it.
-  ready ??= prepareZXingModule({ overrides: { wasmBinary: readFileSync(require.resolve('zxing-wasm/reader/zxing_reader.wasm')).buffer as ArrayBuffer }, fireImmediately: true });
+  ready ??= prepareZXingModule({
+    overrides: { wasmBinary: readFileSync(require.resolve('zxing-wasm/reader/zxing_reader.wasm')).buffer as ArrayBuffer },
+    fireImmediately: true,
+  });
   return ready;
 }
 
@@ -34,18 +37,22 @@ export async function decodePdf(pdf: Uint8Array, { dpi = 300 }: { dpi?: number }
   try {
     writeFileSync(path.join(dir, 'in.pdf'), pdf);
     await run('pdftoppm', ['-r', String(dpi), '-gray', '-png', path.join(dir, 'in.pdf'), path.join(dir, 'page')]);
-    const pages = readdirSync(dir).filter((f) => f.endsWith('.png')).sort();
+    const pages = readdirSync(dir)
+      .filter((f) => f.endsWith('.png'))
+      .sort();
     const decoded: DecodedSymbol[][] = [];
     for (const file of pages) {
       const results = await readBarcodes(readFileSync(path.join(dir, file)), { tryHarder: true, maxNumberOfSymbols: 16 });
       decoded.push(
-        results.filter((r) => r.isValid).map((r) => ({
-          format: r.format,
-          text: r.text,
-          raw: Buffer.from(r.bytes).toString('latin1'),
-          symbologyIdentifier: r.symbologyIdentifier,
-          mirrored: r.isMirrored,
-        })),
+        results
+          .filter((r) => r.isValid)
+          .map((r) => ({
+            format: r.format,
+            text: r.text,
+            raw: Buffer.from(r.bytes).toString('latin1'),
+            symbologyIdentifier: r.symbologyIdentifier,
+            mirrored: r.isMirrored,
+          })),
       );
     }
     return decoded;

@@ -15,7 +15,13 @@ function routeFiles(dir: string): string[] {
 
 export function apiRouteFiles(): { route: string; source: string }[] {
   return routeFiles(path.join(appDir, 'api')).map((file) => ({
-    route: '/' + path.relative(appDir, path.dirname(file)).split(path.sep).filter((s) => !s.startsWith('(')).join('/'),
+    route:
+      '/' +
+      path
+        .relative(appDir, path.dirname(file))
+        .split(path.sep)
+        .filter((s) => !s.startsWith('('))
+        .join('/'),
     source: readFileSync(file, 'utf8'),
   }));
 }

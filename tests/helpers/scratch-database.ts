@@ -15,7 +15,14 @@ export async function createScratchDatabase(label: string): Promise<{ name: stri
   } finally {
     await admin.end();
   }
-  const db = createSequelize({ host: process.env.DB_HOST ?? '127.0.0.1', port: Number(process.env.DB_PORT ?? 3308), database: name, username: user, password: process.env.DB_PASSWORD ?? '', poolMax: 3 });
+  const db = createSequelize({
+    host: process.env.DB_HOST ?? '127.0.0.1',
+    port: Number(process.env.DB_PORT ?? 3308),
+    database: name,
+    username: user,
+    password: process.env.DB_PASSWORD ?? '',
+    poolMax: 3,
+  });
   return {
     name,
     db,

@@ -31,7 +31,8 @@ describe('counting by weight against an independent simulation (quick grid)', ()
   }, 240_000);
 
   it('answers every request an operator could send', () => {
-    const failing = results.filter((r) => r.tally.errors > 0)
+    const failing = results
+      .filter((r) => r.tally.errors > 0)
       .map((r) => `${regimeKey(r.regime)}: ${r.tally.errors}/${r.tally.trials - r.tally.unsendable} errors, first: ${r.tally.firstError}`);
     expect(failing, `${failing.length} regimes with errors:\n${failing.join('\n')}`).toEqual([]);
   });
@@ -41,7 +42,9 @@ describe('counting by weight against an independent simulation (quick grid)', ()
       const judged = judgeRegime(regime, tally);
       if (judged.pass) return [];
       const r = ratesOf(tally);
-      return [`${regimeKey(regime)}: ${judged.failures.join('; ')} [flagged exact ${pct(r.flaggedExactRate)}, coverage ${pct(r.intervalCoverage)}, whole-piece ${pct(r.wholePieceCoverage)}, P(exact) mean ${pct(r.probabilityExactMean)}]`];
+      return [
+        `${regimeKey(regime)}: ${judged.failures.join('; ')} [flagged exact ${pct(r.flaggedExactRate)}, coverage ${pct(r.intervalCoverage)}, whole-piece ${pct(r.wholePieceCoverage)}, P(exact) mean ${pct(r.probabilityExactMean)}]`,
+      ];
     });
     expect(failing, `${failing.length} of ${results.length} regimes fail:\n${failing.join('\n')}`).toEqual([]);
   });

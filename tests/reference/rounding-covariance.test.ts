@@ -46,15 +46,21 @@ function bruteCovariance(delta: number, s: number, sigma: number): number {
 
 describe('rounding errors of two readings on one scale', () => {
   it('are at most +d²/12 and at least −d²/24 apart on a perfectly quiet scale', () => {
-    expect(largestRoundingCovariance({ division: d, repeatability: 0 }, 0)).toBeCloseTo(d * d / 12, 12);
-    expect(mostNegativeRoundingCovariance({ division: d, repeatability: 0 }, 0)).toBeCloseTo(d * d / 24, 12);
+    expect(largestRoundingCovariance({ division: d, repeatability: 0 }, 0)).toBeCloseTo((d * d) / 12, 12);
+    expect(mostNegativeRoundingCovariance({ division: d, repeatability: 0 }, 0)).toBeCloseTo((d * d) / 24, 12);
     expect(bruteCovariance(0.5 * d, 0, 0) / (d * d)).toBeCloseTo(-1 / 24, 5);
     // a net half a division off the grid reads 0 or d around its mean: variance d²/4
-    expect(netVarianceBound({ division: d, repeatability: 0 }, 0)).toBeCloseTo(d * d / 4, 12);
+    expect(netVarianceBound({ division: d, repeatability: 0 }, 0)).toBeCloseTo((d * d) / 4, 12);
   });
 
   it('match the brute-force average for reading noise and an uncertain load', () => {
-    for (const [s, sigma] of [[0, 0.05 * d], [0, 0.2 * d], [0.1 * d, 0], [0.25 * d, 0], [0.1 * d, 0.1 * d]]) {
+    for (const [s, sigma] of [
+      [0, 0.05 * d],
+      [0, 0.2 * d],
+      [0.1 * d, 0],
+      [0.25 * d, 0],
+      [0.1 * d, 0.1 * d],
+    ]) {
       const noise = { division: d, repeatability: s };
       const most = largestRoundingCovariance(noise, sigma);
       const least = -mostNegativeRoundingCovariance(noise, sigma);
@@ -71,6 +77,6 @@ describe('rounding errors of two readings on one scale', () => {
   it('stop mattering once the noise is half a division (the usual assumption of independence holds)', () => {
     const noise = { division: d, repeatability: 0.5 * d };
     expect(largestRoundingCovariance(noise, 0)).toBeLessThan(1e-5 * d * d);
-    expect(netVarianceBound(noise, 0) / (2 * (d * d / 12 + 0.25 * d * d))).toBeCloseTo(1, 4);
+    expect(netVarianceBound(noise, 0) / (2 * ((d * d) / 12 + 0.25 * d * d))).toBeCloseTo(1, 4);
   });
 });

@@ -92,7 +92,11 @@ describe('JCGM 100:2008 and NIST TN 1297', () => {
         gum += ((count(up) - count(down)) / (2 * h)) ** 2 * variances[i];
       });
       const trueCount = onPan ? n + change : change;
-      const model = countVariance({ sampleQuantity: n, averagePieceWeight: apw, sampleScale: { division: d, repeatability: sr }, sampleOnPan: onPan }, trueCount, c * c);
+      const model = countVariance(
+        { sampleQuantity: n, averagePieceWeight: apw, sampleScale: { division: d, repeatability: sr }, sampleOnPan: onPan },
+        trueCount,
+        c * c,
+      );
       expect(model / gum, `n=${n} change=${change} onPan=${onPan}`).toBeCloseTo(1, 4);
     }
   });

@@ -28,9 +28,7 @@ export function NavLinks({ items, layout }: { items: NavItem[]; layout: 'rail' |
                   key={item.href}
                   href={item.href}
                   aria-current={active ? 'page' : undefined}
-                  className={`block whitespace-nowrap rounded-md px-3 py-2.5 min-h-11 ${
-                    active ? 'bg-forge text-white' : 'text-paper hover:bg-ink-soft'
-                  }`}
+                  className={`block whitespace-nowrap rounded-md px-3 py-2.5 min-h-11 ${active ? 'bg-forge text-white' : 'text-paper hover:bg-ink-soft'}`}
                 >
                   {item.label}
                 </Link>

@@ -18,7 +18,11 @@ function VarianceCell({ value }: { value: LastVariance | null }) {
   const tone = value.status === 'pending' ? 'text-caution' : value.status === 'rejected' ? 'text-fault' : 'text-ink';
   return (
     <span className={tone}>
-      <span className="num">{value.variance > 0 ? '+' : ''}{value.variance}</span> pcs · {STATUS_WORDS[value.status] ?? value.status}
+      <span className="num">
+        {value.variance > 0 ? '+' : ''}
+        {value.variance}
+      </span>{' '}
+      pcs · {STATUS_WORDS[value.status] ?? value.status}
     </span>
   );
 }
@@ -41,7 +45,17 @@ export function BinBoard({ list, q, canCount, canPrint }: { list: PageOf & { bin
       cellRenderer: (p: ICellRendererParams<BinRow>) => <VarianceCell value={p.data?.lastVariance ?? null} />,
     },
     ...(canCount
-      ? [{ headerName: '', colId: 'count', sortable: false, filter: false, width: 180, flex: 0, cellRenderer: (p: ICellRendererParams<BinRow>) => (p.data ? <BenchLink code={p.data.code} /> : null) } satisfies ColDef<BinRow>]
+      ? [
+          {
+            headerName: '',
+            colId: 'count',
+            sortable: false,
+            filter: false,
+            width: 180,
+            flex: 0,
+            cellRenderer: (p: ICellRendererParams<BinRow>) => (p.data ? <BenchLink code={p.data.code} /> : null),
+          } satisfies ColDef<BinRow>,
+        ]
       : []),
     ...(canPrint
       ? [
@@ -54,7 +68,13 @@ export function BinBoard({ list, q, canCount, canPrint }: { list: PageOf & { bin
             flex: 0,
             cellRenderer: (p: ICellRendererParams<BinRow>) =>
               p.data ? (
-                <a href={`/api/v1/bins/${p.data.id}/label.pdf?stock=4x2in`} target="_blank" rel="noopener" className="text-forge hover:underline" aria-label={`Label for bin ${p.data.code} (PDF)`}>
+                <a
+                  href={`/api/v1/bins/${p.data.id}/label.pdf?stock=4x2in`}
+                  target="_blank"
+                  rel="noopener"
+                  className="text-forge hover:underline"
+                  aria-label={`Label for bin ${p.data.code} (PDF)`}
+                >
                   Label (PDF)
                 </a>
               ) : null,
@@ -65,7 +85,9 @@ export function BinBoard({ list, q, canCount, canPrint }: { list: PageOf & { bin
   return (
     <section aria-labelledby="bins-title" className="space-y-3">
       <div className="flex flex-wrap items-end justify-between gap-3">
-        <h2 id="bins-title" className="text-lg font-bold">All bins</h2>
+        <h2 id="bins-title" className="text-lg font-bold">
+          All bins
+        </h2>
         <SearchForm action="/bins" id="bin-filter" label="Find bins" defaultValue={q} placeholder="Start of a bin code or part number" />
       </div>
       <p role="status" className="text-sm text-ink-soft" data-testid="bins-summary">

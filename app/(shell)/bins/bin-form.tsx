@@ -14,9 +14,17 @@ import { FormField, FormMessage } from '../../_components/form-field';
 import { SelectField } from '../../_components/select-field';
 
 const schema = yup.object({
-  code: yup.string().required('Bin code is required').test('bin-code', `Bin codes look like ${BIN_CODE_HINT}`, (v) => !v || parseBinCode(v) !== null),
+  code: yup
+    .string()
+    .required('Bin code is required')
+    .test('bin-code', `Bin codes look like ${BIN_CODE_HINT}`, (v) => !v || parseBinCode(v) !== null),
   partId: yup.string().required('Pick the part this bin holds'),
-  bookQuantity: yup.number().typeError('A whole number of pieces').integer('A whole number of pieces').min(0, 'Cannot be negative').required('Opening quantity is required'),
+  bookQuantity: yup
+    .number()
+    .typeError('A whole number of pieces')
+    .integer('A whole number of pieces')
+    .min(0, 'Cannot be negative')
+    .required('Opening quantity is required'),
 });
 
 export function BinForm({ parts, containers }: { parts: Array<{ id: number; partNumber: string }>; containers: Array<{ id: number; name: string }> }) {
@@ -31,8 +39,18 @@ export function BinForm({ parts, containers }: { parts: Array<{ id: number; part
       onSubmit={async (values, helpers) => {
         setMessage(null);
         setSaved(null);
-        const body = { code: values.code, partId: Number(values.partId), containerId: values.containerId ? Number(values.containerId) : null, bookQuantity: Number(values.bookQuantity), abcClass: values.abcClass };
-        const res = await apiFetch<{ bin: { code: string } }>('/api/v1/bins', { method: 'POST', body, headers: { 'Idempotency-Key': requestKey.keyFor(body) } });
+        const body = {
+          code: values.code,
+          partId: Number(values.partId),
+          containerId: values.containerId ? Number(values.containerId) : null,
+          bookQuantity: Number(values.bookQuantity),
+          abcClass: values.abcClass,
+        };
+        const res = await apiFetch<{ bin: { code: string } }>('/api/v1/bins', {
+          method: 'POST',
+          body,
+          headers: { 'Idempotency-Key': requestKey.keyFor(body) },
+        });
         if (!res.ok) {
           helpers.setErrors(toFormikErrors(res.fields));
           setMessage(res.message);
@@ -50,10 +68,18 @@ export function BinForm({ parts, containers }: { parts: Array<{ id: number; part
           <SelectField name="partId" label="Part" options={[['', 'Choose a part'], ...parts.map((p) => [String(p.id), p.partNumber] as const)]} />
           <SelectField name="containerId" label="Container" options={[['', 'None'], ...containers.map((c) => [String(c.id), c.name] as const)]} />
           <FormField name="bookQuantity" label="Opening quantity (pcs)" inputMode="numeric" />
-          <SelectField name="abcClass" label="ABC class" options={(Object.keys(CYCLE_DAYS) as Array<keyof typeof CYCLE_DAYS>).map((c) => [c, `${c} · every ${CYCLE_DAYS[c]} days`])} />
+          <SelectField
+            name="abcClass"
+            label="ABC class"
+            options={(Object.keys(CYCLE_DAYS) as Array<keyof typeof CYCLE_DAYS>).map((c) => [c, `${c} · every ${CYCLE_DAYS[c]} days`])}
+          />
           <div className="sm:col-span-2 lg:col-span-5 flex flex-wrap items-center gap-4">
-            <button type="submit" className="btn-primary" disabled={isSubmitting}>{isSubmitting ? 'Adding…' : 'Add bin'}</button>
-            <p role="status" aria-live="polite" className="text-sm text-ok">{saved}</p>
+            <button type="submit" className="btn-primary" disabled={isSubmitting}>
+              {isSubmitting ? 'Adding…' : 'Add bin'}
+            </button>
+            <p role="status" aria-live="polite" className="text-sm text-ok">
+              {saved}
+            </p>
           </div>
           <div className="sm:col-span-2 lg:col-span-5">
             <FormMessage message={message} />

@@ -10,7 +10,9 @@ export function CycleCountPlan({ bins, canCount }: { bins: BinDto[]; canCount: b
   const { when } = useSiteTime();
   return (
     <section aria-labelledby="due-title" className="card">
-      <h2 id="due-title" className="font-bold">Due for a cycle count <span className="num text-forge">({bins.length})</span></h2>
+      <h2 id="due-title" className="font-bold">
+        Due for a cycle count <span className="num text-forge">({bins.length})</span>
+      </h2>
       <p className="text-sm text-ink-faint">
         Class A every {CYCLE_DAYS.A} days, B every {CYCLE_DAYS.B}, C every {CYCLE_DAYS.C} (common practice; never-counted bins first).
       </p>

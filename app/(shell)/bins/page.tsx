@@ -22,7 +22,9 @@ export default async function BinsPage({ searchParams }: { searchParams: Promise
   const last = await latestBinCounts(list.bins.map((b) => b.id));
   const rows = list.bins.map((b) => ({ ...b, lastVariance: last[b.id] ?? null }));
   const editor = can(user.role, 'bins.edit');
-  const [parts, containers] = editor ? await Promise.all([listParts({ page: 1, pageSize: 500, sort: 'partNumber', dir: 'asc' }), listContainers()]) : [null, []];
+  const [parts, containers] = editor
+    ? await Promise.all([listParts({ page: 1, pageSize: 500, sort: 'partNumber', dir: 'asc' }), listContainers()])
+    : [null, []];
   return (
     <div className="space-y-6">
       <header>
@@ -34,7 +36,9 @@ export default async function BinsPage({ searchParams }: { searchParams: Promise
       <Pager label="Pages of the bins" at={list} shown={rows.length} hrefFor={(p) => pageHref('/bins', { q }, p)} />
       {editor && parts ? (
         <section aria-labelledby="new-bin-title" className="space-y-3">
-          <h2 id="new-bin-title" className="text-lg font-bold">Add a bin</h2>
+          <h2 id="new-bin-title" className="text-lg font-bold">
+            Add a bin
+          </h2>
           <BinForm parts={parts.parts.map((p) => ({ id: p.id, partNumber: p.partNumber }))} containers={containers.map((c) => ({ id: c.id, name: c.name }))} />
         </section>
       ) : null}

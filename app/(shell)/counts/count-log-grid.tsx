@@ -27,7 +27,8 @@ const columnsAfterWhen: ColDef<CountLogRow>[] = [
     field: 'exact',
     headerName: 'Exact',
     maxWidth: 110,
-    cellRenderer: (p: ICellRendererParams<CountLogRow>) => (p.data ? p.data.exact ? <span>yes</span> : <span className="font-medium text-caution">no</span> : null),
+    cellRenderer: (p: ICellRendererParams<CountLogRow>) =>
+      p.data ? p.data.exact ? <span>yes</span> : <span className="font-medium text-caution">no</span> : null,
   },
   {
     headerName: 'Order / bin',
@@ -35,10 +36,16 @@ const columnsAfterWhen: ColDef<CountLogRow>[] = [
     cellClass: 'num',
     valueGetter: (p) => p.data?.orderNumber ?? p.data?.binCode ?? '—',
     cellRenderer: (p: ICellRendererParams<CountLogRow>) =>
-      p.data?.orderId ? <Link href={`/orders/${p.data.orderId}`} className="text-forge hover:underline">{p.data.orderNumber}</Link> : p.value,
+      p.data?.orderId ? (
+        <Link href={`/orders/${p.data.orderId}`} className="text-forge hover:underline">
+          {p.data.orderNumber}
+        </Link>
+      ) : (
+        p.value
+      ),
   },
   { field: 'purpose', headerName: 'For', minWidth: 130, valueFormatter: (p) => COUNT_PURPOSE_LABELS[p.value as CountLogRow['purpose']] },
-  { field: 'targetQuantity', headerName: 'Target', maxWidth: 120, cellClass: 'num', valueFormatter: (p) => (p.value ?? '—') },
+  { field: 'targetQuantity', headerName: 'Target', maxWidth: 120, cellClass: 'num', valueFormatter: (p) => p.value ?? '—' },
   { field: 'net', headerName: 'Net', minWidth: 120, cellClass: 'num', valueFormatter: (p) => formatGrams(p.value) },
   { field: 'sampleQuantity', headerName: 'Sample (pcs)', maxWidth: 140, cellClass: 'num' },
   { field: 'scaleName', headerName: 'Scale', minWidth: 140 },
@@ -48,6 +55,18 @@ const columnsAfterWhen: ColDef<CountLogRow>[] = [
 
 export function CountLogGrid({ rows }: { rows: CountLogRow[] }) {
   const { when } = useSiteTime();
-  const columns = useMemo<ColDef<CountLogRow>[]>(() => [{ field: 'at', headerName: 'When', minWidth: 170, valueFormatter: (p) => when(p.value) }, ...columnsAfterWhen], [when]);
-  return <DataGrid label="Count log" emptyText="No counts match these filters." rows={rows} columns={columns} rowId={(r) => String(r.id)} height={fitHeight(rows.length, 620)} />;
+  const columns = useMemo<ColDef<CountLogRow>[]>(
+    () => [{ field: 'at', headerName: 'When', minWidth: 170, valueFormatter: (p) => when(p.value) }, ...columnsAfterWhen],
+    [when],
+  );
+  return (
+    <DataGrid
+      label="Count log"
+      emptyText="No counts match these filters."
+      rows={rows}
+      columns={columns}
+      rowId={(r) => String(r.id)}
+      height={fitHeight(rows.length, 620)}
+    />
+  );
 }

@@ -13,7 +13,11 @@ import { ComponentsEditor, componentsSchema, emptyComponent, toComponentInput, t
 const code = /^[A-Za-z0-9][A-Za-z0-9._\-/]{0,39}$/;
 const schema = yup.object({
   code: yup.string().trim().matches(code, 'Letters, digits and . _ - / only, at most 40 characters').required('Kit code is required'),
-  revision: yup.string().trim().matches(/^[A-Za-z0-9]{1,8}$/, 'Revision is 1–8 letters or digits, e.g. A or 03').required('Revision is required'),
+  revision: yup
+    .string()
+    .trim()
+    .matches(/^[A-Za-z0-9]{1,8}$/, 'Revision is 1–8 letters or digits, e.g. A or 03')
+    .required('Revision is required'),
   description: yup.string().trim().max(200, 'At most 200 characters').required('Description is required'),
   components: componentsSchema,
 });
@@ -47,8 +51,12 @@ export function KitCreateForm({ onCreated, onCancel }: { onCreated: (kit: KitDto
           </div>
           <ComponentsEditor />
           <div className="flex flex-wrap gap-3 items-center">
-            <button type="submit" className="btn-primary" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Create kit'}</button>
-            <button type="button" className="btn-quiet" onClick={onCancel}>Close</button>
+            <button type="submit" className="btn-primary" disabled={isSubmitting}>
+              {isSubmitting ? 'Saving…' : 'Create kit'}
+            </button>
+            <button type="button" className="btn-quiet" onClick={onCancel}>
+              Close
+            </button>
             <FormMessage message={message} />
           </div>
         </ReadyForm>

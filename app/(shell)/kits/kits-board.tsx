@@ -19,7 +19,12 @@ export function KitsBoard({ kits, canEdit }: { kits: KitDto[]; canEdit: boolean 
       field: 'code',
       headerName: 'Kit',
       minWidth: 160,
-      cellRenderer: (p: ICellRendererParams<KitDto>) => (p.data ? <Link href={`/kits/${p.data.id}`} className="text-forge font-medium hover:underline num">{p.data.code}</Link> : null),
+      cellRenderer: (p: ICellRendererParams<KitDto>) =>
+        p.data ? (
+          <Link href={`/kits/${p.data.id}`} className="text-forge font-medium hover:underline num">
+            {p.data.code}
+          </Link>
+        ) : null,
     },
     { field: 'revision', headerName: 'Rev', maxWidth: 100, cellClass: 'num' },
     { field: 'description', headerName: 'Description', flex: 2, minWidth: 220 },
@@ -30,13 +35,21 @@ export function KitsBoard({ kits, canEdit }: { kits: KitDto[]; canEdit: boolean 
     <div className="space-y-4">
       <div className="flex flex-wrap items-end gap-3">
         <div>
-          <label htmlFor="kits-filter" className="field-label">Find kits</label>
+          <label htmlFor="kits-filter" className="field-label">
+            Find kits
+          </label>
           <input id="kits-filter" className="field w-64" value={filter} onChange={(e) => setFilter(e.target.value)} placeholder="Code or description" />
         </div>
-        {canEdit && !creating ? <button type="button" className="btn-primary" onClick={() => setCreating(true)}>New kit</button> : null}
+        {canEdit && !creating ? (
+          <button type="button" className="btn-primary" onClick={() => setCreating(true)}>
+            New kit
+          </button>
+        ) : null}
       </div>
       {creating ? <KitCreateForm onCancel={() => setCreating(false)} onCreated={(kit) => router.push(`/kits/${kit.id}`)} /> : null}
-      <p role="status" aria-live="polite" className="min-h-6 text-sm text-ink-soft" data-testid="kits-notice">{notice}</p>
+      <p role="status" aria-live="polite" className="min-h-6 text-sm text-ink-soft" data-testid="kits-notice">
+        {notice}
+      </p>
       <DataGrid label="Kits" rows={kits} columns={columns} rowId={(k) => String(k.id)} quickFilter={filter} height={fitHeight(kits.length)} />
       {canEdit ? (
         <CsvImport<BomImportRow>

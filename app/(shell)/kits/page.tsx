@@ -12,7 +12,10 @@ export default async function KitsPage() {
     <div className="space-y-6">
       <header>
         <h1 className="page-title">Kits</h1>
-        <p className="text-ink-soft">Bills of material: which parts, how many per kit, and how far a count may stray. A revision that orders were released from keeps its parts; copy it to change them.</p>
+        <p className="text-ink-soft">
+          Bills of material: which parts, how many per kit, and how far a count may stray. A revision that orders were released from keeps its parts; copy it to
+          change them.
+        </p>
       </header>
       <KitsBoard kits={kits} canEdit={can(user.role, 'kits.edit')} />
     </div>

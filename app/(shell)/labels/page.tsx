@@ -22,12 +22,16 @@ export default async function LabelsPage() {
     <div className="space-y-6">
       <header>
         <h1 className="page-title">Labels</h1>
-        <p className="text-ink-soft">Barcoded labels for bins, parts and finished kits, rendered on the server: download a PDF or send it to the label printer.</p>
+        <p className="text-ink-soft">
+          Barcoded labels for bins, parts and finished kits, rendered on the server: download a PDF or send it to the label printer.
+        </p>
       </header>
       <LabelDesk
         bins={bins.bins.map((b) => ({ id: b.id, code: b.code, partNumber: b.partNumber, bookQuantity: b.bookQuantity }))}
         parts={parts.parts.map((p) => ({ id: p.id, partNumber: p.partNumber, description: p.description }))}
-        orders={orders.orders.filter((o) => o.status !== 'draft' && o.status !== 'cancelled').map((o) => ({ id: o.id, number: o.number, kit: `${o.kitCode} rev ${o.kitRevision}`, quantity: o.quantity, status: o.status }))}
+        orders={orders.orders
+          .filter((o) => o.status !== 'draft' && o.status !== 'cancelled')
+          .map((o) => ({ id: o.id, number: o.number, kit: `${o.kitCode} rev ${o.kitRevision}`, quantity: o.quantity, status: o.status }))}
         stocks={stocks}
         jobs={jobs}
       />

@@ -71,7 +71,12 @@ export function PrintLog({ initial, followBatch }: { initial: PrintJobDto[]; fol
         p.data ? (
           <span>
             <span className={STATUS_CLASS[p.data.status]}>{STATUS_TEXT[p.data.status]}</span>
-            {p.data.batchCount > 1 ? <span className="text-ink-faint"> · part {p.data.batchIndex + 1} of {p.data.batchCount}</span> : null}
+            {p.data.batchCount > 1 ? (
+              <span className="text-ink-faint">
+                {' '}
+                · part {p.data.batchIndex + 1} of {p.data.batchCount}
+              </span>
+            ) : null}
             {p.data.error ? <span className="text-ink-soft"> · {p.data.error}</span> : null}
             {p.data.note ? <span className="text-caution"> · {p.data.note}</span> : null}
           </span>
@@ -84,18 +89,29 @@ export function PrintLog({ initial, followBatch }: { initial: PrintJobDto[]; fol
       maxWidth: 140,
       cellRenderer: (p: ICellRendererParams<PrintJobDto>) =>
         p.data && p.data.status === 'failed' ? (
-          <button type="button" className="text-forge hover:underline" onClick={() => reprint(p.data!)} aria-label={`Print job ${p.data.id} again`}>Print again</button>
+          <button type="button" className="text-forge hover:underline" onClick={() => reprint(p.data!)} aria-label={`Print job ${p.data.id} again`}>
+            Print again
+          </button>
         ) : null,
     },
   ];
 
   return (
     <section className="space-y-3" aria-labelledby="print-log-title">
-      <h2 id="print-log-title" className="text-lg font-bold">Print log</h2>
+      <h2 id="print-log-title" className="text-lg font-bold">
+        Print log
+      </h2>
       <p role="status" aria-live="polite" className="min-h-5 text-sm text-ink-soft" data-testid="print-log-status">
         {note ?? (following ? 'Sending to the printer…' : `${jobs.length} recent job${jobs.length === 1 ? '' : 's'}.`)}
       </p>
-      <DataGrid<PrintJobDto> label="Print log" emptyText="No labels printed yet." rows={jobs} columns={columns} rowId={(j) => String(j.id)} height={fitHeight(jobs.length, 420)} />
+      <DataGrid<PrintJobDto>
+        label="Print log"
+        emptyText="No labels printed yet."
+        rows={jobs}
+        columns={columns}
+        rowId={(j) => String(j.id)}
+        height={fitHeight(jobs.length, 420)}
+      />
     </section>
   );
 }

@@ -18,7 +18,13 @@ export interface KitChoice {
 
 const schema = yup.object({
   kitId: yup.number().typeError('Pick a kit revision').integer().positive('Pick a kit revision').required('Pick a kit revision'),
-  quantity: yup.number().typeError('A whole number of kits').integer('A whole number of kits').min(1, 'At least 1 kit').max(100_000, 'At most 100 000 kits per order').required('Number of kits is required'),
+  quantity: yup
+    .number()
+    .typeError('A whole number of kits')
+    .integer('A whole number of kits')
+    .min(1, 'At least 1 kit')
+    .max(100_000, 'At most 100 000 kits per order')
+    .required('Number of kits is required'),
   dueDate: yup.string().matches(/^(\d{4}-\d{2}-\d{2})?$/, 'A date, e.g. 2026-12-20'),
 });
 
@@ -47,19 +53,34 @@ export function OrderCreateForm({ kits }: { kits: KitChoice[] }) {
         <ReadyForm noValidate className="card grid gap-4 lg:grid-cols-[minmax(0,1fr)_9rem_11rem_auto] lg:items-start" aria-label="New build order">
           <h2 className="lg:col-span-4 font-bold">New build order</h2>
           <div>
-            <label htmlFor="f-kitId" className="field-label">Kit revision</label>
-            <Field as="select" id="f-kitId" name="kitId" className="field" aria-describedby="f-kitId-error" aria-invalid={touched.kitId && errors.kitId ? true : undefined}>
+            <label htmlFor="f-kitId" className="field-label">
+              Kit revision
+            </label>
+            <Field
+              as="select"
+              id="f-kitId"
+              name="kitId"
+              className="field"
+              aria-describedby="f-kitId-error"
+              aria-invalid={touched.kitId && errors.kitId ? true : undefined}
+            >
               <option value="">Choose a kit…</option>
               {kits.map((k) => (
-                <option key={k.id} value={k.id}>{k.label} ({k.components} parts)</option>
+                <option key={k.id} value={k.id}>
+                  {k.label} ({k.components} parts)
+                </option>
               ))}
             </Field>
-            <p id="f-kitId-error" className="field-error" aria-live="polite">{touched.kitId ? errors.kitId : null}</p>
+            <p id="f-kitId-error" className="field-error" aria-live="polite">
+              {touched.kitId ? errors.kitId : null}
+            </p>
           </div>
           <FormField name="quantity" label="Number of kits" inputMode="numeric" autoComplete="off" />
           <FormField name="dueDate" label="Due date" type="date" />
           <div className="lg:pt-6">
-            <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>{isSubmitting ? 'Creating…' : 'Create draft'}</button>
+            <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
+              {isSubmitting ? 'Creating…' : 'Create draft'}
+            </button>
           </div>
           <div className="lg:col-span-4">
             <FormMessage message={message} />

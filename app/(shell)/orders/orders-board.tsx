@@ -36,7 +36,12 @@ export function OrdersBoard({ list, status, q, kits, canManage, today }: Props) 
       field: 'number',
       headerName: 'Order',
       minWidth: 150,
-      cellRenderer: (p: ICellRendererParams<OrderSummaryDto>) => (p.data ? <Link href={`/orders/${p.data.id}`} className="text-forge font-medium hover:underline num">{p.data.number}</Link> : null),
+      cellRenderer: (p: ICellRendererParams<OrderSummaryDto>) =>
+        p.data ? (
+          <Link href={`/orders/${p.data.id}`} className="text-forge font-medium hover:underline num">
+            {p.data.number}
+          </Link>
+        ) : null,
     },
     { headerName: 'Kit', minWidth: 180, flex: 2, valueGetter: (p) => (p.data ? `${p.data.kitCode} rev ${p.data.kitRevision}` : '') },
     { field: 'quantity', headerName: 'Kits', maxWidth: 110, cellClass: 'num' },
@@ -47,7 +52,12 @@ export function OrdersBoard({ list, status, q, kits, canManage, today }: Props) 
       cellRenderer: (p: ICellRendererParams<OrderSummaryDto>) => {
         if (!p.data?.dueDate) return <span className="text-ink-faint">none</span>;
         const late = isOpen(p.data) && p.data.dueDate < today;
-        return <span className={late ? 'text-fault font-medium' : ''}>{p.data.dueDate}{late ? ' — late' : ''}</span>;
+        return (
+          <span className={late ? 'text-fault font-medium' : ''}>
+            {p.data.dueDate}
+            {late ? ' — late' : ''}
+          </span>
+        );
       },
     },
     {
@@ -55,27 +65,57 @@ export function OrdersBoard({ list, status, q, kits, canManage, today }: Props) 
       headerName: 'Status',
       minWidth: 140,
       valueFormatter: (p) => (p.value ? ORDER_STATUS_WORDS[p.value as OrderSummaryDto['status']] : ''),
-      cellRenderer: (p: ICellRendererParams<OrderSummaryDto>) => (p.data ? <span className={`rounded px-2 py-1 text-sm ${STATUS_STYLE[p.data.status]}`}>{ORDER_STATUS_WORDS[p.data.status]}</span> : null),
+      cellRenderer: (p: ICellRendererParams<OrderSummaryDto>) =>
+        p.data ? <span className={`rounded px-2 py-1 text-sm ${STATUS_STYLE[p.data.status]}`}>{ORDER_STATUS_WORDS[p.data.status]}</span> : null,
     },
     {
       headerName: 'Lines done',
       minWidth: 150,
       valueGetter: (p) => (p.data ? p.data.progress.linesDone / Math.max(1, p.data.progress.lines) : 0),
-      cellRenderer: (p: ICellRendererParams<OrderSummaryDto>) => (p.data ? <span className="num">{p.data.progress.linesDone} / {p.data.progress.lines}</span> : null),
+      cellRenderer: (p: ICellRendererParams<OrderSummaryDto>) =>
+        p.data ? (
+          <span className="num">
+            {p.data.progress.linesDone} / {p.data.progress.lines}
+          </span>
+        ) : null,
     },
   ];
   return (
     <div className="space-y-4">
-      {canManage ? (kits.length ? <OrderCreateForm kits={kits} /> : <p className="card text-ink-soft">There are no active kits yet. <Link href="/kits" className="text-forge hover:underline">Define a kit</Link> first.</p>) : null}
+      {canManage ? (
+        kits.length ? (
+          <OrderCreateForm kits={kits} />
+        ) : (
+          <p className="card text-ink-soft">
+            There are no active kits yet.{' '}
+            <Link href="/kits" className="text-forge hover:underline">
+              Define a kit
+            </Link>{' '}
+            first.
+          </p>
+        )
+      ) : null}
       <nav aria-label="Order filter" className="flex flex-wrap gap-2">
         {FILTERS.map(([key, label]) => (
-          <Link key={key} href={pageHref('/orders', { status: key === 'all' ? undefined : key, q }, 1)} aria-current={status === key ? 'page' : undefined} className={`rounded-full px-3 py-1.5 text-sm border ${status === key ? 'bg-forge text-white border-forge' : 'border-paper-line bg-paper-card hover:bg-paper-deep'}`}>
+          <Link
+            key={key}
+            href={pageHref('/orders', { status: key === 'all' ? undefined : key, q }, 1)}
+            aria-current={status === key ? 'page' : undefined}
+            className={`rounded-full px-3 py-1.5 text-sm border ${status === key ? 'bg-forge text-white border-forge' : 'border-paper-line bg-paper-card hover:bg-paper-deep'}`}
+          >
             {label}
           </Link>
         ))}
       </nav>
       <div className="flex flex-wrap items-end gap-3">
-        <SearchForm action="/orders" id="orders-q" label="Find orders" defaultValue={q} placeholder="Order number or kit code" keep={{ status: status === 'all' ? undefined : status }} />
+        <SearchForm
+          action="/orders"
+          id="orders-q"
+          label="Find orders"
+          defaultValue={q}
+          placeholder="Order number or kit code"
+          keep={{ status: status === 'all' ? undefined : status }}
+        />
         <p role="status" className="pb-2 text-sm text-ink-soft" data-testid="orders-summary">
           {`${rangeText(list, orders.length, ['order', 'orders'], q ? 'No orders match' : 'No orders here yet')}${q ? ` starting “${q}”` : ''}.`}
         </p>

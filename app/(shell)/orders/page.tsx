@@ -18,7 +18,9 @@ export default async function OrdersPage({ searchParams }: { searchParams: Promi
   const query = parsed.success ? parsed.data : listOrdersSchema.parse({});
   const canManage = can(user.role, 'orders.manage');
   const [list, kits] = await Promise.all([listOrders(query), canManage ? listKits() : Promise.resolve([])]);
-  const kitChoices = kits.filter((k) => k.active).map((k) => ({ id: k.id, label: `${k.code} rev ${k.revision} — ${k.description}`, components: k.components.length }));
+  const kitChoices = kits
+    .filter((k) => k.active)
+    .map((k) => ({ id: k.id, label: `${k.code} rev ${k.revision} — ${k.description}`, components: k.components.length }));
   const filters = { status: query.status, q: query.q };
   return (
     <div className="space-y-6">
@@ -27,7 +29,14 @@ export default async function OrdersPage({ searchParams }: { searchParams: Promi
         <p className="text-ink-soft">Kits to build: release them to reserve stock and send their lines to the bench, then follow them line by line.</p>
       </header>
       <OrdersBoard list={list} status={query.status ?? 'all'} q={query.q ?? ''} kits={kitChoices} canManage={canManage} today={siteDay(await siteTimeZone())} />
-      <Pager label="Pages of the build orders" at={list} shown={list.orders.length} hrefFor={(p) => pageHref('/orders', filters, p)} earlier="Newer" later="Older" />
+      <Pager
+        label="Pages of the build orders"
+        at={list}
+        shown={list.orders.length}
+        hrefFor={(p) => pageHref('/orders', filters, p)}
+        earlier="Newer"
+        later="Older"
+      />
     </div>
   );
 }

@@ -21,7 +21,17 @@ const schema = yup.object({
 
 // Creates a part, or edits the one given (its part number stays: labels and scans carry it).
 // A new photo bumps the part's version, so the form takes the part back through onPhotoSaved.
-export function PartForm({ part, onSaved, onPhotoSaved, onCancel }: { part: PartDto | null; onSaved: (p: PartDto) => void; onPhotoSaved: (p: PartDto) => void; onCancel: () => void }) {
+export function PartForm({
+  part,
+  onSaved,
+  onPhotoSaved,
+  onCancel,
+}: {
+  part: PartDto | null;
+  onSaved: (p: PartDto) => void;
+  onPhotoSaved: (p: PartDto) => void;
+  onCancel: () => void;
+}) {
   const [message, setMessage] = useState<string | null>(null);
   return (
     <Formik
@@ -31,7 +41,10 @@ export function PartForm({ part, onSaved, onPhotoSaved, onCancel }: { part: Part
       onSubmit={async (values, helpers) => {
         setMessage(null);
         const res = part
-          ? await apiFetch<{ part: PartDto }>(`/api/v1/parts/${part.id}`, { method: 'PATCH', body: { description: values.description, countingMethod: values.countingMethod, version: part.version } })
+          ? await apiFetch<{ part: PartDto }>(`/api/v1/parts/${part.id}`, {
+              method: 'PATCH',
+              body: { description: values.description, countingMethod: values.countingMethod, version: part.version },
+            })
           : await apiFetch<{ part: PartDto }>('/api/v1/parts', { method: 'POST', body: values });
         if (res.ok) {
           onSaved(res.data.part);
@@ -43,12 +56,18 @@ export function PartForm({ part, onSaved, onPhotoSaved, onCancel }: { part: Part
       }}
     >
       {({ isSubmitting }) => (
-        <ReadyForm noValidate className="card grid gap-4 md:grid-cols-[12rem_1fr_10rem] md:items-start" aria-label={part ? `Edit ${part.partNumber}` : 'New part'}>
+        <ReadyForm
+          noValidate
+          className="card grid gap-4 md:grid-cols-[12rem_1fr_10rem] md:items-start"
+          aria-label={part ? `Edit ${part.partNumber}` : 'New part'}
+        >
           <h2 className="md:col-span-3 font-bold">{part ? `Edit ${part.partNumber}` : 'New part'}</h2>
           <FormField name="partNumber" label="Part number" autoComplete="off" disabled={Boolean(part)} />
           <FormField name="description" label="Description" autoComplete="off" />
           <div>
-            <label htmlFor="f-countingMethod" className="field-label">Counted by</label>
+            <label htmlFor="f-countingMethod" className="field-label">
+              Counted by
+            </label>
             <Field as="select" id="f-countingMethod" name="countingMethod" className="field">
               <option value="scale">Scale</option>
               <option value="hand">Hand</option>
@@ -56,8 +75,12 @@ export function PartForm({ part, onSaved, onPhotoSaved, onCancel }: { part: Part
           </div>
           {part ? <PartPhoto part={part} onSaved={onPhotoSaved} /> : null}
           <div className="md:col-span-3 flex flex-wrap gap-3 items-center">
-            <button type="submit" className="btn-primary" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : part ? 'Save part' : 'Add part'}</button>
-            <button type="button" className="btn-quiet" onClick={onCancel}>Close</button>
+            <button type="submit" className="btn-primary" disabled={isSubmitting}>
+              {isSubmitting ? 'Saving…' : part ? 'Save part' : 'Add part'}
+            </button>
+            <button type="button" className="btn-quiet" onClick={onCancel}>
+              Close
+            </button>
             <FormMessage message={message} />
           </div>
         </ReadyForm>

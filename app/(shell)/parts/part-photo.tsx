@@ -34,12 +34,18 @@ export function PartPhoto({ part, onSaved }: { part: PartDto; onSaved: (p: PartD
       {part.hasPhoto ? (
         // A signed-in route, not a public file: next/image would fetch it without the session.
         // eslint-disable-next-line @next/next/no-img-element -- see above
-        <img src={`/api/v1/parts/${part.id}/photo?v=${part.version}`} alt={`Photo of ${part.partNumber}`} className="h-24 w-24 rounded border border-paper-line object-cover" />
+        <img
+          src={`/api/v1/parts/${part.id}/photo?v=${part.version}`}
+          alt={`Photo of ${part.partNumber}`}
+          className="h-24 w-24 rounded border border-paper-line object-cover"
+        />
       ) : (
         <div className="flex h-24 w-24 items-center justify-center rounded border border-dashed border-paper-line text-xs text-ink-faint">No photo</div>
       )}
       <div>
-        <label htmlFor={`photo-${part.id}`} className="field-label">{part.hasPhoto ? 'Replace photo' : 'Add a photo'}</label>
+        <label htmlFor={`photo-${part.id}`} className="field-label">
+          {part.hasPhoto ? 'Replace photo' : 'Add a photo'}
+        </label>
         <input
           ref={input}
           id={`photo-${part.id}`}
@@ -53,7 +59,9 @@ export function PartPhoto({ part, onSaved }: { part: PartDto; onSaved: (p: PartD
           }}
         />
         <p className="text-xs text-ink-faint">JPEG, PNG or WebP, at most {MAX_UPLOAD_BYTES / 1048576} MB. Helps the bench tell look-alike parts apart.</p>
-        <p role="status" aria-live="polite" className="min-h-5 text-sm text-ink-soft">{busy ? 'Uploading…' : message}</p>
+        <p role="status" aria-live="polite" className="min-h-5 text-sm text-ink-soft">
+          {busy ? 'Uploading…' : message}
+        </p>
       </div>
     </div>
   );

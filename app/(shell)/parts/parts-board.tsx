@@ -37,7 +37,12 @@ export function PartsBoard({ list, q, canEdit, defaultSpread }: Props) {
       cellRenderer: (p: ICellRendererParams<PartDto>) =>
         p.data?.hasPhoto ? (
           // eslint-disable-next-line @next/next/no-img-element -- a signed-in route: next/image would fetch it without the session
-          <img src={`/api/v1/parts/${p.data.id}/photo?v=${p.data.version}`} alt={`Photo of ${p.data.partNumber}`} loading="lazy" className="my-1 h-8 w-8 rounded object-cover" />
+          <img
+            src={`/api/v1/parts/${p.data.id}/photo?v=${p.data.version}`}
+            alt={`Photo of ${p.data.partNumber}`}
+            loading="lazy"
+            className="my-1 h-8 w-8 rounded object-cover"
+          />
         ) : (
           <span className="text-ink-faint">—</span>
         ),
@@ -50,7 +55,7 @@ export function PartsBoard({ list, q, canEdit, defaultSpread }: Props) {
       cellClass: 'num',
       valueFormatter: (p) => (p.value === null || p.value === undefined ? 'not learned' : Number(p.value).toPrecision(6)),
     },
-    { field: 'apwSampleSize', headerName: 'Sample (pcs)', maxWidth: 140, cellClass: 'num', valueFormatter: (p) => (p.value ?? '—') },
+    { field: 'apwSampleSize', headerName: 'Sample (pcs)', maxWidth: 140, cellClass: 'num', valueFormatter: (p) => p.value ?? '—' },
     {
       field: 'pieceSpread',
       headerName: 'Piece spread',
@@ -58,21 +63,29 @@ export function PartsBoard({ list, q, canEdit, defaultSpread }: Props) {
       valueGetter: (p) => p.data?.pieceSpread ?? defaultSpread,
       cellRenderer: (p: ICellRendererParams<PartDto>) =>
         p.data?.spreadLearned ? (
-          <span className="num">{percent(p.data.pieceSpread!)} <span className="text-ink-faint font-sans">learned ({p.data.spreadObservations})</span></span>
+          <span className="num">
+            {percent(p.data.pieceSpread!)} <span className="text-ink-faint font-sans">learned ({p.data.spreadObservations})</span>
+          </span>
         ) : (
-          <span className="num">{percent(defaultSpread)} <span className="text-caution font-sans">assumed</span></span>
+          <span className="num">
+            {percent(defaultSpread)} <span className="text-caution font-sans">assumed</span>
+          </span>
         ),
     },
     ...(canEdit
-      ? [{
-          headerName: '',
-          sortable: false,
-          filter: false,
-          maxWidth: 110,
-          cellRenderer: (p: ICellRendererParams<PartDto>) => (
-            <button type="button" className="text-forge hover:underline" onClick={() => setEditing(p.data!)} aria-label={`Edit ${p.data?.partNumber}`}>Edit</button>
-          ),
-        } satisfies ColDef<PartDto>]
+      ? [
+          {
+            headerName: '',
+            sortable: false,
+            filter: false,
+            maxWidth: 110,
+            cellRenderer: (p: ICellRendererParams<PartDto>) => (
+              <button type="button" className="text-forge hover:underline" onClick={() => setEditing(p.data!)} aria-label={`Edit ${p.data?.partNumber}`}>
+                Edit
+              </button>
+            ),
+          } satisfies ColDef<PartDto>,
+        ]
       : []),
   ];
 
@@ -80,8 +93,14 @@ export function PartsBoard({ list, q, canEdit, defaultSpread }: Props) {
     <div className="space-y-4">
       <div className="flex flex-wrap items-end gap-3">
         <SearchForm action="/parts" id="parts-q" label="Find parts" defaultValue={q} placeholder="Part number or description" />
-        <a className="btn-quiet" href={`/api/v1/parts/export${q ? `?q=${encodeURIComponent(q)}` : ''}`} download>Download CSV</a>
-        {canEdit ? <button type="button" className="btn-primary" onClick={() => setEditing('new')}>New part</button> : null}
+        <a className="btn-quiet" href={`/api/v1/parts/export${q ? `?q=${encodeURIComponent(q)}` : ''}`} download>
+          Download CSV
+        </a>
+        {canEdit ? (
+          <button type="button" className="btn-primary" onClick={() => setEditing('new')}>
+            New part
+          </button>
+        ) : null}
       </div>
       {editing ? (
         <PartForm
@@ -99,10 +118,13 @@ export function PartsBoard({ list, q, canEdit, defaultSpread }: Props) {
         />
       ) : null}
       <p role="status" aria-live="polite" className="min-h-6 text-sm text-ink-soft" data-testid="parts-notice">
-        {notice ?? `${total} part${total === 1 ? '' : 's'}${q ? ` matching “${q}”` : ''}${total > parts.length && parts.length ? `, ${shown.first}–${shown.last} shown` : ''}.`}
+        {notice ??
+          `${total} part${total === 1 ? '' : 's'}${q ? ` matching “${q}”` : ''}${total > parts.length && parts.length ? `, ${shown.first}–${shown.last} shown` : ''}.`}
       </p>
       <DataGrid label="Parts" rows={parts} columns={columns} rowId={(p) => String(p.id)} height={fitHeight(parts.length)} />
-      <p className="text-sm text-ink-faint">Spread is how much single pieces differ in weight. Until a part has learned its own from samples, the site default is assumed.</p>
+      <p className="text-sm text-ink-faint">
+        Spread is how much single pieces differ in weight. Until a part has learned its own from samples, the site default is assumed.
+      </p>
       {canEdit ? (
         <CsvImport<PartImportRow>
           title="Import parts from CSV"

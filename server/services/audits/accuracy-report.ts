@@ -35,7 +35,11 @@ export async function accuracyReport({ from, to, by }: { from: string; to: strin
         model: CountEvent,
         as: 'event',
         where: { createdAt: { [Op.gte]: start!, [Op.lt]: end! } },
-        include: [{ model: Part, as: 'part' }, { model: Scale, as: 'scale' }, { model: User, as: 'operator' }],
+        include: [
+          { model: Part, as: 'part' },
+          { model: Scale, as: 'scale' },
+          { model: User, as: 'operator' },
+        ],
       },
     ],
   });
@@ -43,7 +47,13 @@ export async function accuracyReport({ from, to, by }: { from: string; to: strin
   for (const item of items) {
     const e = (item as AuditItem & { event: CountEvent & { part: Part; scale: Scale; operator: User } }).event;
     const [key, label] =
-      by === 'part' ? [String(e.partId), e.part.partNumber] : by === 'scale' ? [String(e.scaleId), e.scale.name] : by === 'operator' ? [String(e.operatorId), e.operator.name] : [siteIsoWeek(e.createdAt, timeZone), siteIsoWeek(e.createdAt, timeZone)];
+      by === 'part'
+        ? [String(e.partId), e.part.partNumber]
+        : by === 'scale'
+          ? [String(e.scaleId), e.scale.name]
+          : by === 'operator'
+            ? [String(e.operatorId), e.operator.name]
+            : [siteIsoWeek(e.createdAt, timeZone), siteIsoWeek(e.createdAt, timeZone)];
     const judged = judgeAuditItem({ count: e.count, wholePieceRange: wholePieceRangeOf(e), exact: e.exact, handCount: item.handCount! });
     const group = groups.get(key) ?? { label, rows: [] };
     group.rows.push({ ...judged, hand: item.handCount! });

@@ -11,7 +11,17 @@ import { getAudit } from './get-audit';
 
 // Keys in one recount. When the last item is in, the lot is judged (ISO 2859-1 Ac/Re);
 // a rejected lot is mailed to quality and planners after the commit.
-export async function recordHandCount({ auditId, itemId, handCount, by }: { auditId: number; itemId: number; handCount: number; by: SessionUser }): Promise<AuditDto> {
+export async function recordHandCount({
+  auditId,
+  itemId,
+  handCount,
+  by,
+}: {
+  auditId: number;
+  itemId: number;
+  handCount: number;
+  by: SessionUser;
+}): Promise<AuditDto> {
   const db = getDb();
   const closed = await db.transaction(async (transaction) => {
     const audit = await Audit.findByPk(auditId, { transaction, lock: transaction.LOCK.UPDATE });

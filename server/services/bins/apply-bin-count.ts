@@ -27,7 +27,17 @@ export async function applyBinCount(
   const variance = opts.counted - bin.bookQuantity;
   const pending = needsApproval(variance, bin.bookQuantity, opts.limits);
   const row = await BinCount.create(
-    { binId: bin.id, countEventId: opts.countEventId, bookQuantity: bin.bookQuantity, counted: opts.counted, variance, status: pending ? 'pending' : 'applied', decidedBy: null, decidedAt: null, note: null },
+    {
+      binId: bin.id,
+      countEventId: opts.countEventId,
+      bookQuantity: bin.bookQuantity,
+      counted: opts.counted,
+      variance,
+      status: pending ? 'pending' : 'applied',
+      decidedBy: null,
+      decidedAt: null,
+      note: null,
+    },
     { transaction },
   );
   bin.lastCountedAt = new Date();

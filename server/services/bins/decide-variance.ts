@@ -25,17 +25,33 @@ export async function decideVariance({ binCountId, approve, note, by }: { binCou
       if (row.status !== 'pending') throw new AppError('rule_violated', `This variance was already ${row.status}`);
       if (fourEyesVariances) {
         const event = await CountEvent.findByPk(row.countEventId, { attributes: ['operatorId'], transaction });
-        if (event?.operatorId === by.id) throw new AppError('forbidden', 'You counted this bin, so someone else must approve or reject its variance (four eyes, a site setting)');
+        if (event?.operatorId === by.id)
+          throw new AppError('forbidden', 'You counted this bin, so someone else must approve or reject its variance (four eyes, a site setting)');
       }
       const bin = (await Bin.findByPk(row.binId, { transaction, lock: transaction.LOCK.UPDATE }))!;
       row.set({ status: approve ? 'approved' : 'rejected', decidedBy: by.id, decidedAt: new Date(), note: note ?? null });
       await row.save({ transaction });
-      if (approve) await adjustBin(bin, row.variance, { type: 'bin_count', id: row.id, note: `variance approved by ${by.name}${note ? `: ${note}` : ''}`.slice(0, 300), by: by.id }, transaction);
+      if (approve)
+        await adjustBin(
+          bin,
+          row.variance,
+          { type: 'bin_count', id: row.id, note: `variance approved by ${by.name}${note ? `: ${note}` : ''}`.slice(0, 300), by: by.id },
+          transaction,
+        );
       else {
         bin.lastCountedAt = null;
         await bin.save({ transaction });
       }
-      return { id: row.id, binId: row.binId, binCode: bin.code, status: row.status, variance: row.variance, bookQuantity: bin.bookQuantity, counted: row.counted, partId: bin.partId };
+      return {
+        id: row.id,
+        binId: row.binId,
+        binCode: bin.code,
+        status: row.status,
+        variance: row.variance,
+        bookQuantity: bin.bookQuantity,
+        counted: row.counted,
+        partId: bin.partId,
+      };
     }),
   );
   if (!approve) await notifyRejectedVariance({ ...decided, note: note ?? null }, by).catch((err) => log.error({ err }, 'rejected-variance notice failed'));

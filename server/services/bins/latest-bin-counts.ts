@@ -8,7 +8,12 @@ import type { LastVariance } from '@/lib/contracts/bins';
 export async function latestBinCounts(binIds: number[]): Promise<Record<number, LastVariance>> {
   getDb();
   if (!binIds.length) return {};
-  const newest = (await BinCount.findAll({ attributes: [[fn('MAX', col('id')), 'id']], where: { binId: binIds }, group: ['bin_id'], raw: true })) as unknown as Array<{ id: number }>;
+  const newest = (await BinCount.findAll({
+    attributes: [[fn('MAX', col('id')), 'id']],
+    where: { binId: binIds },
+    group: ['bin_id'],
+    raw: true,
+  })) as unknown as Array<{ id: number }>;
   if (!newest.length) return {};
   const rows = await BinCount.findAll({ where: { id: { [Op.in]: newest.map((r) => r.id) } } });
   return Object.fromEntries(rows.map((r) => [r.binId, { variance: r.variance, status: r.status, countedAt: r.createdAt.toISOString() }]));

@@ -23,6 +23,13 @@ export async function listBins(query: ListBinsQuery): Promise<PageOf & { bins: B
     const pattern = startsWithPattern(q);
     where[Op.or] = [{ code: { [Op.like]: pattern } }, { '$part.part_number$': { [Op.like]: pattern } }];
   }
-  const { rows, ...at } = await pageOfRows(Bin, { where, include: [{ association: 'part' }], filterJoins: q ? [{ association: 'part' }] : undefined, order: [['code', 'ASC']], page, pageSize });
+  const { rows, ...at } = await pageOfRows(Bin, {
+    where,
+    include: [{ association: 'part' }],
+    filterJoins: q ? [{ association: 'part' }] : undefined,
+    order: [['code', 'ASC']],
+    page,
+    pageSize,
+  });
   return { bins: rows.map(toBinDto), ...at };
 }

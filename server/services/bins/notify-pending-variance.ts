@@ -13,7 +13,10 @@ export async function notifyPendingVariance(result: BinCountResult, by: SessionU
   const part = bin ? await Part.findByPk(bin.partId, { attributes: ['id', 'partNumber', 'description'] }) : null;
   if (!bin || !part) return;
   // Planners and quality decide variances day to day; administrators may, but are not mailed for stock.
-  const approvers = await User.findAll({ where: { role: [...ROLE_PERMISSIONS['variances.approve']].filter((r) => r !== 'admin'), active: true }, attributes: ['email'] });
+  const approvers = await User.findAll({
+    where: { role: [...ROLE_PERMISSIONS['variances.approve']].filter((r) => r !== 'admin'), active: true },
+    attributes: ['email'],
+  });
   const pct = variancePercent(result.variance, result.bookQuantity);
   const signed = `${result.variance > 0 ? '+' : ''}${result.variance} pcs${Number.isFinite(pct) ? `, ${(Math.round(pct * 10) / 10).toString()} %` : ''}`;
   await sendMail({

@@ -5,7 +5,10 @@ import { sendMail } from '../../mail/send-mail';
 
 // A rejected variance means the bin must be counted again: the clerks hear of it, with the reason.
 // Sent after the decision has committed; a failed mail is in the outbox and the log.
-export async function notifyRejectedVariance(decided: { binId: number; counted: number; bookQuantity: number; note: string | null }, by: SessionUser): Promise<void> {
+export async function notifyRejectedVariance(
+  decided: { binId: number; counted: number; bookQuantity: number; note: string | null },
+  by: SessionUser,
+): Promise<void> {
   const bin = await Bin.findByPk(decided.binId, { attributes: ['id', 'code', 'partId'] });
   const part = bin ? await Part.findByPk(bin.partId, { attributes: ['id', 'partNumber', 'description'] }) : null;
   if (!bin || !part) return;

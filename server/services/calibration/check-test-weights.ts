@@ -20,7 +20,8 @@ export async function checkTestWeights(
   const weights = await TestWeight.findAll({ where: { id: { [Op.in]: ids } }, transaction });
   const byId = new Map(weights.map((w) => [w.id, w]));
   const missing = ids.filter((id) => !byId.has(id));
-  if (missing.length) throw new AppError('validation_failed', 'Unknown test weights', { fields: { testWeightIds: `no test weight with id ${missing.join(', ')}` } });
+  if (missing.length)
+    throw new AppError('validation_failed', 'Unknown test weights', { fields: { testWeightIds: `no test weight with id ${missing.join(', ')}` } });
   const problems: string[] = [];
   for (const w of weights) {
     if (!w.active) problems.push(`${w.identifier} is retired`);

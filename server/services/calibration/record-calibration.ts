@@ -14,7 +14,15 @@ import { toCalibrationRecordDto } from './calibration-record-dto';
 // Records a scale test and sets the scale's status from it in one transaction: a failing test locks
 // the scale, a passing one (with adequate weights) puts it back in service with a new due date and
 // the repeatability it showed (used as s_r when counting).
-export async function recordCalibration({ scaleId, input, by }: { scaleId: number; input: RecordCalibrationInput; by: SessionUser }): Promise<CalibrationRecordDto> {
+export async function recordCalibration({
+  scaleId,
+  input,
+  by,
+}: {
+  scaleId: number;
+  input: RecordCalibrationInput;
+  by: SessionUser;
+}): Promise<CalibrationRecordDto> {
   const db = getDb();
   const today = siteDay(await siteTimeZone());
   return db.transaction(async (transaction) => {

@@ -30,7 +30,14 @@ export function toTestWeightDto(w: TestWeight, today: string): TestWeightDto {
 export async function listTestWeights(): Promise<TestWeightDto[]> {
   getDb();
   const today = siteDay(await siteTimeZone());
-  return (await TestWeight.findAll({ order: [['nominalG', 'ASC'], ['identifier', 'ASC']] })).map((w) => toTestWeightDto(w, today));
+  return (
+    await TestWeight.findAll({
+      order: [
+        ['nominalG', 'ASC'],
+        ['identifier', 'ASC'],
+      ],
+    })
+  ).map((w) => toTestWeightDto(w, today));
 }
 
 // Only nominal values of the OIML R 111 1-2-5 series are accepted, so every weight has a class MPE.
@@ -38,7 +45,9 @@ export async function createTestWeight({ input }: { input: CreateTestWeightInput
   getDb();
   const nominalG = toGrams(input.nominal, input.unit);
   if (weightMpeMg(nominalG, input.weightClass) === null) {
-    throw new AppError('validation_failed', 'Some fields need attention', { fields: { nominal: 'Use a nominal value of the 1-2-5 series, 1 g to 50 kg (OIML R 111)' } });
+    throw new AppError('validation_failed', 'Some fields need attention', {
+      fields: { nominal: 'Use a nominal value of the 1-2-5 series, 1 g to 50 kg (OIML R 111)' },
+    });
   }
   const row = await TestWeight.create({
     identifier: input.identifier,

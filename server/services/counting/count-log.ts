@@ -63,11 +63,35 @@ function toRow(e: Loaded): CountLogRow {
 export async function countLog(query: CountLogQuery): Promise<{ rows: CountLogRow[]; total: number; page: number; pageSize: number }> {
   getDb();
   const page = query.page ?? 1;
-  const { rows, count } = await CountEvent.findAndCountAll({ ...findOptions(query, await siteTimeZone()), limit: COUNT_LOG_PAGE_SIZE, offset: (page - 1) * COUNT_LOG_PAGE_SIZE, distinct: true });
+  const { rows, count } = await CountEvent.findAndCountAll({
+    ...findOptions(query, await siteTimeZone()),
+    limit: COUNT_LOG_PAGE_SIZE,
+    offset: (page - 1) * COUNT_LOG_PAGE_SIZE,
+    distinct: true,
+  });
   return { rows: (rows as Loaded[]).map(toRow), total: count, page, pageSize: COUNT_LOG_PAGE_SIZE };
 }
 
-const HEADER = ['counted_at_utc', 'counted_at_site', 'purpose', 'part_number', 'description', 'scale', 'counted_by', 'order', 'bin', 'net_g', 'sample_pcs', 'apw_g', 'count', 'plus_minus_pcs', 'expanded_uncertainty_pcs_k2', 'exact', 'target', 'warnings'];
+const HEADER = [
+  'counted_at_utc',
+  'counted_at_site',
+  'purpose',
+  'part_number',
+  'description',
+  'scale',
+  'counted_by',
+  'order',
+  'bin',
+  'net_g',
+  'sample_pcs',
+  'apw_g',
+  'count',
+  'plus_minus_pcs',
+  'expanded_uncertainty_pcs_k2',
+  'exact',
+  'target',
+  'warnings',
+];
 
 // The same filters as the page, every page at once (up to 50 000 rows); warnings as their stable codes;
 // the moment both as UTC (for machines) and as the site's clock read it (for people).
@@ -75,25 +99,27 @@ export async function countLogTable(query: CountLogQuery): Promise<{ header: rea
   getDb();
   const timeZone = await siteTimeZone();
   const events = (await CountEvent.findAll({ ...findOptions(query, timeZone), limit: EXPORT_LIMIT })) as Loaded[];
-  const rows = events.map(toRow).map((r) => [
-    r.at,
-    formatSiteDateTime(r.at, timeZone),
-    r.purpose,
-    r.partNumber,
-    r.description,
-    r.scaleName,
-    r.operatorName,
-    r.orderNumber ?? '',
-    r.binCode ?? '',
-    r.net,
-    r.sampleQuantity,
-    r.averagePieceWeight,
-    r.count,
-    r.wholePieceRange,
-    r.expandedUncertainty,
-    r.exact ? 'yes' : 'no',
-    r.targetQuantity ?? '',
-    r.warnings.join(' '),
-  ]);
+  const rows = events
+    .map(toRow)
+    .map((r) => [
+      r.at,
+      formatSiteDateTime(r.at, timeZone),
+      r.purpose,
+      r.partNumber,
+      r.description,
+      r.scaleName,
+      r.operatorName,
+      r.orderNumber ?? '',
+      r.binCode ?? '',
+      r.net,
+      r.sampleQuantity,
+      r.averagePieceWeight,
+      r.count,
+      r.wholePieceRange,
+      r.expandedUncertainty,
+      r.exact ? 'yes' : 'no',
+      r.targetQuantity ?? '',
+      r.warnings.join(' '),
+    ]);
   return { header: HEADER, rows };
 }

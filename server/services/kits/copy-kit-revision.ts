@@ -16,7 +16,11 @@ export async function copyKitRevision({ kitId, revision }: { kitId: number; revi
     }
     const copy = await Kit.create({ code: source.code, revision, description: source.description }, { transaction });
     const dto = toKitDto(source);
-    await writeComponents(copy.id, dto.components.map(({ partId, quantity, toleranceBelow, toleranceAbove }) => ({ partId, quantity, toleranceBelow, toleranceAbove })), transaction);
+    await writeComponents(
+      copy.id,
+      dto.components.map(({ partId, quantity, toleranceBelow, toleranceAbove }) => ({ partId, quantity, toleranceBelow, toleranceAbove })),
+      transaction,
+    );
     return copy.id;
   });
   return toKitDto((await Kit.findByPk(id, { include: KIT_INCLUDE }))!);

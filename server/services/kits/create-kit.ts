@@ -8,7 +8,15 @@ import { oncePerKey } from '../requests/once-per-key';
 import { KIT_INCLUDE, toKitDto } from './kit-dto';
 import { writeComponents } from './write-components';
 
-export async function createKit({ input, by, idempotencyKey }: { input: CreateKitInput; by: SessionUser; idempotencyKey?: string }): Promise<{ kit: KitDto; replayed: boolean }> {
+export async function createKit({
+  input,
+  by,
+  idempotencyKey,
+}: {
+  input: CreateKitInput;
+  by: SessionUser;
+  idempotencyKey?: string;
+}): Promise<{ kit: KitDto; replayed: boolean }> {
   getDb();
   const { id, replayed } = await oncePerKey({ key: idempotencyKey, userId: by.id, scope: 'kits.create', input }, async (transaction) => {
     if (await Kit.count({ where: { code: input.code, revision: input.revision }, transaction })) {

@@ -19,7 +19,12 @@ export async function importBoms({ input }: { input: ImportCsvInput }): Promise<
   const records = readCsvRecords(input.csv, ['kit_code', 'revision', 'part_number', 'quantity'], ['description', 'tolerance_below', 'tolerance_above']);
   const groups = new Map<string, BomGroup>();
   const rows = records.map(({ line, values }) => {
-    const parsed = bomCsvRowSchema.safeParse({ ...values, description: values.description ?? '', tolerance_below: values.tolerance_below ?? '', tolerance_above: values.tolerance_above ?? '' });
+    const parsed = bomCsvRowSchema.safeParse({
+      ...values,
+      description: values.description ?? '',
+      tolerance_below: values.tolerance_below ?? '',
+      tolerance_above: values.tolerance_above ?? '',
+    });
     const row: BomImportRow = {
       line,
       kitCode: (values.kit_code ?? '').toUpperCase(),
@@ -45,7 +50,9 @@ export async function importBoms({ input }: { input: ImportCsvInput }): Promise<
   const kits = await Kit.findAll({ where: { [Op.or]: [...groups.values()].map((g) => ({ code: g.kitCode, revision: g.revision })) } });
   const kitOf = (g: BomGroup) => kits.find((k) => k.code === g.kitCode && k.revision === g.revision);
   const usedKitIds = new Set(
-    (await BuildOrder.findAll({ where: { kitId: { [Op.in]: kits.map((k) => k.id) }, status: { [Op.ne]: 'draft' } }, attributes: ['kitId'] })).map((o) => o.kitId),
+    (await BuildOrder.findAll({ where: { kitId: { [Op.in]: kits.map((k) => k.id) }, status: { [Op.ne]: 'draft' } }, attributes: ['kitId'] })).map(
+      (o) => o.kitId,
+    ),
   );
   for (const group of groups.values()) {
     const kit = kitOf(group);
@@ -57,7 +64,12 @@ export async function importBoms({ input }: { input: ImportCsvInput }): Promise<
 
   await db.transaction(async (transaction) => {
     for (const group of groups.values()) {
-      const components = group.lines.map(({ data }) => ({ partId: partIds.get(data.part_number)!, quantity: data.quantity, toleranceBelow: data.tolerance_below, toleranceAbove: data.tolerance_above }));
+      const components = group.lines.map(({ data }) => ({
+        partId: partIds.get(data.part_number)!,
+        quantity: data.quantity,
+        toleranceBelow: data.tolerance_below,
+        toleranceAbove: data.tolerance_above,
+      }));
       const description = group.lines.find((l) => l.data.description)?.data.description;
       const kit = await Kit.findOne({ where: { code: group.kitCode, revision: group.revision }, transaction, lock: transaction.LOCK.UPDATE });
       if (!kit) {

@@ -7,7 +7,13 @@ import { KIT_INCLUDE, toKitDto } from './kit-dto';
 
 export async function listKits(): Promise<KitDto[]> {
   getDb();
-  const kits = await Kit.findAll({ include: KIT_INCLUDE, order: [['code', 'ASC'], ['revision', 'ASC']] });
+  const kits = await Kit.findAll({
+    include: KIT_INCLUDE,
+    order: [
+      ['code', 'ASC'],
+      ['revision', 'ASC'],
+    ],
+  });
   return kits.map(toKitDto);
 }
 

@@ -15,5 +15,8 @@ export async function writeComponents(kitId: number, components: CreateKitInput[
   });
   if (Object.keys(fields).length) throw new AppError('validation_failed', 'Some parts of the kit do not exist', { fields });
   await KitComponent.destroy({ where: { kitId }, transaction });
-  await KitComponent.bulkCreate(components.map((c) => ({ kitId, ...c })), { transaction });
+  await KitComponent.bulkCreate(
+    components.map((c) => ({ kitId, ...c })),
+    { transaction },
+  );
 }

@@ -11,11 +11,17 @@ import { inOrderOf } from './in-order-of';
 // company-internal AIs (see labels/kit-element-strings.ts).
 export async function loadKitLabels({ ids }: { ids: number[] }): Promise<KitLabelData[]> {
   getDb();
-  const orders = (await BuildOrder.findAll({ where: { id: { [Op.in]: [...new Set(ids)] } }, include: [{ association: 'kit' }] })) as Array<BuildOrder & { kit: Kit }>;
+  const orders = (await BuildOrder.findAll({ where: { id: { [Op.in]: [...new Set(ids)] } }, include: [{ association: 'kit' }] })) as Array<
+    BuildOrder & { kit: Kit }
+  >;
   const found = inOrderOf(ids, orders, 'build order');
   const notReady = found.filter((o) => o.status === 'draft' || o.status === 'cancelled');
   if (notReady.length) {
-    throw new AppError('rule_violated', `Kit labels are for released or completed build orders; ${notReady.map((o) => `${o.number} is ${o.status}`).join(', ')}`, { fields: { ids: 'only released, in-progress or complete build orders' } });
+    throw new AppError(
+      'rule_violated',
+      `Kit labels are for released or completed build orders; ${notReady.map((o) => `${o.number} is ${o.status}`).join(', ')}`,
+      { fields: { ids: 'only released, in-progress or complete build orders' } },
+    );
   }
   return found.map((o) => ({ kitCode: o.kit.code, revision: o.kit.revision, description: o.kit.description, orderNumber: o.number, quantity: o.quantity }));
 }

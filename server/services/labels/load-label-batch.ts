@@ -20,7 +20,12 @@ export async function loadLabelBatch({ template, stock, ids }: { template: Label
 // What the labels are of, for file and job names: the code when there is one label.
 export function batchName(batch: LabelBatch): string {
   const first = batch.items[0];
-  const code = batch.template === 'bin' ? (first as { binCode: string }).binCode : batch.template === 'part' ? (first as { partNumber: string }).partNumber : (first as { orderNumber: string }).orderNumber;
+  const code =
+    batch.template === 'bin'
+      ? (first as { binCode: string }).binCode
+      : batch.template === 'part'
+        ? (first as { partNumber: string }).partNumber
+        : (first as { orderNumber: string }).orderNumber;
   const what = batch.items.length === 1 ? code : `${batch.items.length}-labels`;
   return `${batch.template}-${what}-${batch.stock}`.replace(/[^A-Za-z0-9._-]/g, '_');
 }

@@ -17,13 +17,11 @@ export interface LineProgress {
 // Adds one capture (already written, in this transaction) to a build-order line, and moves a
 // released order to in progress. The line row is locked so parallel captures add up; the line's
 // uncertainty is recomputed from all its captures, so a shared APW is counted once.
-export async function applyCountToLine(
-  opts: { orderLineId: number; partId: number; count: number },
-  transaction: Transaction,
-): Promise<LineProgress> {
+export async function applyCountToLine(opts: { orderLineId: number; partId: number; count: number }, transaction: Transaction): Promise<LineProgress> {
   const line = await BuildOrderLine.findByPk(opts.orderLineId, { transaction, lock: transaction.LOCK.UPDATE });
   if (!line) throw new AppError('not_found', 'Order line was not found', { fields: { orderLineId: 'no such line' } });
-  if (line.partId !== opts.partId) throw new AppError('validation_failed', 'That line is for another part', { fields: { partId: 'does not match the order line' } });
+  if (line.partId !== opts.partId)
+    throw new AppError('validation_failed', 'That line is for another part', { fields: { partId: 'does not match the order line' } });
   const order = await BuildOrder.findByPk(line.orderId, { transaction, lock: transaction.LOCK.UPDATE });
   if (!order || (order.status !== 'released' && order.status !== 'in_progress')) {
     throw new AppError('rule_violated', `Order ${order?.number ?? ''} is not open for kitting (${order?.status ?? 'missing'})`);
@@ -47,5 +45,13 @@ export async function applyCountToLine(
     order.status = 'in_progress';
     await order.save({ transaction });
   }
-  return { id: line.id, orderId: line.orderId, required: line.required, counted: line.counted, expandedUncertainty: lineUncertainty(varianceSum), wholePieceRange: line.wholePieceRange, verdict: line.verdict };
+  return {
+    id: line.id,
+    orderId: line.orderId,
+    required: line.required,
+    counted: line.counted,
+    expandedUncertainty: lineUncertainty(varianceSum),
+    wholePieceRange: line.wholePieceRange,
+    verdict: line.verdict,
+  };
 }

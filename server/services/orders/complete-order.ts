@@ -13,18 +13,29 @@ import { lockOrderStock } from './order-availability';
 
 // Completion turns the reservation into a recorded consumption: what was counted into kits leaves
 // the part's bins (largest first), and the hold on stock ends. All in one transaction.
-export async function completeOrder({ orderId, input, by }: { orderId: number; input: CompleteOrderInput; by: SessionUser }): Promise<OrderDto & { kitLabel: { jobId: number; status: string } | null }> {
+export async function completeOrder({
+  orderId,
+  input,
+  by,
+}: {
+  orderId: number;
+  input: CompleteOrderInput;
+  by: SessionUser;
+}): Promise<OrderDto & { kitLabel: { jobId: number; status: string } | null }> {
   const db = getDb();
   await retryOnDeadlock(() =>
     db.transaction(async (transaction) => {
       const order = await BuildOrder.findByPk(orderId, { transaction, lock: transaction.LOCK.UPDATE });
       if (!order) throw notFound('Build order');
       if (order.version !== input.version) throw new AppError('stale_version', 'Someone else changed this order; reload and try again');
-      if (order.status !== 'released' && order.status !== 'in_progress') throw new AppError('rule_violated', `${order.number} is ${order.status.replace('_', ' ')}; only released orders can be completed`);
+      if (order.status !== 'released' && order.status !== 'in_progress')
+        throw new AppError('rule_violated', `${order.number} is ${order.status.replace('_', ' ')}; only released orders can be completed`);
       const lines = await BuildOrderLine.findAll({ where: { orderId }, order: [['partId', 'ASC']], transaction, lock: transaction.LOCK.UPDATE });
       const notIn = lines.filter((l) => l.verdict !== 'in');
       if (notIn.length && !input.overrideReason) {
-        throw new AppError('rule_violated', `${notIn.length} line(s) are not in tolerance; count them, or complete with a reason`, { fields: { overrideReason: 'needed while lines are not in tolerance' } });
+        throw new AppError('rule_violated', `${notIn.length} line(s) are not in tolerance; count them, or complete with a reason`, {
+          fields: { overrideReason: 'needed while lines are not in tolerance' },
+        });
       }
       await lockOrderStock(orderId, transaction);
       await db.query(
@@ -36,7 +47,7 @@ export async function completeOrder({ orderId, input, by }: { orderId: number; i
       for (const line of lines) if (line.counted > 0) await consumeFromBins(line, order.number, by.id, transaction);
       order.status = 'complete';
       order.completedAt = new Date();
-      order.overrideReason = notIn.length ? input.overrideReason ?? null : null;
+      order.overrideReason = notIn.length ? (input.overrideReason ?? null) : null;
       await order.save({ transaction });
     }),
   );
@@ -49,7 +60,15 @@ export async function completeOrder({ orderId, input, by }: { orderId: number; i
 }
 
 async function consumeFromBins(line: BuildOrderLine, orderNumber: string, userId: number, transaction: Transaction): Promise<void> {
-  const bins = await Bin.findAll({ where: { partId: line.partId }, order: [['bookQuantity', 'DESC'], ['id', 'ASC']], transaction, lock: transaction.LOCK.UPDATE });
+  const bins = await Bin.findAll({
+    where: { partId: line.partId },
+    order: [
+      ['bookQuantity', 'DESC'],
+      ['id', 'ASC'],
+    ],
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
   let left = line.counted;
   for (const [i, bin] of bins.entries()) {
     // The last bin takes any remainder, even below zero: the book must show what really left.
@@ -57,11 +76,35 @@ async function consumeFromBins(line: BuildOrderLine, orderNumber: string, userId
     if (take === 0) continue;
     bin.bookQuantity -= take;
     await bin.save({ transaction });
-    await StockMovement.create({ partId: line.partId, binId: bin.id, delta: -take, reason: 'consumption', refType: 'build_order', refId: line.orderId, note: `kitted into ${orderNumber}`, createdBy: userId }, { transaction });
+    await StockMovement.create(
+      {
+        partId: line.partId,
+        binId: bin.id,
+        delta: -take,
+        reason: 'consumption',
+        refType: 'build_order',
+        refId: line.orderId,
+        note: `kitted into ${orderNumber}`,
+        createdBy: userId,
+      },
+      { transaction },
+    );
     left -= take;
     if (left === 0) break;
   }
   if (left > 0) {
-    await StockMovement.create({ partId: line.partId, binId: null, delta: -left, reason: 'consumption', refType: 'build_order', refId: line.orderId, note: `kitted into ${orderNumber}; no bin held this part`, createdBy: userId }, { transaction });
+    await StockMovement.create(
+      {
+        partId: line.partId,
+        binId: null,
+        delta: -left,
+        reason: 'consumption',
+        refType: 'build_order',
+        refId: line.orderId,
+        note: `kitted into ${orderNumber}; no bin held this part`,
+        createdBy: userId,
+      },
+      { transaction },
+    );
   }
 }

@@ -12,7 +12,15 @@ import { getOrder } from './get-order';
 
 // A draft order copies the kit revision's bill of material, scaled by the number of kits.
 // A double submit with the same Idempotency-Key makes one order.
-export async function createOrder({ input, by, idempotencyKey }: { input: CreateOrderInput; by: SessionUser; idempotencyKey?: string }): Promise<{ order: OrderDto; replayed: boolean }> {
+export async function createOrder({
+  input,
+  by,
+  idempotencyKey,
+}: {
+  input: CreateOrderInput;
+  by: SessionUser;
+  idempotencyKey?: string;
+}): Promise<{ order: OrderDto; replayed: boolean }> {
   getDb();
   const timeZone = await siteTimeZone();
   const { id, replayed } = await oncePerKey({ key: idempotencyKey, userId: by.id, scope: 'orders.create', input }, async (transaction) => {
@@ -21,7 +29,17 @@ export async function createOrder({ input, by, idempotencyKey }: { input: Create
     if (!kit.active) throw new AppError('rule_violated', `Kit ${kit.code} revision ${kit.revision} is retired`, { fields: { kitId: 'retired revision' } });
     const components = await KitComponent.findAll({ where: { kitId: kit.id }, transaction });
     const order = await BuildOrder.create(
-      { number: `T${randomBytes(8).toString('hex')}`, kitId: kit.id, quantity: input.quantity, dueDate: input.dueDate ?? null, createdBy: by.id, releasedAt: null, completedAt: null, cancelledAt: null, overrideReason: null },
+      {
+        number: `T${randomBytes(8).toString('hex')}`,
+        kitId: kit.id,
+        quantity: input.quantity,
+        dueDate: input.dueDate ?? null,
+        createdBy: by.id,
+        releasedAt: null,
+        completedAt: null,
+        cancelledAt: null,
+        overrideReason: null,
+      },
       { transaction },
     );
     // The readable number comes from the row id, so two planners never get the same one.

@@ -6,5 +6,13 @@ import { lineUncertainty } from './line-verdict';
 export async function lineProgress(orderLineId: number): Promise<LineProgress | null> {
   const line = await BuildOrderLine.findByPk(orderLineId);
   if (!line) return null;
-  return { id: line.id, orderId: line.orderId, required: line.required, counted: line.counted, expandedUncertainty: lineUncertainty(Number(line.varianceSum)), wholePieceRange: line.wholePieceRange, verdict: line.verdict };
+  return {
+    id: line.id,
+    orderId: line.orderId,
+    required: line.required,
+    counted: line.counted,
+    expandedUncertainty: lineUncertainty(Number(line.varianceSum)),
+    wholePieceRange: line.wholePieceRange,
+    verdict: line.verdict,
+  };
 }

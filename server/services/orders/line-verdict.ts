@@ -25,7 +25,17 @@ export function lineTotal(events: readonly CountEvent[]): LineTotal {
   return combineLineCaptures(events.map(toLineCapture));
 }
 
-export function lineVerdict(line: { counted: number; wholePieceRange: number; required: number; toleranceBelow: number; toleranceAbove: number; captures: number }) {
+export function lineVerdict(line: {
+  counted: number;
+  wholePieceRange: number;
+  required: number;
+  toleranceBelow: number;
+  toleranceAbove: number;
+  captures: number;
+}) {
   if (line.captures === 0) return 'open' as const;
-  return judgeKitLine({ count: line.counted, wholePieceRange: line.wholePieceRange }, { target: line.required, below: line.toleranceBelow, above: line.toleranceAbove });
+  return judgeKitLine(
+    { count: line.counted, wholePieceRange: line.wholePieceRange },
+    { target: line.required, below: line.toleranceBelow, above: line.toleranceAbove },
+  );
 }

@@ -24,7 +24,14 @@ function orderWhere({ status, q }: Pick<ListOrdersQuery, 'status' | 'q'>): Where
 export async function listOrders(query: ListOrdersQuery): Promise<PageOf & { orders: OrderSummaryDto[] }> {
   getDb();
   const { page, pageSize } = query;
-  const { rows, total } = await pageOfRows(BuildOrder, { where: orderWhere(query), include: [{ association: 'kit' }], filterJoins: query.q ? [{ association: 'kit' }] : undefined, order: [['id', 'DESC']], page, pageSize });
+  const { rows, total } = await pageOfRows(BuildOrder, {
+    where: orderWhere(query),
+    include: [{ association: 'kit' }],
+    filterJoins: query.q ? [{ association: 'kit' }] : undefined,
+    order: [['id', 'DESC']],
+    page,
+    pageSize,
+  });
   const progress = rows.length
     ? ((await BuildOrderLine.findAll({
         attributes: ['orderId', [fn('COUNT', col('id')), 'lines'], [fn('SUM', literal("verdict = 'in'")), 'linesDone']],

@@ -41,7 +41,10 @@ export async function lockOrderStock(orderId: number, transaction: Transaction):
     type: QueryTypes.SELECT,
     transaction,
   });
-  await lockStockRows(lines.map((l) => l.part_id), transaction);
+  await lockStockRows(
+    lines.map((l) => l.part_id),
+    transaction,
+  );
 }
 
 // Required per part against stock on hand minus what other orders hold. One query for the whole order;
@@ -56,7 +59,13 @@ export async function orderAvailability(orderId: number, opts: { transaction?: T
       ORDER BY l.part_id`,
     { replacements: { orderId }, type: QueryTypes.SELECT, transaction: opts.transaction },
   );
-  const locked = opts.lockRows && opts.transaction ? await lockStockRows(rows.map((r) => r.part_id), opts.transaction) : undefined;
+  const locked =
+    opts.lockRows && opts.transaction
+      ? await lockStockRows(
+          rows.map((r) => r.part_id),
+          opts.transaction,
+        )
+      : undefined;
   return rows.map((r) => {
     const stock = locked ? locked.get(r.part_id) : r;
     const onHand = Number(stock?.on_hand ?? 0);

@@ -24,7 +24,10 @@ export function shortageMail(number: string, shortages: AvailabilityLine[]): { k
     text: [
       `${number} could not be released because these parts are short:`,
       '',
-      ...shortages.map((s) => `  ${s.partNumber.padEnd(18)} needs ${s.required}, available ${s.available} (on hand ${s.onHand}, held by other orders ${s.reserved}) — short by ${s.shortage}`),
+      ...shortages.map(
+        (s) =>
+          `  ${s.partNumber.padEnd(18)} needs ${s.required}, available ${s.available} (on hand ${s.onHand}, held by other orders ${s.reserved}) — short by ${s.shortage}`,
+      ),
       '',
       'Nothing was reserved. Release it again once stock has arrived or other orders are done.',
     ].join('\n'),

@@ -14,11 +14,15 @@ export async function recountLine({ orderId, lineId, version }: { orderId: numbe
   await retryOnDeadlock(() =>
     db.transaction(async (transaction) => {
       const order = await lockOrder(orderId, version, transaction);
-      if (order.status !== 'released' && order.status !== 'in_progress') throw new AppError('rule_violated', `${order.number} is ${order.status}: only an open order's lines are counted again`);
+      if (order.status !== 'released' && order.status !== 'in_progress')
+        throw new AppError('rule_violated', `${order.number} is ${order.status}: only an open order's lines are counted again`);
       const line = await BuildOrderLine.findOne({ where: { id: lineId, orderId }, transaction, lock: transaction.LOCK.UPDATE });
       if (!line) throw notFound('Order line');
       if (line.verdict !== 'uncertain' && line.verdict !== 'out') {
-        throw new AppError('rule_violated', `This line is ${line.verdict === 'in' ? 'in tolerance' : 'not counted yet'}: only an uncertain or out-of-tolerance line is sent back for a recount`);
+        throw new AppError(
+          'rule_violated',
+          `This line is ${line.verdict === 'in' ? 'in tolerance' : 'not counted yet'}: only an uncertain or out-of-tolerance line is sent back for a recount`,
+        );
       }
       const last = await CountEvent.max<number, CountEvent>('id', { where: { orderLineId: line.id }, transaction });
       line.set({ counted: 0, captures: 0, varianceSum: '0', wholePieceRange: 0, verdict: 'open', recountAfterEventId: last ?? null });

@@ -22,32 +22,37 @@ export async function releaseOrder({ orderId, version, by }: { orderId: number; 
     replacements: { orderId },
   });
   try {
-    await retryOnDeadlock(() => db.transaction(async (transaction) => {
-      const order = await BuildOrder.findByPk(orderId, { transaction, lock: transaction.LOCK.UPDATE });
-      if (!order) throw notFound('Build order');
-      number = order.number;
-      if (order.version !== version) throw new AppError('stale_version', 'Someone else changed this order; reload and try again');
-      if (order.status !== 'draft') throw new AppError('rule_violated', `Only a draft order can be released; ${order.number} is ${order.status.replace('_', ' ')}`);
-      const replacements = { orderId };
-      const lines = await orderAvailability(orderId, { transaction, lockRows: true });
-      shortages = lines.filter((l) => l.shortage > 0);
-      if (shortages.length) {
-        const list = shortages.map((s) => `${s.partNumber} short by ${s.shortage}`).join(', ');
-        throw new AppError('rule_violated', `Not enough stock to release ${order.number}: ${list}`, { fields: Object.fromEntries(shortages.map((s) => [`parts.${s.partNumber}`, `short by ${s.shortage}`])) });
-      }
-      await db.query(
-        `UPDATE part_stock ps JOIN build_order_lines l ON l.part_id = ps.part_id SET ps.reserved = ps.reserved + l.required WHERE l.order_id = :orderId`,
-        { replacements, transaction },
-      );
-      await db.query(
-        `INSERT INTO stock_reservations (order_line_id, part_id, quantity, status, created_at, updated_at)
+    await retryOnDeadlock(() =>
+      db.transaction(async (transaction) => {
+        const order = await BuildOrder.findByPk(orderId, { transaction, lock: transaction.LOCK.UPDATE });
+        if (!order) throw notFound('Build order');
+        number = order.number;
+        if (order.version !== version) throw new AppError('stale_version', 'Someone else changed this order; reload and try again');
+        if (order.status !== 'draft')
+          throw new AppError('rule_violated', `Only a draft order can be released; ${order.number} is ${order.status.replace('_', ' ')}`);
+        const replacements = { orderId };
+        const lines = await orderAvailability(orderId, { transaction, lockRows: true });
+        shortages = lines.filter((l) => l.shortage > 0);
+        if (shortages.length) {
+          const list = shortages.map((s) => `${s.partNumber} short by ${s.shortage}`).join(', ');
+          throw new AppError('rule_violated', `Not enough stock to release ${order.number}: ${list}`, {
+            fields: Object.fromEntries(shortages.map((s) => [`parts.${s.partNumber}`, `short by ${s.shortage}`])),
+          });
+        }
+        await db.query(
+          `UPDATE part_stock ps JOIN build_order_lines l ON l.part_id = ps.part_id SET ps.reserved = ps.reserved + l.required WHERE l.order_id = :orderId`,
+          { replacements, transaction },
+        );
+        await db.query(
+          `INSERT INTO stock_reservations (order_line_id, part_id, quantity, status, created_at, updated_at)
          SELECT id, part_id, required, 'active', UTC_TIMESTAMP(), UTC_TIMESTAMP() FROM build_order_lines WHERE order_id = :orderId`,
-        { replacements, transaction },
-      );
-      order.status = 'released';
-      order.releasedAt = new Date();
-      await order.save({ transaction });
-    }));
+          { replacements, transaction },
+        );
+        order.status = 'released';
+        order.releasedAt = new Date();
+        await order.save({ transaction });
+      }),
+    );
   } catch (err) {
     if (shortages.length) await notify('planner', shortageMail(number, shortages));
     throw err;

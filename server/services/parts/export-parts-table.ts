@@ -11,6 +11,8 @@ const HEADER = ['part_number', 'description', 'counting_method', 'apw_g', 'apw_s
 export async function exportPartsTable(query: ExportPartsQuery): Promise<{ header: readonly string[]; rows: unknown[][] }> {
   getDb();
   const parts = await Part.findAll({ where: partSearch(query.q), order: [[query.sort, query.dir.toUpperCase()]], limit: 50_000 });
-  const rows = parts.map(toPartDto).map((p) => [p.partNumber, p.description, p.countingMethod, p.averagePieceWeight, p.apwSampleSize, p.pieceSpread, p.spreadLearned ? 'yes' : 'no']);
+  const rows = parts
+    .map(toPartDto)
+    .map((p) => [p.partNumber, p.description, p.countingMethod, p.averagePieceWeight, p.apwSampleSize, p.pieceSpread, p.spreadLearned ? 'yes' : 'no']);
   return { header: HEADER, rows };
 }

@@ -14,7 +14,11 @@ export async function importParts({ input }: { input: ImportCsvInput }): Promise
   const db = getDb();
   const records = readCsvRecords(input.csv, ['part_number', 'description'], ['counting_method']);
   const parsed = records.map(({ line, values }) => {
-    const result = createPartSchema.safeParse({ partNumber: values.part_number, description: values.description, countingMethod: values.counting_method?.toLowerCase() || undefined });
+    const result = createPartSchema.safeParse({
+      partNumber: values.part_number,
+      description: values.description,
+      countingMethod: values.counting_method?.toLowerCase() || undefined,
+    });
     const row: PartImportRow = {
       line,
       partNumber: result.success ? result.data.partNumber : values.part_number.toUpperCase(),

@@ -22,7 +22,5 @@ export async function learnPieceSpread(partId: number, transaction: Transaction)
     }),
   );
   if (fromIncrements) return fromIncrements;
-  return spreadFromSamples(
-    recent.map((s) => ({ quantity: s.quantity, averagePieceWeight: Number(s.apwG), netVariance: s.netVarianceG2 ?? 0 })),
-  );
+  return spreadFromSamples(recent.map((s) => ({ quantity: s.quantity, averagePieceWeight: Number(s.apwG), netVariance: s.netVarianceG2 ?? 0 })));
 }

@@ -9,7 +9,15 @@ import { partSearch } from './part-search';
 
 export async function listParts(query: ListPartsQuery): Promise<{ parts: PartDto[]; total: number; page: number; pageSize: number }> {
   getDb();
-  const { rows, ...at } = await pageOfRows(Part, { where: partSearch(query.q), order: [[query.sort, query.dir.toUpperCase()], ['id', 'ASC']], page: query.page, pageSize: query.pageSize });
+  const { rows, ...at } = await pageOfRows(Part, {
+    where: partSearch(query.q),
+    order: [
+      [query.sort, query.dir.toUpperCase()],
+      ['id', 'ASC'],
+    ],
+    page: query.page,
+    pageSize: query.pageSize,
+  });
   return { parts: rows.map(toPartDto), ...at };
 }
 

@@ -6,7 +6,13 @@ import type { SpreadBelief } from '@/lib/weighing';
 // were kept has only ĉ and its observation count: it counts as ν = observations − 1, at least 1.
 export function partSpreadBelief(part: Part): SpreadBelief | null {
   if (part.spreadDof != null && part.spreadScatter != null) {
-    return { kind: 'learned', scatter: part.spreadScatter, noise: part.spreadNoise ?? 0, degreesOfFreedom: part.spreadDof, observations: part.spreadObservations };
+    return {
+      kind: 'learned',
+      scatter: part.spreadScatter,
+      noise: part.spreadNoise ?? 0,
+      degreesOfFreedom: part.spreadDof,
+      observations: part.spreadObservations,
+    };
   }
   if (part.pieceSpread == null) return null;
   const c = Number(part.pieceSpread);

@@ -35,9 +35,14 @@ export async function recordSample({ partId, input, by }: RecordSampleOptions): 
     const scale = await loadUsableScale(input.scaleId, transaction, today);
     const noise = scaleNoise(scale);
     const net = toGrams(input.netWeight, input.unit);
-    const problems = sampleProblems({ quantity: input.quantity, netWeight: net }, { division: noise.division, max: Number(scale.capacityG), min: Number(scale.minLoadG) });
+    const problems = sampleProblems(
+      { quantity: input.quantity, netWeight: net },
+      { division: noise.division, max: Number(scale.capacityG), min: Number(scale.minLoadG) },
+    );
     if (problems.length > 0) {
-      throw new AppError('rule_violated', 'This sample cannot be right on this scale', { fields: Object.fromEntries(problems.map((p) => [p.field, p.message])) });
+      throw new AppError('rule_violated', 'This sample cannot be right on this scale', {
+        fields: Object.fromEntries(problems.map((p) => [p.field, p.message])),
+      });
     }
     const increments = input.increments?.map((x) => toGrams(x, input.unit)) ?? null;
     if (increments) checkIncrements(increments, input.quantity, net, noise.division);
@@ -57,8 +62,16 @@ export async function recordSample({ partId, input, by }: RecordSampleOptions): 
       : null;
     const sample = await PieceWeightSample.create(
       {
-        partId, scaleId: scale.id, quantity: input.quantity, netWeightG: String(net), apwG: String(apw), incrementsG: increments, createdBy: by.id,
-        status: outlier.held ? 'held' : 'accepted', holdReason, netVarianceG2: netVariance,
+        partId,
+        scaleId: scale.id,
+        quantity: input.quantity,
+        netWeightG: String(net),
+        apwG: String(apw),
+        incrementsG: increments,
+        createdBy: by.id,
+        status: outlier.held ? 'held' : 'accepted',
+        holdReason,
+        netVarianceG2: netVariance,
       },
       { transaction },
     );
@@ -67,12 +80,13 @@ export async function recordSample({ partId, input, by }: RecordSampleOptions): 
   });
 }
 
-
 // A sample built piece by piece has one increment per piece, and they add up to the net weight
 // (each increment is a difference of rounded readings, so the sum telescopes to within a few d).
 function checkIncrements(increments: number[], quantity: number, net: number, division: number): void {
   if (increments.length !== quantity) {
-    throw new AppError('validation_failed', 'Some fields need attention', { fields: { increments: `expected ${quantity} increments, one per piece, got ${increments.length}` } });
+    throw new AppError('validation_failed', 'Some fields need attention', {
+      fields: { increments: `expected ${quantity} increments, one per piece, got ${increments.length}` },
+    });
   }
   const sum = increments.reduce((a, b) => a + b, 0);
   if (Math.abs(sum - net) > 3 * division + 1e-9) {

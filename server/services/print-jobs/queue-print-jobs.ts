@@ -19,7 +19,19 @@ export interface QueuedBatch {
 
 // Checks every id up front (unknown → 404, nothing queued), then logs one queued job per 100 labels.
 // sendPrintJobs sends them; GET /api/v1/print-jobs?batch=… shows the progress.
-export async function queuePrintJobs({ template, stock, ids, printer, by }: { template: LabelTemplate; stock: StockId; ids: number[]; printer?: string; by: { id: number } | null }): Promise<QueuedBatch> {
+export async function queuePrintJobs({
+  template,
+  stock,
+  ids,
+  printer,
+  by,
+}: {
+  template: LabelTemplate;
+  stock: StockId;
+  ids: number[];
+  printer?: string;
+  by: { id: number } | null;
+}): Promise<QueuedBatch> {
   const db = getDb();
   await loadLabelBatch({ template, stock, ids });
   const batchId = randomUUID();
@@ -30,7 +42,23 @@ export async function queuePrintJobs({ template, stock, ids, printer, by }: { te
     for (const [batchIndex, chunk] of chunks.entries()) {
       rows.push(
         await PrintJob.create(
-          { batchId, batchIndex, batchCount: chunks.length, template, stock, itemIds: JSON.stringify(chunk), labels: chunk.length, printerUrl, status: 'queued', pages: null, bytes: null, printerJobId: null, error: null, requestedBy: by?.id ?? null, sentAt: null },
+          {
+            batchId,
+            batchIndex,
+            batchCount: chunks.length,
+            template,
+            stock,
+            itemIds: JSON.stringify(chunk),
+            labels: chunk.length,
+            printerUrl,
+            status: 'queued',
+            pages: null,
+            bytes: null,
+            printerJobId: null,
+            error: null,
+            requestedBy: by?.id ?? null,
+            sentAt: null,
+          },
           { transaction },
         ),
       );

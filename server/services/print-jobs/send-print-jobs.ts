@@ -18,7 +18,11 @@ export async function sendPrintJobs({ jobIds }: { jobIds: number[] }): Promise<P
   const jobs = await PrintJob.findAll({ where: { id: { [Op.in]: jobIds }, status: 'queued' }, order: [['id', 'ASC']] });
   for (const job of jobs) {
     try {
-      const { pdf, pages, filename, unprintable } = await renderLabelPdf({ template: job.template as LabelTemplate, stock: job.stock as StockId, ids: JSON.parse(job.itemIds) as number[] });
+      const { pdf, pages, filename, unprintable } = await renderLabelPdf({
+        template: job.template as LabelTemplate,
+        stock: job.stock as StockId,
+        ids: JSON.parse(job.itemIds) as number[],
+      });
       await job.update({ pages, bytes: pdf.length, note: unprintable.length ? describeUnprintable(unprintable).slice(0, 500) : null });
       const user = job.requestedBy ? await User.findByPk(job.requestedBy) : null;
       const jobName = job.batchCount > 1 ? `${filename} (${job.batchIndex + 1} of ${job.batchCount})` : filename;

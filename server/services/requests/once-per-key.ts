@@ -40,7 +40,10 @@ export async function oncePerKey(opts: OncePerKey, create: (transaction: Transac
   try {
     const id = await db.transaction(async (transaction) => {
       // Taken first: a twin request waits here on the unique index until this one commits or rolls back.
-      const row = await RequestKey.create({ userId: opts.userId, scope: opts.scope, idemKey: key, fingerprint: fingerprintOf(opts.input), recordId: 0 }, { transaction });
+      const row = await RequestKey.create(
+        { userId: opts.userId, scope: opts.scope, idemKey: key, fingerprint: fingerprintOf(opts.input), recordId: 0 },
+        { transaction },
+      );
       const made = await create(transaction);
       await row.update({ recordId: made }, { transaction });
       return made;

@@ -14,10 +14,16 @@ export async function loadUsableScale(scaleId: number, transaction: Transaction,
   const scale = await Scale.findByPk(scaleId, { transaction, lock: transaction.LOCK.SHARE });
   if (!scale) throw new AppError('not_found', 'Scale was not found', { fields: { scaleId: 'no such scale' } });
   if (scale.status === 'locked') {
-    throw new AppError('scale_locked', `Scale ${scale.name} is locked out${scale.statusReason ? `: ${scale.statusReason}` : ''}. Use another scale or ask quality to check it.`);
+    throw new AppError(
+      'scale_locked',
+      `Scale ${scale.name} is locked out${scale.statusReason ? `: ${scale.statusReason}` : ''}. Use another scale or ask quality to check it.`,
+    );
   }
   if (calibrationOverdue(scale.calibrationDueAt, today)) {
-    throw new AppError('scale_locked', `Scale ${scale.name} was due for calibration on ${scale.calibrationDueAt} and may not be used until a passing test is recorded. Use another scale or ask quality to test it.`);
+    throw new AppError(
+      'scale_locked',
+      `Scale ${scale.name} was due for calibration on ${scale.calibrationDueAt} and may not be used until a passing test is recorded. Use another scale or ask quality to test it.`,
+    );
   }
   return scale;
 }
@@ -25,7 +31,6 @@ export async function loadUsableScale(scaleId: number, transaction: Transaction,
 export function scaleNoise(scale: Scale): { division: number; repeatability: number } {
   return { division: Number(scale.divisionG), repeatability: scale.repeatabilityG === null ? 0 : Number(scale.repeatabilityG) };
 }
-
 
 // The scale as a count weighs with it at one load, when sample and bulk are on different scales:
 // its calibration is known to its in-service MPE there (OIML R 76-1 Table 6, twice in service),

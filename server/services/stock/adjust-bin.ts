@@ -9,6 +9,9 @@ export async function adjustBin(bin: Bin, delta: number, ref: { type: string; id
   if (delta === 0) return;
   bin.bookQuantity += delta;
   await bin.save({ transaction });
-  await StockMovement.create({ partId: bin.partId, binId: bin.id, delta, reason: 'adjustment', refType: ref.type, refId: ref.id, note: ref.note, createdBy: ref.by }, { transaction });
+  await StockMovement.create(
+    { partId: bin.partId, binId: bin.id, delta, reason: 'adjustment', refType: ref.type, refId: ref.id, note: ref.note, createdBy: ref.by },
+    { transaction },
+  );
   await addOnHand(bin.partId, delta, transaction);
 }

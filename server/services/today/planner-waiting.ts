@@ -18,8 +18,26 @@ export async function plannerWaiting(today: string): Promise<WaitingItem[]> {
     { replacements: { today }, type: QueryTypes.SELECT },
   );
   return [
-    { key: 'orders-draft', title: 'Draft orders not yet released', count: Number(row?.drafts ?? 0), detail: 'Check stock and release them to the bench', href: '/orders?status=draft' },
-    { key: 'orders-late', title: 'Released orders past their due date', count: Number(row?.late ?? 0), detail: 'Still being kitted after the day they were due', href: '/orders?status=open' },
-    { key: 'orders-ready', title: 'Orders ready to complete', count: Number(row?.ready ?? 0), detail: 'Every line counted in tolerance', href: '/orders?status=open' },
+    {
+      key: 'orders-draft',
+      title: 'Draft orders not yet released',
+      count: Number(row?.drafts ?? 0),
+      detail: 'Check stock and release them to the bench',
+      href: '/orders?status=draft',
+    },
+    {
+      key: 'orders-late',
+      title: 'Released orders past their due date',
+      count: Number(row?.late ?? 0),
+      detail: 'Still being kitted after the day they were due',
+      href: '/orders?status=open',
+    },
+    {
+      key: 'orders-ready',
+      title: 'Orders ready to complete',
+      count: Number(row?.ready ?? 0),
+      detail: 'Every line counted in tolerance',
+      href: '/orders?status=open',
+    },
   ];
 }

@@ -11,5 +11,11 @@ export async function queueWaiting(): Promise<WaitingItem> {
     { type: QueryTypes.SELECT },
   );
   const orders = Number(row?.order_count ?? 0);
-  return { key: 'queue', title: 'Kit lines waiting at the bench', count: Number(row?.line_count ?? 0), detail: `From ${orders} released order${orders === 1 ? '' : 's'}`, href: '/bench' };
+  return {
+    key: 'queue',
+    title: 'Kit lines waiting at the bench',
+    count: Number(row?.line_count ?? 0),
+    detail: `From ${orders} released order${orders === 1 ? '' : 's'}`,
+    href: '/bench',
+  };
 }

@@ -13,7 +13,13 @@ export const STOCK_SOURCES: WaitingSource[] = [
   async ({ id, role }) => {
     if (role !== 'clerk') return null;
     const count = await BinCount.count({ where: { status: 'pending' }, include: [{ association: 'event', attributes: [], where: { operatorId: id } }] });
-    return { key: 'variances-raised', title: 'Your variances awaiting approval', count, detail: 'Counts of yours beyond the site limits', href: '/bins/variances' };
+    return {
+      key: 'variances-raised',
+      title: 'Your variances awaiting approval',
+      count,
+      detail: 'Counts of yours beyond the site limits',
+      href: '/bins/variances',
+    };
   },
   async ({ role }) => {
     if (!can(role, 'variances.approve')) return null;

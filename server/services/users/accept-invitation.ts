@@ -9,7 +9,9 @@ import type { AcceptInvitationInput } from '@/lib/contracts/session';
 import { hashToken } from './issue-password-token';
 
 const expired = () =>
-  new AppError('rule_violated', 'This link has expired or was already used; ask an administrator for a new one', { fields: { token: 'expired or already used' } });
+  new AppError('rule_violated', 'This link has expired or was already used; ask an administrator for a new one', {
+    fields: { token: 'expired or already used' },
+  });
 
 // Sets the password from a one-time link. A token that is not live is refused before the password is
 // hashed, so guessing tokens costs the server an index lookup, not a bcrypt round. The token row is

@@ -28,7 +28,10 @@ export async function createAdmin(input: { email: string; name: string }): Promi
   return getDb().transaction(async (transaction) => {
     const existing = await User.findOne({ where: { email }, transaction, lock: transaction.LOCK.UPDATE });
     if (existing && (existing.role !== 'admin' || !existing.active)) {
-      throw new AppError('conflict', `${email} already has an account (${existing.active ? existing.role : 'switched off'}); an administrator can change it on People`);
+      throw new AppError(
+        'conflict',
+        `${email} already has an account (${existing.active ? existing.role : 'switched off'}); an administrator can change it on People`,
+      );
     }
     const user = existing ?? (await User.create({ email, name, role: 'admin', passwordHash: null }, { transaction }));
     const { token, expiresAt } = await issuePasswordToken(user.id, transaction);

@@ -39,12 +39,24 @@ function repeatabilityOf(level: RepeatabilityLevel, d: number): number {
 }
 
 export function makeRegime(p: {
-  spread: number; knowledge: SpreadKnowledge; n: number; N: number; d: number; apw: number;
-  sr: RepeatabilityLevel; geometry: Geometry;
+  spread: number;
+  knowledge: SpreadKnowledge;
+  n: number;
+  N: number;
+  d: number;
+  apw: number;
+  sr: RepeatabilityLevel;
+  geometry: Geometry;
 }): Regime {
   return {
-    spread: p.spread, knowledge: p.knowledge, sampleQuantity: p.n, quantity: p.N, division: p.d,
-    apw: p.apw, repeatability: repeatabilityOf(p.sr, p.d), geometry: p.geometry,
+    spread: p.spread,
+    knowledge: p.knowledge,
+    sampleQuantity: p.n,
+    quantity: p.N,
+    division: p.d,
+    apw: p.apw,
+    repeatability: repeatabilityOf(p.sr, p.d),
+    geometry: p.geometry,
   };
 }
 
@@ -64,9 +76,12 @@ function samplePairs(): [number, number][] {
 /** Every combination: 5 c × 5 knowledge × 15 (n, N) × 4 d × 4 μ × 2 s_r × 2 geometries = 24 000. */
 export function fullGrid(): Regime[] {
   const grid: Regime[] = [];
-  for (const spread of SPREADS) for (const knowledge of KNOWLEDGE) for (const [n, N] of samplePairs())
-    for (const d of DIVISIONS) for (const apw of APWS) for (const sr of REPEATABILITY_LEVELS)
-      for (const geometry of GEOMETRIES) grid.push(makeRegime({ spread, knowledge, n, N, d, apw, sr, geometry }));
+  for (const spread of SPREADS)
+    for (const knowledge of KNOWLEDGE)
+      for (const [n, N] of samplePairs())
+        for (const d of DIVISIONS)
+          for (const apw of APWS)
+            for (const sr of REPEATABILITY_LEVELS) for (const geometry of GEOMETRIES) grid.push(makeRegime({ spread, knowledge, n, N, d, apw, sr, geometry }));
   return grid;
 }
 
@@ -86,26 +101,33 @@ export function quickGrid(): Regime[] {
   const scales: [number, number][] = [];
   for (const d of DIVISIONS) for (const apw of APWS) scales.push([d, apw]);
   let i = 0;
-  for (const spread of SPREADS) for (const knowledge of KNOWLEDGE) for (const sr of REPEATABILITY_LEVELS)
-    for (const geometry of GEOMETRIES) {
-      const [n, N] = pairs[(i * 7) % pairs.length];
-      const [d, apw] = scales[(i * 5) % scales.length];
-      add(makeRegime({ spread, knowledge, n, N, d, apw, sr, geometry }));
-      i += 1;
-    }
+  for (const spread of SPREADS)
+    for (const knowledge of KNOWLEDGE)
+      for (const sr of REPEATABILITY_LEVELS)
+        for (const geometry of GEOMETRIES) {
+          const [n, N] = pairs[(i * 7) % pairs.length];
+          const [d, apw] = scales[(i * 5) % scales.length];
+          add(makeRegime({ spread, knowledge, n, N, d, apw, sr, geometry }));
+          i += 1;
+        }
   const between: [number, number] = [0.1, 0.1618]; // d ≤ μ < 2d
   const hardScales: [number, number][] = [between, [1, 2.7183], [0.01, 2.7183]];
-  for (const knowledge of ['unknown', 'learned5'] as SpreadKnowledge[]) for (const sr of REPEATABILITY_LEVELS)
-    for (const [d, apw] of hardScales) for (const geometry of GEOMETRIES)
-      add(makeRegime({ spread: 0.05, knowledge, n: 5, N: 1000, d, apw, sr, geometry }));
-  for (const knowledge of KNOWLEDGE) for (const geometry of GEOMETRIES)
-    add(makeRegime({ spread: 0.01, knowledge, n: 5, N: 200, d: between[0], apw: between[1], sr: 'zero', geometry }));
-  for (const geometry of GEOMETRIES) for (const [d, apw] of [[1, 0.1618], [1, 0.0537]] as [number, number][])
-    add(makeRegime({ spread: 0.02, knowledge: 'known', n: 25, N: 200, d, apw, sr: 'halfDivision', geometry }));
-  for (const geometry of GEOMETRIES) for (const spread of [0.001, 0.005]) {
-    add(makeRegime({ spread, knowledge: 'known', n: 25, N: 200, d: 0.01, apw: 2.7183, sr: 'halfDivision', geometry }));
-    add(makeRegime({ spread, knowledge: 'learned25', n: 100, N: 5000, d: 0.001, apw: 47.31, sr: 'halfDivision', geometry }));
-  }
+  for (const knowledge of ['unknown', 'learned5'] as SpreadKnowledge[])
+    for (const sr of REPEATABILITY_LEVELS)
+      for (const [d, apw] of hardScales) for (const geometry of GEOMETRIES) add(makeRegime({ spread: 0.05, knowledge, n: 5, N: 1000, d, apw, sr, geometry }));
+  for (const knowledge of KNOWLEDGE)
+    for (const geometry of GEOMETRIES) add(makeRegime({ spread: 0.01, knowledge, n: 5, N: 200, d: between[0], apw: between[1], sr: 'zero', geometry }));
+  for (const geometry of GEOMETRIES)
+    for (const [d, apw] of [
+      [1, 0.1618],
+      [1, 0.0537],
+    ] as [number, number][])
+      add(makeRegime({ spread: 0.02, knowledge: 'known', n: 25, N: 200, d, apw, sr: 'halfDivision', geometry }));
+  for (const geometry of GEOMETRIES)
+    for (const spread of [0.001, 0.005]) {
+      add(makeRegime({ spread, knowledge: 'known', n: 25, N: 200, d: 0.01, apw: 2.7183, sr: 'halfDivision', geometry }));
+      add(makeRegime({ spread, knowledge: 'learned25', n: 100, N: 5000, d: 0.001, apw: 47.31, sr: 'halfDivision', geometry }));
+    }
   return [...chosen.values()];
 }
 
@@ -175,9 +197,20 @@ export interface Tally {
 
 export function emptyTally(): Tally {
   return {
-    trials: 0, unsendable: 0, errors: 0, firstError: null, firstUnsendable: null, answered: 0,
-    flaggedExact: 0, exactRight: 0, intervalCovers: 0, wholePieceAnswered: 0, wholePieceCovers: 0,
-    probabilityExactSum: 0, probabilityExactAnswered: 0, warnings: {},
+    trials: 0,
+    unsendable: 0,
+    errors: 0,
+    firstError: null,
+    firstUnsendable: null,
+    answered: 0,
+    flaggedExact: 0,
+    exactRight: 0,
+    intervalCovers: 0,
+    wholePieceAnswered: 0,
+    wholePieceCovers: 0,
+    probabilityExactSum: 0,
+    probabilityExactAnswered: 0,
+    warnings: {},
   };
 }
 
@@ -240,14 +273,20 @@ export function mergeTallies(a: Tally, b: Tally): Tally {
   const warnings: Record<string, number> = { ...a.warnings };
   for (const [code, k] of Object.entries(b.warnings)) warnings[code] = (warnings[code] ?? 0) + k;
   return {
-    trials: a.trials + b.trials, unsendable: a.unsendable + b.unsendable, errors: a.errors + b.errors,
-    firstError: a.firstError ?? b.firstError, firstUnsendable: a.firstUnsendable ?? b.firstUnsendable,
-    answered: a.answered + b.answered, flaggedExact: a.flaggedExact + b.flaggedExact,
-    exactRight: a.exactRight + b.exactRight, intervalCovers: a.intervalCovers + b.intervalCovers,
+    trials: a.trials + b.trials,
+    unsendable: a.unsendable + b.unsendable,
+    errors: a.errors + b.errors,
+    firstError: a.firstError ?? b.firstError,
+    firstUnsendable: a.firstUnsendable ?? b.firstUnsendable,
+    answered: a.answered + b.answered,
+    flaggedExact: a.flaggedExact + b.flaggedExact,
+    exactRight: a.exactRight + b.exactRight,
+    intervalCovers: a.intervalCovers + b.intervalCovers,
     wholePieceAnswered: a.wholePieceAnswered + b.wholePieceAnswered,
     wholePieceCovers: a.wholePieceCovers + b.wholePieceCovers,
     probabilityExactSum: a.probabilityExactSum + b.probabilityExactSum,
-    probabilityExactAnswered: a.probabilityExactAnswered + b.probabilityExactAnswered, warnings,
+    probabilityExactAnswered: a.probabilityExactAnswered + b.probabilityExactAnswered,
+    warnings,
   };
 }
 
@@ -375,7 +414,8 @@ export function judgeRegime(regime: Regime, t: Tally, z: number = ALLOWANCE_Z): 
   const pct = (x: number | null): string => (x == null ? '–' : `${(100 * x).toFixed(2)} %`);
   let exactRightUpper: number | null = null;
   if (t.flaggedExact > 0) {
-    exactRightUpper = z === ALLOWANCE_Z ? clopperPearsonUpper(t.exactRight, t.flaggedExact, ALPHA_AT_Z3) : wilsonInterval(t.exactRight, t.flaggedExact, z).upper;
+    exactRightUpper =
+      z === ALLOWANCE_Z ? clopperPearsonUpper(t.exactRight, t.flaggedExact, ALPHA_AT_Z3) : wilsonInterval(t.exactRight, t.flaggedExact, z).upper;
     if (exactRightUpper < LIMITS.exactRight) {
       failures.push(`exact-right ${t.exactRight}/${t.flaggedExact} = ${pct(rates.exactRightRate)} (upper ${pct(exactRightUpper)} < 99 %)`);
     }

@@ -35,7 +35,14 @@ function correlation(xs: number[], ys: number[]): number {
 }
 
 const base: Regime = makeRegime({
-  spread: 0.02, knowledge: 'known', n: 10, N: 200, d: 0.01, apw: 2.7183, sr: 'halfDivision', geometry: 'onPan',
+  spread: 0.02,
+  knowledge: 'known',
+  n: 10,
+  N: 200,
+  d: 0.01,
+  apw: 2.7183,
+  sr: 'halfDivision',
+  geometry: 'onPan',
 });
 
 describe('random numbers', () => {
@@ -68,7 +75,7 @@ describe('random numbers', () => {
     expect(Math.abs(mean)).toBeLessThan(5 / Math.sqrt(zs.length));
     expect(Math.abs(sd - 1)).toBeLessThan(0.01);
     const tail = zs.filter((z) => Math.abs(z) > 1.959964).length / zs.length;
-    expect(Math.abs(tail - 0.05)).toBeLessThan(5 * Math.sqrt(0.05 * 0.95 / zs.length));
+    expect(Math.abs(tail - 0.05)).toBeLessThan(5 * Math.sqrt((0.05 * 0.95) / zs.length));
   });
 
   it('is deterministic for a seed, and different seeds differ', () => {
@@ -141,7 +148,8 @@ describe('piece weights', () => {
 
   it('sum to m·μ with sd √m·c·μ, drawn as one normal or piece by piece', () => {
     const rng = new Rng(7);
-    for (const c of [0.05, 0.2]) { // 0.2 takes the piece-by-piece path
+    for (const c of [0.05, 0.2]) {
+      // 0.2 takes the piece-by-piece path
       const m = 40;
       const totals = Array.from({ length: 20_000 }, () => drawPiecesTotal(rng, m, 0.3183, c));
       const { mean, sd } = meanSd(totals);

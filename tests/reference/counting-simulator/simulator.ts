@@ -187,7 +187,10 @@ export const ZERO_OFFSET_DIVISIONS = 50;
 export class WeighingEpisode {
   readonly zeroOffset: number;
 
-  constructor(private readonly rng: Rng, private readonly scale: ScaleModel) {
+  constructor(
+    private readonly rng: Rng,
+    private readonly scale: ScaleModel,
+  ) {
     this.zeroOffset = rng.uniform() * ZERO_OFFSET_DIVISIONS * scale.division;
   }
 

@@ -12,7 +12,10 @@ import { FormField, FormMessage } from '../../../_components/form-field';
 const schema = yup.object({
   name: yup.string().trim().max(120, 'At most 120 characters').required('Name is required'),
   email: yup.string().trim().email('Enter a valid e-mail address').required('E-mail is required'),
-  role: yup.mixed<Role>().oneOf([...ROLES], 'Pick a role').required('Pick a role'),
+  role: yup
+    .mixed<Role>()
+    .oneOf([...ROLES], 'Pick a role')
+    .required('Pick a role'),
 });
 
 export function InviteForm({ onInvited }: { onInvited: (user: UserDto, mail: string) => void }) {
@@ -38,10 +41,14 @@ export function InviteForm({ onInvited }: { onInvited: (user: UserDto, mail: str
           <FormField name="name" label="Name" autoComplete="off" />
           <FormField name="email" type="email" label="E-mail" autoComplete="off" />
           <div>
-            <label htmlFor="f-role" className="field-label">Role</label>
+            <label htmlFor="f-role" className="field-label">
+              Role
+            </label>
             <Field as="select" id="f-role" name="role" className="field">
               {ROLES.map((r) => (
-                <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+                <option key={r} value={r}>
+                  {ROLE_LABELS[r]}
+                </option>
               ))}
             </Field>
           </div>

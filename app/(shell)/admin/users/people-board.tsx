@@ -45,13 +45,21 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
     const res = await apiFetch<{ mail: string; kind: 'invitation' | 'password_reset' }>(`/api/v1/users/${user.id}/invitation`, { method: 'POST' });
     if (!res.ok) return setNotice(res.message);
     const what = res.data.kind === 'password_reset' ? 'A password reset link' : 'A new invitation';
-    setNotice(res.data.mail === 'sent' ? `${what} went to ${user.email}; only they can open it.` : `${what} for ${user.email} could not be sent (${res.data.mail}); see the outbox.`);
+    setNotice(
+      res.data.mail === 'sent'
+        ? `${what} went to ${user.email}; only they can open it.`
+        : `${what} for ${user.email} could not be sent (${res.data.mail}); see the outbox.`,
+    );
   }
 
   // Making someone an administrator gives them every permission: asked first. Other roles change at once.
   function changeRole(user: UserDto, role: Role) {
     if (role !== 'admin') return void patch(user, { role });
-    setPending({ question: `Make ${user.name} an administrator? They will manage people, scales and site settings, and can act as any role.`, yes: 'Yes, make administrator', onConfirm: () => patch(user, { role }) });
+    setPending({
+      question: `Make ${user.name} an administrator? They will manage people, scales and site settings, and can act as any role.`,
+      yes: 'Yes, make administrator',
+      onConfirm: () => patch(user, { role }),
+    });
   }
 
   const columns: ColDef<UserDto>[] = [
@@ -63,9 +71,16 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
       minWidth: 200,
       cellRenderer: (p: ICellRendererParams<UserDto>) =>
         p.data && p.data.id !== meId ? (
-          <select aria-label={`Role of ${p.data.name}`} className="field py-0" value={p.data.role} onChange={(e) => changeRole(p.data!, e.target.value as Role)}>
+          <select
+            aria-label={`Role of ${p.data.name}`}
+            className="field py-0"
+            value={p.data.role}
+            onChange={(e) => changeRole(p.data!, e.target.value as Role)}
+          >
             {ROLES.map((r) => (
-              <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+              <option key={r} value={r}>
+                {ROLE_LABELS[r]}
+              </option>
             ))}
           </select>
         ) : (
@@ -76,7 +91,8 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
       field: 'status',
       headerName: 'Status',
       maxWidth: 140,
-      cellRenderer: (p: ICellRendererParams<UserDto>) => (p.data ? <span className={`rounded px-2 py-1 text-sm ${STATUS_STYLE[p.data.status]}`}>{p.data.status}</span> : null),
+      cellRenderer: (p: ICellRendererParams<UserDto>) =>
+        p.data ? <span className={`rounded px-2 py-1 text-sm ${STATUS_STYLE[p.data.status]}`}>{p.data.status}</span> : null,
     },
     {
       headerName: 'Actions',
@@ -89,18 +105,58 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
         return (
           <span className="flex gap-2 items-center h-full">
             {u.active ? (
-              <button type="button" className="text-fault hover:underline" onClick={() => setPending({ question: `Switch off ${u.name}? They can no longer sign in until someone switches them on again; what they recorded stays.`, yes: 'Yes, switch off', onConfirm: () => patch(u, { active: false }) })}>Switch off</button>
+              <button
+                type="button"
+                className="text-fault hover:underline"
+                onClick={() =>
+                  setPending({
+                    question: `Switch off ${u.name}? They can no longer sign in until someone switches them on again; what they recorded stays.`,
+                    yes: 'Yes, switch off',
+                    onConfirm: () => patch(u, { active: false }),
+                  })
+                }
+              >
+                Switch off
+              </button>
             ) : (
-              <button type="button" className="text-forge hover:underline" onClick={() => patch(u, { active: true })}>Switch on</button>
+              <button type="button" className="text-forge hover:underline" onClick={() => patch(u, { active: true })}>
+                Switch on
+              </button>
             )}
             {u.status === 'active' ? (
-              <button type="button" className="text-forge hover:underline" onClick={() => setPending({ question: `Sign ${u.name} out on every device? Whatever they are doing unsaved is lost; they can sign in again.`, yes: 'Yes, sign out everywhere', onConfirm: () => signOutEverywhere(u) })}>Sign out everywhere</button>
+              <button
+                type="button"
+                className="text-forge hover:underline"
+                onClick={() =>
+                  setPending({
+                    question: `Sign ${u.name} out on every device? Whatever they are doing unsaved is lost; they can sign in again.`,
+                    yes: 'Yes, sign out everywhere',
+                    onConfirm: () => signOutEverywhere(u),
+                  })
+                }
+              >
+                Sign out everywhere
+              </button>
             ) : null}
             {u.status === 'invited' ? (
-              <button type="button" className="text-forge hover:underline" onClick={() => sendLink(u)}>Send link again</button>
+              <button type="button" className="text-forge hover:underline" onClick={() => sendLink(u)}>
+                Send link again
+              </button>
             ) : null}
             {u.status === 'active' ? (
-              <button type="button" className="text-forge hover:underline" onClick={() => setPending({ question: `Mail ${u.name} a link to choose a new password? Their current password keeps working until they use it.`, yes: 'Yes, send the link', onConfirm: () => sendLink(u) })}>Reset password</button>
+              <button
+                type="button"
+                className="text-forge hover:underline"
+                onClick={() =>
+                  setPending({
+                    question: `Mail ${u.name} a link to choose a new password? Their current password keeps working until they use it.`,
+                    yes: 'Yes, send the link',
+                    onConfirm: () => sendLink(u),
+                  })
+                }
+              >
+                Reset password
+              </button>
             ) : null}
           </span>
         );
@@ -117,9 +173,13 @@ export function PeopleBoard({ initialUsers, meId }: { initialUsers: UserDto[]; m
         }}
       />
       <ConfirmBar pending={pending} onDone={() => setPending(null)} />
-      <p role="status" aria-live="polite" className="min-h-6 text-sm text-ink-soft" data-testid="people-notice">{notice}</p>
+      <p role="status" aria-live="polite" className="min-h-6 text-sm text-ink-soft" data-testid="people-notice">
+        {notice}
+      </p>
       <div className="flex items-center gap-3">
-        <label htmlFor="people-filter" className="text-sm text-ink-soft">Find</label>
+        <label htmlFor="people-filter" className="text-sm text-ink-soft">
+          Find
+        </label>
         <input id="people-filter" className="field max-w-xs" value={filter} onChange={(e) => setFilter(e.target.value)} placeholder="Name, e-mail or role" />
       </div>
       <DataGrid label="People" rows={users} columns={columns} rowId={(u) => String(u.id)} quickFilter={filter} />

@@ -59,10 +59,45 @@ function StopCount({ work, onStop }: { work: BenchWork; onStop(o: { keep: boolea
 // The bench's layout; what it shows and does comes from useBench.
 export function BenchStation({ scales, containers, stabilityWindowMs, defaultPieceSpread, initialBin, blindCycleCounts }: Props) {
   const {
-    work, part, scale, scaleId, moveToScale, scaleChoice, setSource, typed, setTyped, kind,
-    frame, frameRef, trace, notice, codes, spreadNote, verdict, showing,
-    actions, chooseWork, chooseContainer, containerChoice, chosenContainer, sampleQty, setSampleQty, growPlan,
-    busy, captureBlocked, result, stop, keptForWork, startFromKeptSample, queue, flushQueue, dropQueued, waiting, cancelWaiting, scales: scalesNow, advice,
+    work,
+    part,
+    scale,
+    scaleId,
+    moveToScale,
+    scaleChoice,
+    setSource,
+    typed,
+    setTyped,
+    kind,
+    frame,
+    frameRef,
+    trace,
+    notice,
+    codes,
+    spreadNote,
+    verdict,
+    showing,
+    actions,
+    chooseWork,
+    chooseContainer,
+    containerChoice,
+    chosenContainer,
+    sampleQty,
+    setSampleQty,
+    growPlan,
+    busy,
+    captureBlocked,
+    result,
+    stop,
+    keptForWork,
+    startFromKeptSample,
+    queue,
+    flushQueue,
+    dropQueued,
+    waiting,
+    cancelWaiting,
+    scales: scalesNow,
+    advice,
   } = useBench({ scales, containers, stabilityWindowMs, defaultPieceSpread });
 
   return (
@@ -72,8 +107,14 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
         {work ? (
           <p className="text-lg">
             <span className="font-bold">{work.label}</span>
-            <span className="ml-2 rounded bg-paper-deep px-2 py-0.5 text-sm">{{ bin: 'bin count', part: 'part count', kit_line: 'kit line' }[work.purpose]}</span>
-            {work.targetQuantity != null ? <span className="ml-2 text-ink-soft">target {work.targetQuantity} (−{work.tolerance?.below ?? 0}/+{work.tolerance?.above ?? 0})</span> : null}
+            <span className="ml-2 rounded bg-paper-deep px-2 py-0.5 text-sm">
+              {{ bin: 'bin count', part: 'part count', kit_line: 'kit line' }[work.purpose]}
+            </span>
+            {work.targetQuantity != null ? (
+              <span className="ml-2 text-ink-soft">
+                target {work.targetQuantity} (−{work.tolerance?.below ?? 0}/+{work.tolerance?.above ?? 0})
+              </span>
+            ) : null}
           </p>
         ) : null}
       </header>
@@ -83,13 +124,25 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
         <div className="contents lg:block lg:min-w-0 lg:space-y-4">
           <CountReadout frame={frame} division={scale?.division ?? 1} showing={showing} targetQuantity={work?.targetQuantity ?? null} verdict={verdict} />
           {waiting ? (
-            <p role="status" data-testid="waiting" className="flex flex-wrap items-center justify-between gap-2 rounded-md bg-forge-light px-4 py-3 text-lg text-forge-dark">
+            <p
+              role="status"
+              data-testid="waiting"
+              className="flex flex-wrap items-center justify-between gap-2 rounded-md bg-forge-light px-4 py-3 text-lg text-forge-dark"
+            >
               <span>Waiting for a steady reading to {STEADY_ACTION_WORDS[waiting]}… keep hands off the pan.</span>
-              <button type="button" className="btn-quiet" onClick={cancelWaiting}>Cancel</button>
+              <button type="button" className="btn-quiet" onClick={cancelWaiting}>
+                Cancel
+              </button>
             </p>
           ) : null}
           {notice && !notice.code ? (
-            <p role="status" data-testid="notice" className={`rounded-md px-4 py-3 text-lg ${notice.tone === 'fault' ? 'bg-fault-light text-fault' : notice.tone === 'ok' ? 'bg-ok-light text-ok' : 'bg-forge-light text-forge-dark'}`}>{notice.text}</p>
+            <p
+              role="status"
+              data-testid="notice"
+              className={`rounded-md px-4 py-3 text-lg ${notice.tone === 'fault' ? 'bg-fault-light text-fault' : notice.tone === 'ok' ? 'bg-ok-light text-ok' : 'bg-forge-light text-forge-dark'}`}
+            >
+              {notice.text}
+            </p>
           ) : null}
           <WarningList codes={codes} />
           {advice ? <ScaleAdviceNote advice={advice} target={work?.targetQuantity ?? null} /> : null}
@@ -122,10 +175,22 @@ export function BenchStation({ scales, containers, stabilityWindowMs, defaultPie
         <aside className="min-w-0 space-y-4">
           <QueuePanel items={queue} onSend={() => void flushQueue()} onDrop={dropQueued} />
           {!work ? <WorkChooser onChoose={chooseWork} disabled={!scale} initialBin={initialBin} blindCycleCounts={blindCycleCounts} /> : null}
-          <ScalePicker scales={scalesNow} scaleId={scaleId} choice={scaleChoice} sampleScaleId={work?.bulkScaleId != null ? work.scaleId : null} onPick={moveToScale} />
+          <ScalePicker
+            scales={scalesNow}
+            scaleId={scaleId}
+            choice={scaleChoice}
+            sampleScaleId={work?.bulkScaleId != null ? work.scaleId : null}
+            onPick={moveToScale}
+          />
           {scale ? (
             <label className="flex min-h-11 items-center gap-3">
-              <input type="checkbox" className="h-5 w-5" checked={typed || kind === 'keyed'} disabled={kind === 'keyed'} onChange={(e) => setTyped(e.target.checked)} />
+              <input
+                type="checkbox"
+                className="h-5 w-5"
+                checked={typed || kind === 'keyed'}
+                disabled={kind === 'keyed'}
+                onChange={(e) => setTyped(e.target.checked)}
+              />
               Type weights instead of reading the scale
             </label>
           ) : null}

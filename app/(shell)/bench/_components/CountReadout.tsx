@@ -55,13 +55,24 @@ export function CountReadout({ frame, division, showing, targetQuantity, verdict
             <span>Target {targetQuantity} pcs</span>
             <span className="num">{Math.round((est.count / targetQuantity) * 100)} %</span>
           </div>
-          <div className="mt-1 h-4 rounded-full bg-ink-soft" role="progressbar" aria-valuemin={0} aria-valuemax={targetQuantity} aria-valuenow={est.count} aria-label="Progress to target">
+          <div
+            className="mt-1 h-4 rounded-full bg-ink-soft"
+            role="progressbar"
+            aria-valuemin={0}
+            aria-valuemax={targetQuantity}
+            aria-valuenow={est.count}
+            aria-label="Progress to target"
+          >
             <div className="h-4 rounded-full bg-brass" style={{ width: `${Math.min(100, (est.count / targetQuantity) * 100)}%` }} />
           </div>
           {verdict === 'out' && est.count < targetQuantity ? (
-            <p data-testid="verdict" data-verdict="short" className="mt-3 inline-block rounded-md bg-ink-soft px-3 py-1.5 font-bold">{targetQuantity - est.count} to go</p>
+            <p data-testid="verdict" data-verdict="short" className="mt-3 inline-block rounded-md bg-ink-soft px-3 py-1.5 font-bold">
+              {targetQuantity - est.count} to go
+            </p>
           ) : verdict ? (
-            <p data-testid="verdict" data-verdict={verdict} className={`mt-3 inline-block rounded-md px-3 py-1.5 font-bold ${VERDICT_TEXT[verdict].cls}`}>{VERDICT_TEXT[verdict].text}</p>
+            <p data-testid="verdict" data-verdict={verdict} className={`mt-3 inline-block rounded-md px-3 py-1.5 font-bold ${VERDICT_TEXT[verdict].cls}`}>
+              {VERDICT_TEXT[verdict].text}
+            </p>
           ) : null}
         </div>
       ) : null}

@@ -34,15 +34,29 @@ export function KeyedEntry({ onSource }: { onSource(source: ReadingSource | null
 
   return (
     <section aria-labelledby="keyed-title" className="card space-y-2">
-      <h2 id="keyed-title" className="font-bold">Type the weight the scale shows</h2>
-      <form className="flex items-end gap-2" onSubmit={(e) => { e.preventDefault(); enter(); }}>
+      <h2 id="keyed-title" className="font-bold">
+        Type the weight the scale shows
+      </h2>
+      <form
+        className="flex items-end gap-2"
+        onSubmit={(e) => {
+          e.preventDefault();
+          enter();
+        }}
+      >
         <div className="flex-1">
-          <label htmlFor="keyed-weight" className="field-label">Gross weight, g</label>
+          <label htmlFor="keyed-weight" className="field-label">
+            Gross weight, g
+          </label>
           <input id="keyed-weight" className="field num text-lg" inputMode="decimal" value={text} onChange={(e) => setText(e.target.value)} />
         </div>
-        <button type="submit" className="btn-primary min-h-12">Enter weight</button>
+        <button type="submit" className="btn-primary min-h-12">
+          Enter weight
+        </button>
       </form>
-      <p className="field-error" aria-live="polite">{error}</p>
+      <p className="field-error" aria-live="polite">
+        {error}
+      </p>
     </section>
   );
 }

@@ -118,13 +118,23 @@ export function LiveTrace({ trace, frameRef, division, windowMs }: Props) {
   return (
     <section aria-labelledby="trace-title" className="card space-y-2">
       <div className="flex items-center justify-between">
-        <h2 id="trace-title" className="font-bold">Weight over time</h2>
+        <h2 id="trace-title" className="font-bold">
+          Weight over time
+        </h2>
         <span className="text-xs text-ink-faint">green band: settled (drawn ±1 d wide)</span>
       </div>
       <div ref={box} data-testid="trace" />
       <label className="flex items-center gap-3 text-sm">
         <span className="shrink-0">Look back</span>
-        <input type="range" min={0} max={Math.max(0, sessionS)} value={Math.min(lookBack, sessionS)} onChange={(e) => setLookBack(Number(e.target.value))} className="min-h-11 flex-1" aria-label="Seconds to look back" />
+        <input
+          type="range"
+          min={0}
+          max={Math.max(0, sessionS)}
+          value={Math.min(lookBack, sessionS)}
+          onChange={(e) => setLookBack(Number(e.target.value))}
+          className="min-h-11 flex-1"
+          aria-label="Seconds to look back"
+        />
         <span className="num w-16 text-right">{lookBack === 0 ? 'live' : `−${lookBack} s`}</span>
       </label>
     </section>

@@ -38,7 +38,13 @@ function readPan(scaleId: number): SavedPan | null {
 const PRACTICE_PIECE_SPREAD = 0.02;
 
 function freshPan(part: Props['part'], seed: number): SavedPan {
-  return { seed, partId: part?.id ?? null, pieceWeight: part?.averagePieceWeight ?? DEMO_PIECE_WEIGHT_G, spread: part?.pieceSpread ?? PRACTICE_PIECE_SPREAD, actions: [] };
+  return {
+    seed,
+    partId: part?.id ?? null,
+    pieceWeight: part?.averagePieceWeight ?? DEMO_PIECE_WEIGHT_G,
+    spread: part?.pieceSpread ?? PRACTICE_PIECE_SPREAD,
+    actions: [],
+  };
 }
 
 // The simulator's practice pan: a scale in the browser with the chosen scale's capacity, division
@@ -57,7 +63,7 @@ export function PracticePanel({ scale, part, containerWeight, onSource }: Props)
     const saved = readPan(scaleId);
     const samePart = saved && (part === null || saved.partId === part.id);
     const seedOk = saved && (urlSeed === null || saved.seed === urlSeed);
-    setPan(saved && samePart && seedOk ? saved : freshPan(part, urlSeed ?? (Date.now() >>> 0)));
+    setPan(saved && samePart && seedOk ? saved : freshPan(part, urlSeed ?? Date.now() >>> 0));
   });
   const partId = part?.id;
   useEffect(() => placePan(scale.id), [scale.id, partId]);
@@ -70,7 +76,14 @@ export function PracticePanel({ scale, part, containerWeight, onSource }: Props)
   const startSimulator = useEffectEvent(() => {
     if (!pan) return;
     const sim = buildSimulatedScale(
-      { capacity: scale.capacity, division: scale.division, repeatability: scale.repeatability ?? 0, settleMs: conn.settleMs, driftPerMinute: conn.driftPerMinute, rateHz: conn.rateHz },
+      {
+        capacity: scale.capacity,
+        division: scale.division,
+        repeatability: scale.repeatability ?? 0,
+        settleMs: conn.settleMs,
+        driftPerMinute: conn.driftPerMinute,
+        rateHz: conn.rateHz,
+      },
       pan,
     );
     simRef.current = sim;
@@ -96,28 +109,50 @@ export function PracticePanel({ scale, part, containerWeight, onSource }: Props)
   return (
     <section aria-labelledby="practice-title" className="card space-y-3 border-2 border-dashed border-brass">
       <div className="flex items-baseline justify-between gap-2">
-        <h2 id="practice-title" className="font-bold">Practice pan <span className="rounded bg-brass-light px-2 py-0.5 text-sm text-brass-dark">simulator — not a real scale</span></h2>
+        <h2 id="practice-title" className="font-bold">
+          Practice pan <span className="rounded bg-brass-light px-2 py-0.5 text-sm text-brass-dark">simulator — not a real scale</span>
+        </h2>
       </div>
       <p className="text-sm text-ink-soft" data-testid="pan-contents">
-        On the pan: <span className="num font-bold">{onPan}</span> pieces{container !== null ? <> and a container of <span className="num">{container} g</span></> : null}.
-        One piece weighs about <span className="num">{pan?.pieceWeight ?? '–'} g</span>.
+        On the pan: <span className="num font-bold">{onPan}</span> pieces
+        {container !== null ? (
+          <>
+            {' '}
+            and a container of <span className="num">{container} g</span>
+          </>
+        ) : null}
+        . One piece weighs about <span className="num">{pan?.pieceWeight ?? '–'} g</span>.
       </p>
       <div className="flex flex-wrap items-end gap-2">
         <div className="w-24">
-          <label htmlFor="pan-n" className="field-label">Pieces</label>
+          <label htmlFor="pan-n" className="field-label">
+            Pieces
+          </label>
           <input id="pan-n" className="field num" inputMode="numeric" value={n} onChange={(e) => setN(e.target.value)} />
         </div>
-        <button type="button" className="btn-quiet min-h-12" onClick={() => act({ kind: 'add', n: count })}>Put on {count}</button>
-        <button type="button" className="btn-quiet min-h-12" onClick={() => act({ kind: 'remove', n: count })}>Take off {count}</button>
-        <button type="button" className="btn-quiet min-h-12" onClick={() => act({ kind: 'add', n: 1 })}>Put on 1</button>
+        <button type="button" className="btn-quiet min-h-12" onClick={() => act({ kind: 'add', n: count })}>
+          Put on {count}
+        </button>
+        <button type="button" className="btn-quiet min-h-12" onClick={() => act({ kind: 'remove', n: count })}>
+          Take off {count}
+        </button>
+        <button type="button" className="btn-quiet min-h-12" onClick={() => act({ kind: 'add', n: 1 })}>
+          Put on 1
+        </button>
       </div>
       <div className="flex flex-wrap gap-2">
         {container === null ? (
-          <button type="button" className="btn-quiet min-h-12" onClick={() => act({ kind: 'container', weight: containerWeight })}>Place container ({containerWeight} g)</button>
+          <button type="button" className="btn-quiet min-h-12" onClick={() => act({ kind: 'container', weight: containerWeight })}>
+            Place container ({containerWeight} g)
+          </button>
         ) : (
-          <button type="button" className="btn-quiet min-h-12" onClick={() => act({ kind: 'container-off' })}>Lift container off</button>
+          <button type="button" className="btn-quiet min-h-12" onClick={() => act({ kind: 'container-off' })}>
+            Lift container off
+          </button>
         )}
-        <button type="button" className="btn-quiet min-h-12" onClick={() => act({ kind: 'clear' })}>Empty the pan</button>
+        <button type="button" className="btn-quiet min-h-12" onClick={() => act({ kind: 'clear' })}>
+          Empty the pan
+        </button>
       </div>
       <form
         className="flex flex-wrap items-end gap-2"
@@ -131,10 +166,21 @@ export function PracticePanel({ scale, part, containerWeight, onSource }: Props)
         }}
       >
         <div className="w-36">
-          <label htmlFor="pan-weight" className="field-label">Practice piece weight, g</label>
-          <input id="pan-weight" className="field num" inputMode="decimal" value={weightText} placeholder={String(pan?.pieceWeight ?? '')} onChange={(e) => setWeightText(e.target.value)} />
+          <label htmlFor="pan-weight" className="field-label">
+            Practice piece weight, g
+          </label>
+          <input
+            id="pan-weight"
+            className="field num"
+            inputMode="decimal"
+            value={weightText}
+            placeholder={String(pan?.pieceWeight ?? '')}
+            onChange={(e) => setWeightText(e.target.value)}
+          />
         </div>
-        <button type="submit" className="btn-quiet min-h-12">Use (empties the pan)</button>
+        <button type="submit" className="btn-quiet min-h-12">
+          Use (empties the pan)
+        </button>
       </form>
       <WarningRecipes />
     </section>

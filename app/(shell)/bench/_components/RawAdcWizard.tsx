@@ -89,27 +89,41 @@ export function RawAdcWizard({ scale, onSource }: { scale: ScaleDto; onSource(so
 
   return (
     <section aria-labelledby="adc-title" className="card space-y-3">
-      <h2 id="adc-title" className="font-bold">Load-cell front end</h2>
-      <button type="button" className="btn-primary min-h-12" onClick={() => void connect()}>{connected ? 'Connected — choose again' : 'Choose port and connect'}</button>
+      <h2 id="adc-title" className="font-bold">
+        Load-cell front end
+      </h2>
+      <button type="button" className="btn-primary min-h-12" onClick={() => void connect()}>
+        {connected ? 'Connected — choose again' : 'Choose port and connect'}
+      </button>
       <ol className="list-decimal space-y-3 pl-5">
         <li>
-          Empty the pan, wait, then <button type="button" className="btn-quiet min-h-11" onClick={takeZero} disabled={!connected}>Capture zero</button>
+          Empty the pan, wait, then{' '}
+          <button type="button" className="btn-quiet min-h-11" onClick={takeZero} disabled={!connected}>
+            Capture zero
+          </button>
           {zero !== null ? <span className="num ml-2 text-sm">zero {zero.toFixed(1)} counts</span> : null}
         </li>
         <li className="space-y-2">
-          <label htmlFor="adc-ref" className="field-label">Reference mass on the pan, g</label>
+          <label htmlFor="adc-ref" className="field-label">
+            Reference mass on the pan, g
+          </label>
           <input id="adc-ref" className="field num" inputMode="decimal" value={reference} onChange={(e) => setReference(e.target.value)} />
-          <button type="button" className="btn-quiet min-h-11" onClick={takeSpan} disabled={!connected || zero === null}>Capture reference</button>
+          <button type="button" className="btn-quiet min-h-11" onClick={takeSpan} disabled={!connected || zero === null}>
+            Capture reference
+          </button>
         </li>
       </ol>
       {calibration ? (
         <p className="num text-sm" data-testid="adc-calibration">
-          Saved on this workstation: zero {calibration.zero.toFixed(1)}, slope {calibration.slope.toFixed(3)} counts/g · effective division {effectiveDivisionOf(calibration, setup).toPrecision(2)} g
+          Saved on this workstation: zero {calibration.zero.toFixed(1)}, slope {calibration.slope.toFixed(3)} counts/g · effective division{' '}
+          {effectiveDivisionOf(calibration, setup).toPrecision(2)} g
         </p>
       ) : (
         <p className="text-sm text-ink-soft">Not calibrated on this workstation yet.</p>
       )}
-      <p className="field-error" aria-live="polite">{error}</p>
+      <p className="field-error" aria-live="polite">
+        {error}
+      </p>
     </section>
   );
 }

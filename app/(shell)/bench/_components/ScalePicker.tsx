@@ -25,12 +25,17 @@ export function ScalePicker({ scales, scaleId, choice, sampleScaleId, onPick }: 
   const sampleScale = scales.find((s) => s.id === sampleScaleId) ?? null;
   return (
     <section aria-labelledby="scale-title" className="card space-y-3">
-      <h2 id="scale-title" className="font-bold">Scale</h2>
-      <label htmlFor="scale-pick" className="sr-only">Scale</label>
+      <h2 id="scale-title" className="font-bold">
+        Scale
+      </h2>
+      <label htmlFor="scale-pick" className="sr-only">
+        Scale
+      </label>
       <select id="scale-pick" className="field" value={scaleId ?? ''} disabled={choice === 'fixed'} onChange={(e) => onPick(Number(e.target.value))}>
         {scales.map((s) => (
           <option key={s.id} value={s.id}>
-            {s.name} — Max {s.capacity} g, d {s.division} g, class {s.accuracyClass} ({KIND_TEXT[s.connection.kind]}{s.status === 'locked' ? ', locked' : s.status === 'due' ? ', due' : ''})
+            {s.name} — Max {s.capacity} g, d {s.division} g, class {s.accuracyClass} ({KIND_TEXT[s.connection.kind]}
+            {s.status === 'locked' ? ', locked' : s.status === 'due' ? ', due' : ''})
           </option>
         ))}
       </select>
@@ -42,9 +47,19 @@ export function ScalePicker({ scales, scaleId, choice, sampleScaleId, onPick }: 
       ) : (
         <p className="text-ink-soft">No scales are set up yet. Ask an administrator to add one.</p>
       )}
-      {sampleScale ? <p className="text-sm" data-testid="sample-scale">Sample weighed on {sampleScale.name}; the count is read here.</p> : null}
-      {choice === 'move' ? <p className="text-sm text-ink-soft">Choosing another scale moves the count there and keeps the sample (for a bulk too heavy or too coarse for this one).</p> : null}
-      {choice === 'fixed' ? <p className="text-sm text-ink-soft">The scale can change once the sample is weighed; before that, stop the count to change it.</p> : null}
+      {sampleScale ? (
+        <p className="text-sm" data-testid="sample-scale">
+          Sample weighed on {sampleScale.name}; the count is read here.
+        </p>
+      ) : null}
+      {choice === 'move' ? (
+        <p className="text-sm text-ink-soft">
+          Choosing another scale moves the count there and keeps the sample (for a bulk too heavy or too coarse for this one).
+        </p>
+      ) : null}
+      {choice === 'fixed' ? (
+        <p className="text-sm text-ink-soft">The scale can change once the sample is weighed; before that, stop the count to change it.</p>
+      ) : null}
     </section>
   );
 }

@@ -63,7 +63,10 @@ export function SerialConnect({ scale, onSource }: { scale: ScaleDto; onSource(s
         port,
         settings: { baudRate: settings.baudRate, dataBits: settings.dataBits, parity: settings.parity, stopBits: settings.stopBits },
         profile: findLineProfile(settings.lineFormat) ?? LINE_PROFILES[0],
-        mode: settings.mode === 'polled' ? { kind: 'polled', request: unescapeRequest(settings.pollRequest), intervalMs: settings.pollIntervalMs } : { kind: 'continuous' },
+        mode:
+          settings.mode === 'polled'
+            ? { kind: 'polled', request: unescapeRequest(settings.pollRequest), intervalMs: settings.pollIntervalMs }
+            : { kind: 'continuous' },
         onError: () => setError('The serial connection stopped. Check the cable and connect again.'),
       });
       await source.start();
@@ -77,31 +80,50 @@ export function SerialConnect({ scale, onSource }: { scale: ScaleDto; onSource(s
 
   return (
     <section aria-labelledby="serial-title" className="card space-y-3">
-      <h2 id="serial-title" className="font-bold">Serial connection</h2>
+      <h2 id="serial-title" className="font-bold">
+        Serial connection
+      </h2>
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
         <div>
-          <label htmlFor="serial-baud" className="field-label">Baud rate</label>
+          <label htmlFor="serial-baud" className="field-label">
+            Baud rate
+          </label>
           <select id="serial-baud" className="field num" value={settings.baudRate} onChange={(e) => update('baudRate', Number(e.target.value))}>
-            {BAUD_RATES.map((b) => <option key={b} value={b}>{b}</option>)}
+            {BAUD_RATES.map((b) => (
+              <option key={b} value={b}>
+                {b}
+              </option>
+            ))}
           </select>
         </div>
         <div>
-          <label htmlFor="serial-bits" className="field-label">Data bits</label>
+          <label htmlFor="serial-bits" className="field-label">
+            Data bits
+          </label>
           <select id="serial-bits" className="field num" value={settings.dataBits} onChange={(e) => update('dataBits', Number(e.target.value) as 7 | 8)}>
             <option value={8}>8</option>
             <option value={7}>7</option>
           </select>
         </div>
         <div>
-          <label htmlFor="serial-parity" className="field-label">Parity</label>
-          <select id="serial-parity" className="field" value={settings.parity} onChange={(e) => update('parity', e.target.value as SerialPortSettings['parity'])}>
+          <label htmlFor="serial-parity" className="field-label">
+            Parity
+          </label>
+          <select
+            id="serial-parity"
+            className="field"
+            value={settings.parity}
+            onChange={(e) => update('parity', e.target.value as SerialPortSettings['parity'])}
+          >
             <option value="none">none</option>
             <option value="even">even</option>
             <option value="odd">odd</option>
           </select>
         </div>
         <div>
-          <label htmlFor="serial-stop" className="field-label">Stop bits</label>
+          <label htmlFor="serial-stop" className="field-label">
+            Stop bits
+          </label>
           <select id="serial-stop" className="field num" value={settings.stopBits} onChange={(e) => update('stopBits', Number(e.target.value) as 1 | 2)}>
             <option value={1}>1</option>
             <option value={2}>2</option>
@@ -109,16 +131,27 @@ export function SerialConnect({ scale, onSource }: { scale: ScaleDto; onSource(s
         </div>
       </div>
       <div>
-        <label htmlFor="serial-format" className="field-label">Line format</label>
+        <label htmlFor="serial-format" className="field-label">
+          Line format
+        </label>
         <select id="serial-format" className="field" value={settings.lineFormat} onChange={(e) => update('lineFormat', e.target.value)}>
-          {LINE_PROFILES.map((p) => <option key={p.name} value={p.name}>{p.description}</option>)}
+          {LINE_PROFILES.map((p) => (
+            <option key={p.name} value={p.name}>
+              {p.description}
+            </option>
+          ))}
         </select>
       </div>
-      <button type="button" className="btn-primary min-h-12" onClick={() => void connect()}>Choose port and connect</button>
+      <button type="button" className="btn-primary min-h-12" onClick={() => void connect()}>
+        Choose port and connect
+      </button>
       <p className="text-sm text-ink-soft" data-testid="serial-stats">
-        Lines received <span className="num font-bold">{stats?.lines ?? 0}</span> · not understood <span className="num font-bold">{stats?.malformed ?? 0}</span>
+        Lines received <span className="num font-bold">{stats?.lines ?? 0}</span> · not understood{' '}
+        <span className="num font-bold">{stats?.malformed ?? 0}</span>
       </p>
-      <p className="field-error" aria-live="polite">{error}</p>
+      <p className="field-error" aria-live="polite">
+        {error}
+      </p>
     </section>
   );
 }

@@ -11,7 +11,11 @@ export function WarningList({ codes }: { codes: readonly WarningCode[] }) {
         const { message, remedy } = describeWarning(code);
         const strong = STRONG.has(code);
         return (
-          <li key={code} data-warning={code} className={`rounded-md border-l-8 px-4 py-3 ${strong ? 'border-fault bg-fault-light' : 'border-caution bg-caution-light'}`}>
+          <li
+            key={code}
+            data-warning={code}
+            className={`rounded-md border-l-8 px-4 py-3 ${strong ? 'border-fault bg-fault-light' : 'border-caution bg-caution-light'}`}
+          >
             <p className={`font-bold ${strong ? 'text-lg text-fault' : 'text-caution'}`}>
               <span aria-hidden="true">{strong ? '▲ ' : '● '}</span>
               {message}

@@ -9,9 +9,19 @@ import { partWorkSource } from './part-work-source';
 import { queueWorkSource } from './queue-work-source';
 
 const KINDS: Array<{ purpose: WorkPurpose; title: string; scanLabel: string; none: string }> = [
-  { purpose: 'kit_line', title: 'Kitting queue — lines of released orders', scanLabel: 'Scan or type a part or order number', none: 'The kitting queue is empty.' },
+  {
+    purpose: 'kit_line',
+    title: 'Kitting queue — lines of released orders',
+    scanLabel: 'Scan or type a part or order number',
+    none: 'The kitting queue is empty.',
+  },
   { purpose: 'part', title: 'Part count — sample stays on the pan', scanLabel: 'Scan or type a part number', none: 'No parts match.' },
-  { purpose: 'bin', title: 'Bin count — bin weighed apart', scanLabel: 'Scan a bin label or type a part number', none: 'No bins match (bins due for counting are listed).' },
+  {
+    purpose: 'bin',
+    title: 'Bin count — bin weighed apart',
+    scanLabel: 'Scan a bin label or type a part number',
+    none: 'No bins match (bins due for counting are listed).',
+  },
 ];
 
 interface Props {
@@ -34,7 +44,10 @@ export function WorkChooser({ onChoose, disabled, initialBin, blindCycleCounts }
   const [target, setTarget] = useState('');
   const [below, setBelow] = useState('0');
   const [above, setAbove] = useState('0');
-  const source = useMemo(() => (purpose === 'kit_line' ? queueWorkSource() : purpose === 'bin' ? binWorkSource(blindCycleCounts) : partWorkSource(purpose)), [purpose, blindCycleCounts]);
+  const source = useMemo(
+    () => (purpose === 'kit_line' ? queueWorkSource() : purpose === 'bin' ? binWorkSource(blindCycleCounts) : partWorkSource(purpose)),
+    [purpose, blindCycleCounts],
+  );
   const kind = KINDS.find((k) => k.purpose === purpose)!;
   const scanRef = useRef<HTMLInputElement>(null);
 
@@ -95,12 +108,27 @@ export function WorkChooser({ onChoose, disabled, initialBin, blindCycleCounts }
 
   return (
     <section aria-labelledby="work-title" className="card space-y-4">
-      <h2 id="work-title" className="text-lg font-bold">What are you counting?</h2>
+      <h2 id="work-title" className="text-lg font-bold">
+        What are you counting?
+      </h2>
       <fieldset className="grid grid-cols-3 gap-2" disabled={disabled}>
         <legend className="sr-only">Kind of count</legend>
         {KINDS.map((k) => (
-          <label key={k.purpose} className={`flex min-h-14 cursor-pointer items-center justify-center gap-2 rounded-md border-2 px-3 text-center font-medium ${purpose === k.purpose ? 'border-forge bg-forge-light text-forge-dark' : 'border-paper-line bg-paper-card'}`}>
-            <input type="radio" name="purpose" value={k.purpose} checked={purpose === k.purpose} onChange={() => { setItems([]); setPurpose(k.purpose); }} className="sr-only" />
+          <label
+            key={k.purpose}
+            className={`flex min-h-14 cursor-pointer items-center justify-center gap-2 rounded-md border-2 px-3 text-center font-medium ${purpose === k.purpose ? 'border-forge bg-forge-light text-forge-dark' : 'border-paper-line bg-paper-card'}`}
+          >
+            <input
+              type="radio"
+              name="purpose"
+              value={k.purpose}
+              checked={purpose === k.purpose}
+              onChange={() => {
+                setItems([]);
+                setPurpose(k.purpose);
+              }}
+              className="sr-only"
+            />
             {k.title}
           </label>
         ))}
@@ -108,15 +136,21 @@ export function WorkChooser({ onChoose, disabled, initialBin, blindCycleCounts }
       {purpose === 'part' ? (
         <div className="grid grid-cols-3 gap-3">
           <div>
-            <label htmlFor="work-target" className="field-label">Target pieces (optional)</label>
+            <label htmlFor="work-target" className="field-label">
+              Target pieces (optional)
+            </label>
             <input id="work-target" inputMode="numeric" className="field num" value={target} onChange={(e) => setTarget(e.target.value)} disabled={disabled} />
           </div>
           <div>
-            <label htmlFor="work-below" className="field-label">Allowed under</label>
+            <label htmlFor="work-below" className="field-label">
+              Allowed under
+            </label>
             <input id="work-below" inputMode="numeric" className="field num" value={below} onChange={(e) => setBelow(e.target.value)} disabled={disabled} />
           </div>
           <div>
-            <label htmlFor="work-above" className="field-label">Allowed over</label>
+            <label htmlFor="work-above" className="field-label">
+              Allowed over
+            </label>
             <input id="work-above" inputMode="numeric" className="field num" value={above} onChange={(e) => setAbove(e.target.value)} disabled={disabled} />
           </div>
         </div>
@@ -141,12 +175,22 @@ export function WorkChooser({ onChoose, disabled, initialBin, blindCycleCounts }
             }
           }}
         />
-        <p className="field-error" aria-live="polite">{message}</p>
+        <p className="field-error" aria-live="polite">
+          {message}
+        </p>
       </div>
-      <ul aria-label={`Matching ${source.title.toLowerCase()}`} className="max-h-72 divide-y divide-paper-line overflow-y-auto rounded-md border border-paper-line">
+      <ul
+        aria-label={`Matching ${source.title.toLowerCase()}`}
+        className="max-h-72 divide-y divide-paper-line overflow-y-auto rounded-md border border-paper-line"
+      >
         {items.map((item) => (
           <li key={item.key}>
-            <button type="button" disabled={disabled} className="min-h-12 w-full px-3 py-2 text-left hover:bg-forge-light disabled:opacity-50" onClick={() => choose(item)}>
+            <button
+              type="button"
+              disabled={disabled}
+              className="min-h-12 w-full px-3 py-2 text-left hover:bg-forge-light disabled:opacity-50"
+              onClick={() => choose(item)}
+            >
               {item.label}
             </button>
           </li>

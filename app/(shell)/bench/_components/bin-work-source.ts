@@ -33,7 +33,12 @@ export function binWorkSource(blind: boolean): WorkSource {
         return res.ok ? res.data.bins.map((b) => toItem(b, blind)) : [];
       }
       const res = await apiFetch<{ bins: BinDto[] }>('/api/v1/bins/due');
-      return res.ok ? res.data.bins.filter((b) => !q || b.partNumber.includes(q) || b.code.startsWith(q)).slice(0, 30).map((b) => toItem(b, blind)) : [];
+      return res.ok
+        ? res.data.bins
+            .filter((b) => !q || b.partNumber.includes(q) || b.code.startsWith(q))
+            .slice(0, 30)
+            .map((b) => toItem(b, blind))
+        : [];
     },
     async resolveScan(code) {
       if (!parseBinCode(code)) return null;

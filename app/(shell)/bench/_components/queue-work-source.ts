@@ -31,7 +31,10 @@ export function queueWorkSource(): WorkSource {
     async search(query) {
       const q = query.trim().toUpperCase();
       const lines = await load();
-      return lines.filter((l) => !q || l.partNumber.includes(q) || l.orderNumber.includes(q)).slice(0, 30).map(toItem);
+      return lines
+        .filter((l) => !q || l.partNumber.includes(q) || l.orderNumber.includes(q))
+        .slice(0, 30)
+        .map(toItem);
     },
     async resolveScan(code) {
       const wanted = code.trim().toUpperCase();

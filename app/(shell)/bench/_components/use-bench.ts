@@ -18,7 +18,18 @@ import { apiFetch } from '@/app/_components/api-client';
 import { useSiteTime } from '@/app/_components/site-time';
 import { calibrationOverdue } from '@/lib/metrology/calibration-due';
 import { allows, canMoveScale, canUseKept, captureDone, move, moveScale, takeKept, type BenchEvent } from '../_lib/bench-machine';
-import { chooseBinContainer, keepSample, parseKeptSample, parseSavedWork, pieceIncrements, readingScaleId, sampleOnPan, startWork, type BenchWork, type KeptSample } from '../_lib/bench-work';
+import {
+  chooseBinContainer,
+  keepSample,
+  parseKeptSample,
+  parseSavedWork,
+  pieceIncrements,
+  readingScaleId,
+  sampleOnPan,
+  startWork,
+  type BenchWork,
+  type KeptSample,
+} from '../_lib/bench-work';
 import { createCaptureQueue, type QueuedCapture, type SendOutcome } from '../_lib/capture-queue';
 import { buildCaptureBody } from '../_lib/capture-request';
 import type { PipelineWork } from '../_lib/reading-pipeline';
@@ -54,7 +65,15 @@ function postCapture(key: string, body: unknown) {
 }
 
 function advisedScale(s: ScaleDto): AdvisedScale {
-  return { id: s.id, name: s.name, division: s.division, repeatability: s.repeatability ?? 0, capacity: s.capacity, minLoad: s.minLoad, locked: s.status === 'locked' };
+  return {
+    id: s.id,
+    name: s.name,
+    division: s.division,
+    repeatability: s.repeatability ?? 0,
+    capacity: s.capacity,
+    minLoad: s.minLoad,
+    locked: s.status === 'locked',
+  };
 }
 
 /** What the server answers a capture: the count, and for a bin count what became of the bin. */
@@ -75,7 +94,6 @@ export const STEADY_ACTION_WORDS: Readonly<Record<SteadyAction, string>> = {
 };
 
 export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSpread }: BenchOptions) {
-
   const [work, setWork] = useState<BenchWork | null>(null);
   const [part, setPart] = useState<PartDto | null>(null);
   const [scaleId, setScaleId] = useState<number | null>(scales[0]?.id ?? null);
@@ -101,7 +119,10 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     let on = true;
     const poll = async () => {
       const r = await apiFetch<{ scale: ScaleDto }>(`/api/v1/scales/${scaleId}`);
-      if (on && r.ok) setLive((prev) => (prev && prev.id === r.data.scale.id && prev.status === r.data.scale.status && prev.statusReason === r.data.scale.statusReason ? prev : r.data.scale));
+      if (on && r.ok)
+        setLive((prev) =>
+          prev && prev.id === r.data.scale.id && prev.status === r.data.scale.status && prev.statusReason === r.data.scale.statusReason ? prev : r.data.scale,
+        );
     };
     void poll();
     const timer = setInterval(() => void poll(), SCALE_STATUS_POLL_MS);
@@ -111,7 +132,12 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     };
   }, [scaleId]);
   const scalesNow = useMemo(
-    () => scales.map((s) => (live && s.id === live.id && (s.status !== live.status || s.statusReason !== live.statusReason) ? { ...s, status: live.status, statusReason: live.statusReason } : s)),
+    () =>
+      scales.map((s) =>
+        live && s.id === live.id && (s.status !== live.status || s.statusReason !== live.statusReason)
+          ? { ...s, status: live.status, statusReason: live.statusReason }
+          : s,
+      ),
     [scales, live],
   );
   const scale = scalesNow.find((s) => s.id === scaleId) ?? null;
@@ -190,7 +216,15 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   // reading is worked out only when what it does depend on changes.
   const noise = useMemo(() => (scale ? { division: scale.division, repeatability: scale.repeatability ?? 0 } : null), [scale]);
   const growPlan = useMemo(
-    () => (work?.step === 'grow' && work.sample && noise ? planNextGrow({ noise, sample: work.sample, spread: spreadOrAssumed, upTo: work.targetQuantity != null ? work.targetQuantity + (work.tolerance?.above ?? 0) : undefined }) : null),
+    () =>
+      work?.step === 'grow' && work.sample && noise
+        ? planNextGrow({
+            noise,
+            sample: work.sample,
+            spread: spreadOrAssumed,
+            upTo: work.targetQuantity != null ? work.targetQuantity + (work.tolerance?.above ?? 0) : undefined,
+          })
+        : null,
     [work, noise, spreadOrAssumed],
   );
 
@@ -204,9 +238,26 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
       setNotice(null);
       const onPan = sampleStaysOnPan(item.purpose);
       const spreadOf = p.spreadBelief ?? { kind: 'assumed' as const, pieceSpread: defaultPieceSpread };
-      setSampleQty(p.averagePieceWeight ? judgeScale(advisedScale(scale), { averagePieceWeight: p.averagePieceWeight, spread: spreadOf }, item.targetQuantity ?? null, onPan).sample : DEFAULT_SAMPLE_QUANTITY);
+      setSampleQty(
+        p.averagePieceWeight
+          ? judgeScale(advisedScale(scale), { averagePieceWeight: p.averagePieceWeight, spread: spreadOf }, item.targetQuantity ?? null, onPan).sample
+          : DEFAULT_SAMPLE_QUANTITY,
+      );
       const { orderLineId, binId, binVersion } = item;
-      setWork(startWork({ purpose: item.purpose, partId: p.id, partNumber: p.partNumber, label: item.label, scaleId: scale.id, targetQuantity: item.targetQuantity, tolerance: item.tolerance, orderLineId, binId, binVersion }));
+      setWork(
+        startWork({
+          purpose: item.purpose,
+          partId: p.id,
+          partNumber: p.partNumber,
+          label: item.label,
+          scaleId: scale.id,
+          targetQuantity: item.targetQuantity,
+          tolerance: item.tolerance,
+          orderLineId,
+          binId,
+          binVersion,
+        }),
+      );
     });
   };
 
@@ -238,11 +289,12 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   const { today } = useSiteTime();
   const overdue = scale ? calibrationOverdue(scale.calibrationDueAt, today()) : false;
   const locked = scale?.status === 'locked';
-  const captureBlocked = overdue && !locked
-    ? `This scale was due for calibration on ${scale!.calibrationDueAt} and may not be used until a passing test is recorded. ${describeWarning('scale_locked').remedy}`
-    : locked
-    ? `This scale is locked${scale?.statusReason ? `: ${scale.statusReason}` : ''}. ${describeWarning('scale_locked').remedy}`
-    : null;
+  const captureBlocked =
+    overdue && !locked
+      ? `This scale was due for calibration on ${scale!.calibrationDueAt} and may not be used until a passing test is recorded. ${describeWarning('scale_locked').remedy}`
+      : locked
+        ? `This scale is locked${scale?.statusReason ? `: ${scale.statusReason}` : ''}. ${describeWarning('scale_locked').remedy}`
+        : null;
 
   /** Takes a move of the machine: the new work, or the reason it was refused as the notice. */
   const apply = (event: BenchEvent): BenchWork | null => {
@@ -282,13 +334,25 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
       if (frameRef.current) trace.mark(frameRef.current.t, 'sample', `sample ${next.sample?.quantity}`);
       void apiFetch<{ part: PartDto; held: boolean }>(`/api/v1/parts/${work.partId}/samples`, {
         method: 'POST',
-        body: { scaleId: scale.id, unit: 'g', quantity: increments.length, netWeight: Number(next.sample!.netWeight.toFixed(6)), increments: increments.map((x) => Number(x.toFixed(6))) },
+        body: {
+          scaleId: scale.id,
+          unit: 'g',
+          quantity: increments.length,
+          netWeight: Number(next.sample!.netWeight.toFixed(6)),
+          increments: increments.map((x) => Number(x.toFixed(6))),
+        },
       }).then((r) => {
         if (r.ok && r.data.held) {
-          setNotice({ tone: 'info', text: `Sample of ${increments.length} recorded, but held for review: it is far from what this part has weighed before, so the part keeps its piece weight until a planner or quality engineer accepts it. Check that this is the right part.` });
+          setNotice({
+            tone: 'info',
+            text: `Sample of ${increments.length} recorded, but held for review: it is far from what this part has weighed before, so the part keeps its piece weight until a planner or quality engineer accepts it. Check that this is the right part.`,
+          });
         } else if (r.ok) {
           setPart(r.data.part);
-          setNotice({ tone: 'ok', text: `Sample of ${increments.length} recorded piece by piece${r.data.part.spreadLearned ? `; this part’s spread is now learned from ${r.data.part.spreadObservations} pieces` : ''}.` });
+          setNotice({
+            tone: 'ok',
+            text: `Sample of ${increments.length} recorded piece by piece${r.data.part.spreadLearned ? `; this part’s spread is now learned from ${r.data.part.spreadObservations} pieces` : ''}.`,
+          });
         } else {
           const why = Object.values(r.fields ?? {})[0];
           setNotice({ tone: 'fault', text: `The sample was not recorded: ${r.message}${why ? ` — ${why}` : ''}.` });
@@ -305,7 +369,11 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
         setNotice({ tone: 'ok', text: `Sample grown to ${r.sampleQuantity} pieces.` });
         trace.mark(f.t, 'grow', `grown ${r.sampleQuantity}`);
       } else if (r.reason === 'unstable') setNotice({ tone: 'fault', text: describeWarning('unstable').message, code: 'unstable' });
-      else if (r.reason === 'not_exact') setNotice({ tone: 'fault', text: `Too many pieces were added to count them exactly (${r.count} ± ${r.wholePieceRange}). Take some off, down to the number shown, and accept again.` });
+      else if (r.reason === 'not_exact')
+        setNotice({
+          tone: 'fault',
+          text: `Too many pieces were added to count them exactly (${r.count} ± ${r.wholePieceRange}). Take some off, down to the number shown, and accept again.`,
+        });
       else setNotice({ tone: 'fault', text: 'No pieces were added since the last step.' });
     },
     count() {
@@ -328,14 +396,23 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
         setWork(captureDone(keyed));
       } else if (res.status === 0 || res.status >= 500) {
         trace.mark(f.t, 'capture', 'queued');
-        queueStore?.add({ key: keyed.captureKey!, body, label: `${keyed.partNumber} · ${frameRef.current?.estimate?.count ?? '?'} pcs`, queuedAt: new Date().toISOString() });
+        queueStore?.add({
+          key: keyed.captureKey!,
+          body,
+          label: `${keyed.partNumber} · ${frameRef.current?.estimate?.count ?? '?'} pcs`,
+          queuedAt: new Date().toISOString(),
+        });
         setQueue(queueStore?.list() ?? []);
         setWork(captureDone(keyed));
         setNotice({ tone: 'info', text: 'The server cannot be reached. The capture is saved on this tablet and will be sent once the connection is back.' });
       } else {
         // The server's own reason, with the field it names, in the operator's words.
         const why = Object.values(res.fields ?? {})[0];
-        setNotice({ tone: 'fault', text: why ? `${res.message}: ${why}.` : res.message, code: res.code === 'scale_locked' || res.code === 'unstable' || res.code === 'over_capacity' ? res.code : undefined });
+        setNotice({
+          tone: 'fault',
+          text: why ? `${res.message}: ${why}.` : res.message,
+          code: res.code === 'scale_locked' || res.code === 'unstable' || res.code === 'over_capacity' ? res.code : undefined,
+        });
       }
     },
     next() {
@@ -365,20 +442,38 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   if (locked || overdue) codes.push('scale_locked');
   if (notice?.code && !codes.includes(notice.code)) codes.push(notice.code);
 
-  const verdict = work?.targetQuantity != null && frame?.estimate && (work.step === 'count' || work.step === 'captured')
-    ? judgeKitLine({ count: frame.estimate.count, wholePieceRange: frame.estimate.wholePieceRange }, { target: work.targetQuantity, below: work.tolerance?.below ?? 0, above: work.tolerance?.above ?? 0 })
-    : null;
+  const verdict =
+    work?.targetQuantity != null && frame?.estimate && (work.step === 'count' || work.step === 'captured')
+      ? judgeKitLine(
+          { count: frame.estimate.count, wholePieceRange: frame.estimate.wholePieceRange },
+          { target: work.targetQuantity, below: work.tolerance?.below ?? 0, above: work.tolerance?.above ?? 0 },
+        )
+      : null;
   const spreadNote = useMemo(
-    () => (work && part && noise
-      ? describeSpread({ belief: spreadOrAssumed, noise, averagePieceWeight: work.sample ? work.sample.netWeight / work.sample.quantity : part.averagePieceWeight, sampleQuantity: work.sample?.quantity ?? sampleQty, sampleOnPan: sampleOnPan(work) })
-      : null),
+    () =>
+      work && part && noise
+        ? describeSpread({
+            belief: spreadOrAssumed,
+            noise,
+            averagePieceWeight: work.sample ? work.sample.netWeight / work.sample.quantity : part.averagePieceWeight,
+            sampleQuantity: work.sample?.quantity ?? sampleQty,
+            sampleOnPan: sampleOnPan(work),
+          })
+        : null,
     [work, part, noise, spreadOrAssumed, sampleQty],
   );
   // Before the count: can this scale count this part, and would another of the bench serve better?
   const advice = useMemo(() => {
-    const apwKnown = work?.sample ? work.sample.netWeight / work.sample.quantity : part?.averagePieceWeight ?? null;
+    const apwKnown = work?.sample ? work.sample.netWeight / work.sample.quantity : (part?.averagePieceWeight ?? null);
     if (!work || !scale || !apwKnown || (work.step !== 'tare' && work.step !== 'sample')) return null;
-    return adviseScales(scalesNow.map(advisedScale), scale.id, { averagePieceWeight: apwKnown, spread: spreadOrAssumed }, work.targetQuantity, sampleOnPan(work), chosenContainer?.tare ?? 0);
+    return adviseScales(
+      scalesNow.map(advisedScale),
+      scale.id,
+      { averagePieceWeight: apwKnown, spread: spreadOrAssumed },
+      work.targetQuantity,
+      sampleOnPan(work),
+      chosenContainer?.tare ?? 0,
+    );
   }, [work, part, scale, scalesNow, spreadOrAssumed, chosenContainer]);
   const showing: 'gross' | 'net' | 'count' = !work || work.step === 'tare' ? 'gross' : work.step === 'sample' ? 'net' : 'count';
   const kind = scale?.connection.kind;
@@ -405,7 +500,10 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     setWork(m.work);
     setScaleId(id);
     setResult(null);
-    setNotice({ tone: 'info', text: `The count moves to ${to?.name ?? 'the other scale'} and keeps its sample of ${work.sample!.quantity} pieces. Tare there first, then put the sample and the rest on.` });
+    setNotice({
+      tone: 'info',
+      text: `The count moves to ${to?.name ?? 'the other scale'} and keeps its sample of ${work.sample!.quantity} pieces. Tare there first, then put the sample and the rest on.`,
+    });
   };
   const scaleChoice: 'free' | 'move' | 'fixed' = !work ? 'free' : canMoveScale(work) ? 'move' : 'fixed';
 
@@ -422,7 +520,11 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     }
     setWork(null);
     setResult(null);
-    setNotice(saved ? { tone: 'ok', text: `The sample of ${saved.sample.quantity} pieces of ${work!.partNumber} is kept: the next count of it can start from it.` } : null);
+    setNotice(
+      saved
+        ? { tone: 'ok', text: `The sample of ${saved.sample.quantity} pieces of ${work!.partNumber} is kept: the next count of it can start from it.` }
+        : null,
+    );
   };
   const keptForWork = canUseKept(work, kept) ? kept : null;
   const startFromKeptSample = () => {
@@ -430,7 +532,10 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
     const m = takeKept(work, kept, scaleId);
     if (!m.ok) return setNotice({ tone: 'fault', text: m.reason });
     setWork(m.work);
-    setNotice({ tone: 'info', text: `Counting from the kept sample of ${m.work.sample!.quantity} pieces. Tare the container, then put on the pieces to count (the sample’s pieces are not part of this count).` });
+    setNotice({
+      tone: 'info',
+      text: `Counting from the kept sample of ${m.work.sample!.quantity} pieces. Tare the container, then put on the pieces to count (the sample’s pieces are not part of this count).`,
+    });
   };
   const dropQueued = (key: string) => {
     queueStore?.remove(key);
@@ -438,9 +543,45 @@ export function useBench({ scales, containers, stabilityWindowMs, defaultPieceSp
   };
 
   return {
-    work, part, scale, scaleId, moveToScale, scaleChoice, source, setSource, typed, setTyped, kind,
-    frame, frameRef, trace, notice, codes, spreadNote, verdict, showing,
-    actions, chooseWork, chooseContainer, containerChoice, chosenContainer, sampleQty, setSampleQty, growPlan,
-    busy, captureBlocked, result, stop, keptForWork, startFromKeptSample, queue, flushQueue, dropQueued, waiting, cancelWaiting, scales: scalesNow, advice,
+    work,
+    part,
+    scale,
+    scaleId,
+    moveToScale,
+    scaleChoice,
+    source,
+    setSource,
+    typed,
+    setTyped,
+    kind,
+    frame,
+    frameRef,
+    trace,
+    notice,
+    codes,
+    spreadNote,
+    verdict,
+    showing,
+    actions,
+    chooseWork,
+    chooseContainer,
+    containerChoice,
+    chosenContainer,
+    sampleQty,
+    setSampleQty,
+    growPlan,
+    busy,
+    captureBlocked,
+    result,
+    stop,
+    keptForWork,
+    startFromKeptSample,
+    queue,
+    flushQueue,
+    dropQueued,
+    waiting,
+    cancelWaiting,
+    scales: scalesNow,
+    advice,
   };
 }

@@ -10,7 +10,12 @@ const TRACE_CAPACITY = 50 * 3600;
 
 // Runs every reading through the pipeline at the scale's rate; React hears about it at most
 // once per animation frame, while actions read the very latest frame from the ref.
-export function useReadingFeed(source: ReadingSource | null, scale: PipelineScale | null, work: PipelineWork, options: { windowMs: number; defaultPieceSpread: number }) {
+export function useReadingFeed(
+  source: ReadingSource | null,
+  scale: PipelineScale | null,
+  work: PipelineWork,
+  options: { windowMs: number; defaultPieceSpread: number },
+) {
   // Each reading is judged against the count as it stands now, without setting the feed up again.
   const workNow = useEffectEvent(() => work);
   const frameRef = useRef<LiveFrame | null>(null);

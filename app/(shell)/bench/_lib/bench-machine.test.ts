@@ -40,7 +40,10 @@ describe('the bench state machine', () => {
 
   it('sample: needs a whole quantity and something on the pan; a bin goes straight to counting', () => {
     expect(sampled()).toMatchObject({ step: 'grow', sample: { quantity: 10, netWeight: 25 } });
-    expect(move(tared(), { action: 'sample', quantity: 10, stableGross: 150 })).toMatchObject({ ok: false, reason: expect.stringMatching(/Nothing is on the pan/) });
+    expect(move(tared(), { action: 'sample', quantity: 10, stableGross: 150 })).toMatchObject({
+      ok: false,
+      reason: expect.stringMatching(/Nothing is on the pan/),
+    });
     expect(move(tared(), { action: 'sample', quantity: 2.5, stableGross: 175 })).toMatchObject({ ok: false, reason: expect.stringMatching(/whole number/) });
     const bin = go(fresh('bin'), { action: 'tare', stableGross: 0, containerId: null }, { action: 'sample', quantity: 20, stableGross: 50 });
     expect(bin.step).toBe('count');
@@ -57,7 +60,10 @@ describe('the bench state machine', () => {
   it('grow: only a larger sample; count: on to counting with the sample kept', () => {
     const grown = go(sampled(), { action: 'grow', sample: { quantity: 30, netWeight: 75 } });
     expect(grown).toMatchObject({ step: 'grow', sample: { quantity: 30 } });
-    expect(move(grown, { action: 'grow', sample: { quantity: 30, netWeight: 75 } })).toMatchObject({ ok: false, reason: expect.stringMatching(/No pieces were added/) });
+    expect(move(grown, { action: 'grow', sample: { quantity: 30, netWeight: 75 } })).toMatchObject({
+      ok: false,
+      reason: expect.stringMatching(/No pieces were added/),
+    });
     expect(go(grown, { action: 'count' })).toMatchObject({ step: 'count', sample: { quantity: 30 } });
   });
 
@@ -89,7 +95,14 @@ describe('the bench state machine', () => {
     expect(counting).toMatchObject({ step: 'count', tare: 410, sample: { quantity: 10 } });
     // The capture names both scales: the sample's and the bulk's.
     // Two scales weigh independently: the server counts the bulk with the sample taken as apart.
-    expect(buildCaptureBody(counting, 660)).toMatchObject({ scaleId: 3, bulkScaleId: 9, tare: 410, gross: 660, sample: { quantity: 10, netWeight: 25 }, sampleOnPan: false });
+    expect(buildCaptureBody(counting, 660)).toMatchObject({
+      scaleId: 3,
+      bulkScaleId: 9,
+      tare: 410,
+      gross: 660,
+      sample: { quantity: 10, netWeight: 25 },
+      sampleOnPan: false,
+    });
     // Moving back to the sample's own scale is no longer a two-scale count.
     const back = moveScale(counting, 3);
     expect(back.ok && back.work.bulkScaleId).toBe(null);

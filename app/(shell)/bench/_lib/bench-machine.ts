@@ -5,8 +5,22 @@
  * request, the offline queue, the trace) belong to the hook that drives it.
  */
 import {
-  addPieceReading, applyTare, finishPieceSample, goToCount, growSample, markCaptured, moveToScale, nextCount, readingScaleId, startFromKept, takeSample, withCaptureKey,
-  type BenchSample, type BenchStep, type BenchWork, type KeptSample,
+  addPieceReading,
+  applyTare,
+  finishPieceSample,
+  goToCount,
+  growSample,
+  markCaptured,
+  moveToScale,
+  nextCount,
+  readingScaleId,
+  startFromKept,
+  takeSample,
+  withCaptureKey,
+  type BenchSample,
+  type BenchStep,
+  type BenchWork,
+  type KeptSample,
 } from './bench-work';
 
 export type BenchAction = 'tare' | 'presetTare' | 'sample' | 'piece' | 'finishPieces' | 'grow' | 'count' | 'capture' | 'next';
@@ -69,7 +83,8 @@ export function move(work: BenchWork, event: BenchEvent): Move {
     }
     case 'piece': {
       const last = work.pieceReadings[work.pieceReadings.length - 1] ?? work.tare ?? 0;
-      if (event.stableGross - last < event.division) return refuse('No new piece is on the pan: put exactly one more on, wait for it to settle, and press again.');
+      if (event.stableGross - last < event.division)
+        return refuse('No new piece is on the pan: put exactly one more on, wait for it to settle, and press again.');
       return to(addPieceReading(work, event.stableGross));
     }
     case 'finishPieces':
@@ -93,7 +108,12 @@ export function canMoveScale(work: BenchWork | null): boolean {
 }
 
 export function moveScale(work: BenchWork, scaleId: number): Move {
-  if (!canMoveScale(work)) return refuse(work.sample ? 'The scale can change once the sample is weighed, until the count is captured.' : 'Weigh the sample first: the scale can change once its piece weight is known.');
+  if (!canMoveScale(work))
+    return refuse(
+      work.sample
+        ? 'The scale can change once the sample is weighed, until the count is captured.'
+        : 'Weigh the sample first: the scale can change once its piece weight is known.',
+    );
   if (scaleId === readingScaleId(work)) return refuse('The count is on that scale already.');
   return to(moveToScale(work, scaleId));
 }

@@ -1,7 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import {
-  addPieceReading, applyTare, chooseBinContainer, countNet, finishPieceSample, nextCount, parseSavedWork,
-  pieceIncrements, startWork, takeSample, withCaptureKey,
+  addPieceReading,
+  applyTare,
+  chooseBinContainer,
+  countNet,
+  finishPieceSample,
+  nextCount,
+  parseSavedWork,
+  pieceIncrements,
+  startWork,
+  takeSample,
+  withCaptureKey,
 } from './bench-work';
 
 const part = { partId: 7, partNumber: 'SC-4', label: 'SC-4 screw', scaleId: 3 };

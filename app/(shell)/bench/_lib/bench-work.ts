@@ -185,7 +185,16 @@ const numOrNull = (x: unknown): boolean => x === null || num(x);
 export function parseKeptSample(text: string | null): KeptSample | null {
   try {
     const k = JSON.parse(text ?? 'null') as Partial<KeptSample> | null;
-    return k && num(k.partId) && num(k.scaleId) && typeof k.keptAt === 'string' && num(k.sample?.quantity) && num(k.sample?.netWeight) && k.sample.quantity >= 1 && k.sample.netWeight > 0 ? (k as KeptSample) : null;
+    return k &&
+      num(k.partId) &&
+      num(k.scaleId) &&
+      typeof k.keptAt === 'string' &&
+      num(k.sample?.quantity) &&
+      num(k.sample?.netWeight) &&
+      k.sample.quantity >= 1 &&
+      k.sample.netWeight > 0
+      ? (k as KeptSample)
+      : null;
   } catch {
     return null;
   }
@@ -206,12 +215,22 @@ export function parseSavedWork(text: string | null): BenchWork | null {
   const ok =
     PURPOSES.includes(w.purpose as WorkPurpose) &&
     STEPS.includes(w.step as BenchStep) &&
-    num(w.partId) && num(w.scaleId) &&
-    typeof w.partNumber === 'string' && typeof w.label === 'string' &&
-    numOrNull(w.tare) && numOrNull(w.panZero) && numOrNull(w.containerId) && numOrNull(w.targetQuantity) &&
-    numOrNull(w.orderLineId) && numOrNull(w.binId) && numOrNull(w.binVersion) && numOrNull(w.bulkScaleId) && typeof w.sampleApart === 'boolean' &&
+    num(w.partId) &&
+    num(w.scaleId) &&
+    typeof w.partNumber === 'string' &&
+    typeof w.label === 'string' &&
+    numOrNull(w.tare) &&
+    numOrNull(w.panZero) &&
+    numOrNull(w.containerId) &&
+    numOrNull(w.targetQuantity) &&
+    numOrNull(w.orderLineId) &&
+    numOrNull(w.binId) &&
+    numOrNull(w.binVersion) &&
+    numOrNull(w.bulkScaleId) &&
+    typeof w.sampleApart === 'boolean' &&
     (w.sample === null || (num(w.sample?.quantity) && num(w.sample?.netWeight))) &&
-    Array.isArray(w.pieceReadings) && w.pieceReadings.every(num) &&
+    Array.isArray(w.pieceReadings) &&
+    w.pieceReadings.every(num) &&
     (w.captureKey === null || typeof w.captureKey === 'string') &&
     (w.tolerance === null || (num(w.tolerance?.below) && num(w.tolerance?.above)));
   return ok ? (w as BenchWork) : null;

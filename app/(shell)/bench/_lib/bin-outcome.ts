@@ -26,8 +26,12 @@ export function describeBinOutcome(o: BinOutcomeInput): BinOutcome {
   }
   if (o.variance === 0) return { tone: 'ok', text: `Nothing to change: counted ${counted}, the same as the book.` };
   // Within the count's own range the difference may be the weighing's, not the bin's.
-  const within = Math.abs(o.variance) <= o.wholePieceRange
-    ? ` The difference is within the count's own ± ${o.wholePieceRange}, so it may be the weighing's rather than the bin's.`
-    : '';
-  return { tone: within ? 'caution' : 'ok', text: `Booked: the bin now holds ${o.counted} (book was ${o.bookQuantity}, ${signed(o.variance)}); counted ${counted}.${within}` };
+  const within =
+    Math.abs(o.variance) <= o.wholePieceRange
+      ? ` The difference is within the count's own ± ${o.wholePieceRange}, so it may be the weighing's rather than the bin's.`
+      : '';
+  return {
+    tone: within ? 'caution' : 'ok',
+    text: `Booked: the bin now holds ${o.counted} (book was ${o.bookQuantity}, ${signed(o.variance)}); counted ${counted}.${within}`,
+  };
 }

@@ -5,7 +5,8 @@
  */
 import { SimulatedScale } from '@/lib/scale/simulator';
 
-export type PanAction = { kind: 'add'; n: number } | { kind: 'remove'; n: number } | { kind: 'container'; weight: number } | { kind: 'container-off' } | { kind: 'clear' };
+export type PanAction =
+  { kind: 'add'; n: number } | { kind: 'remove'; n: number } | { kind: 'container'; weight: number } | { kind: 'container-off' } | { kind: 'clear' };
 
 export interface PracticePan {
   seed: number;

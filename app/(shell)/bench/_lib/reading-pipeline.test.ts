@@ -3,7 +3,14 @@ import { createReadingPipeline, type PipelineWork } from './reading-pipeline';
 import { TraceBuffer } from './trace-buffer';
 
 const scale = { division: 0.1, repeatability: 0, capacity: 6000, minLoad: 20 };
-const work: PipelineWork = { tare: 100, sample: { quantity: 10, netWeight: 25 }, sampleOnPan: true, targetQuantity: null, spread: { kind: 'known', pieceSpread: 0.01 }, containerWeight: 100 };
+const work: PipelineWork = {
+  tare: 100,
+  sample: { quantity: 10, netWeight: 25 },
+  sampleOnPan: true,
+  targetQuantity: null,
+  spread: { kind: 'known', pieceSpread: 0.01 },
+  containerWeight: 100,
+};
 
 function run(values: number[], w: PipelineWork = work) {
   const trace = new TraceBuffer(100);

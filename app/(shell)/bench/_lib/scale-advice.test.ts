@@ -6,7 +6,7 @@ const kitting: AdvisedScale = { id: 2, name: 'Bench 2 · kitting', division: 0.1
 const learned = { kind: 'learned' as const, scatter: 0.01 ** 2, noise: 0, degreesOfFreedom: 99, observations: 100 };
 
 describe('advice before the count', () => {
-  it('never advises a sample under the scale\'s Min', () => {
+  it("never advises a sample under the scale's Min", () => {
     const v = judgeScale(kitting, { averagePieceWeight: 0.62, spread: learned }, null, true);
     expect(v.sample * 0.62).toBeGreaterThanOrEqual(20);
     expect(v).toMatchObject({ usable: true, problem: null, sample: 33 });
@@ -29,6 +29,9 @@ describe('advice before the count', () => {
 
   it('says when the target is over Max, and that a locked scale cannot be used', () => {
     expect(judgeScale(fine, { averagePieceWeight: 2.5, spread: learned }, 400, true).problem).toMatch(/over Bench 1 · fine's Max/);
-    expect(judgeScale({ ...fine, locked: true }, { averagePieceWeight: 2.5, spread: learned }, 40, true)).toMatchObject({ usable: false, problem: 'Bench 1 · fine is locked.' });
+    expect(judgeScale({ ...fine, locked: true }, { averagePieceWeight: 2.5, spread: learned }, 40, true)).toMatchObject({
+      usable: false,
+      problem: 'Bench 1 · fine is locked.',
+    });
   });
 });

@@ -36,7 +36,13 @@ export interface Advice {
 
 const grams = (x: number): string => `${Number(x.toPrecision(3))} g`;
 
-export function judgeScale(scale: AdvisedScale, part: { averagePieceWeight: number; spread: SpreadBelief }, target: number | null, sampleOnPan: boolean, containerWeight = 0): ScaleVerdict {
+export function judgeScale(
+  scale: AdvisedScale,
+  part: { averagePieceWeight: number; spread: SpreadBelief },
+  target: number | null,
+  sampleOnPan: boolean,
+  containerWeight = 0,
+): ScaleVerdict {
   const apw = part.averagePieceWeight;
   const base = { scaleId: scale.id, usable: false, targetExact: false, sample: DEFAULT_SAMPLE_QUANTITY };
   if (scale.locked) return { ...base, problem: `${scale.name} is locked.` };
@@ -47,14 +53,25 @@ export function judgeScale(scale: AdvisedScale, part: { averagePieceWeight: numb
   const minSample = Math.max(DEFAULT_SAMPLE_QUANTITY, Math.ceil(scale.minLoad / apw));
   const reach = exactReach({ sampleQuantity: minSample, averagePieceWeight: apw, sampleScale: noise, sampleOnPan }, c2);
   if (reach.tooLight) return { ...base, sample: minSample, problem: `${scale.name} cannot tell even one piece apart from its noise.` };
-  if (minSample * apw + containerWeight > scale.capacity) return { ...base, sample: minSample, problem: `A sample of ${minSample} is over ${scale.name}'s Max.` };
+  if (minSample * apw + containerWeight > scale.capacity)
+    return { ...base, sample: minSample, problem: `A sample of ${minSample} is over ${scale.name}'s Max.` };
   if (target == null) return { ...base, usable: true, sample: minSample, problem: null };
   if (target * apw + containerWeight > scale.capacity) {
-    return { ...base, usable: true, sample: minSample, problem: `${target} pieces (${grams(target * apw)}) are over ${scale.name}'s Max of ${grams(scale.capacity)}: count them in batches.` };
+    return {
+      ...base,
+      usable: true,
+      sample: minSample,
+      problem: `${target} pieces (${grams(target * apw)}) are over ${scale.name}'s Max of ${grams(scale.capacity)}: count them in batches.`,
+    };
   }
   const needed = sampleForTarget({ targetQuantity: target, averagePieceWeight: apw, sampleScale: noise, sampleOnPan }, c2);
   if (needed == null) {
-    return { ...base, usable: true, sample: minSample, problem: `${target} pieces cannot be counted exactly on ${scale.name} whatever the sample: grow it in steps, or count in smaller batches.` };
+    return {
+      ...base,
+      usable: true,
+      sample: minSample,
+      problem: `${target} pieces cannot be counted exactly on ${scale.name} whatever the sample: grow it in steps, or count in smaller batches.`,
+    };
   }
   return { scaleId: scale.id, usable: true, targetExact: true, sample: Math.min(target, Math.max(minSample, needed)), problem: null };
 }

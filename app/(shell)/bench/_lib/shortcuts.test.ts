@@ -1,7 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { SHORTCUTS, shortcutFor } from './shortcuts';
 
-const press = (key: string, target: unknown = null, mods = {}) => ({ key, ctrlKey: false, metaKey: false, altKey: false, target: target as EventTarget | null, ...mods });
+const press = (key: string, target: unknown = null, mods = {}) => ({
+  key,
+  ctrlKey: false,
+  metaKey: false,
+  altKey: false,
+  target: target as EventTarget | null,
+  ...mods,
+});
 
 describe('bench shortcuts', () => {
   it('maps each key to one step and every step to its own key', () => {

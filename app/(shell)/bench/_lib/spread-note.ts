@@ -22,9 +22,10 @@ export function describeSpread(input: {
   sampleOnPan: boolean;
 }): SpreadNote {
   const { belief } = input;
-  const headline = belief.kind === 'learned'
-    ? `Piece spread ${percent(spreadEstimate(belief))} from ${belief.observations} pieces`
-    : `Piece spread not learned yet: ${percent(belief.pieceSpread)} is assumed, to be safe`;
+  const headline =
+    belief.kind === 'learned'
+      ? `Piece spread ${percent(spreadEstimate(belief))} from ${belief.observations} pieces`
+      : `Piece spread not learned yet: ${percent(belief.pieceSpread)} is assumed, to be safe`;
   const apw = input.averagePieceWeight;
   if (apw == null || !(apw > 0) || belief.kind === 'known') return { headline, more: null };
   const model = { sampleQuantity: input.sampleQuantity, averagePieceWeight: apw, sampleScale: input.noise, sampleOnPan: input.sampleOnPan };

@@ -22,9 +22,19 @@ export function VarianceDecision({ variance, onDecided }: { variance: PendingVar
   const ask = (d: 'approve' | 'reject', submit: () => Promise<void>) => {
     decision.current = d;
     const v = variance.variance > 0 ? `+${variance.variance}` : `${variance.variance}`;
-    setPending(d === 'approve'
-      ? { question: `Approve ${v} pcs on ${variance.binCode}? Its book quantity becomes ${variance.counted} (from ${variance.bookQuantity}).`, yes: 'Yes, approve', onConfirm: submit }
-      : { question: `Reject the count of ${variance.binCode}? The book stays at ${variance.bookQuantity} and the bin should be counted again.`, yes: 'Yes, reject', onConfirm: submit });
+    setPending(
+      d === 'approve'
+        ? {
+            question: `Approve ${v} pcs on ${variance.binCode}? Its book quantity becomes ${variance.counted} (from ${variance.bookQuantity}).`,
+            yes: 'Yes, approve',
+            onConfirm: submit,
+          }
+        : {
+            question: `Reject the count of ${variance.binCode}? The book stays at ${variance.bookQuantity} and the bin should be counted again.`,
+            yes: 'Yes, reject',
+            onConfirm: submit,
+          },
+    );
   };
   return (
     <Formik
@@ -32,14 +42,21 @@ export function VarianceDecision({ variance, onDecided }: { variance: PendingVar
       validationSchema={schema}
       onSubmit={async (values, helpers) => {
         setMessage(null);
-        const res = await apiFetch<{ binCount: { binCode: string; bookQuantity: number } }>(`/api/v1/bin-counts/${variance.id}/decision`, { method: 'POST', body: { decision: decision.current, note: values.note.trim() || null } });
+        const res = await apiFetch<{ binCount: { binCode: string; bookQuantity: number } }>(`/api/v1/bin-counts/${variance.id}/decision`, {
+          method: 'POST',
+          body: { decision: decision.current, note: values.note.trim() || null },
+        });
         if (!res.ok) {
           helpers.setErrors(toFormikErrors(res.fields));
           setMessage(res.message);
           return;
         }
         const b = res.data.binCount;
-        onDecided(decision.current === 'approve' ? `${b.binCode}: approved, book quantity now ${b.bookQuantity}.` : `${b.binCode}: rejected, the book stays at ${b.bookQuantity}; count the bin again.`);
+        onDecided(
+          decision.current === 'approve'
+            ? `${b.binCode}: approved, book quantity now ${b.bookQuantity}.`
+            : `${b.binCode}: rejected, the book stays at ${b.bookQuantity}; count the bin again.`,
+        );
       }}
     >
       {({ isSubmitting, submitForm }) => (
@@ -47,8 +64,12 @@ export function VarianceDecision({ variance, onDecided }: { variance: PendingVar
           <FormField name="note" id={`note-${variance.id}`} label="Note (optional)" autoComplete="off" placeholder="e.g. found a torn bag" />
           <FormMessage message={message} />
           <div className="flex flex-wrap gap-2">
-            <button type="button" className="btn-primary" disabled={isSubmitting || pending !== null} onClick={() => ask('approve', submitForm)}>Approve</button>
-            <button type="button" className="btn-danger" disabled={isSubmitting || pending !== null} onClick={() => ask('reject', submitForm)}>Reject</button>
+            <button type="button" className="btn-primary" disabled={isSubmitting || pending !== null} onClick={() => ask('approve', submitForm)}>
+              Approve
+            </button>
+            <button type="button" className="btn-danger" disabled={isSubmitting || pending !== null} onClick={() => ask('reject', submitForm)}>
+              Reject
+            </button>
           </div>
           <ConfirmBar pending={pending} onDone={() => setPending(null)} tone={decision.current === 'approve' ? 'primary' : 'danger'} />
         </ReadyForm>

@@ -17,7 +17,14 @@ const schema = yup.object({
 });
 
 const toRows = (kit: KitDto): ComponentRow[] =>
-  kit.components.map((c) => ({ partNumber: c.partNumber, partId: c.partId, description: c.description, quantity: String(c.quantity), toleranceBelow: String(c.toleranceBelow), toleranceAbove: String(c.toleranceAbove) }));
+  kit.components.map((c) => ({
+    partNumber: c.partNumber,
+    partId: c.partId,
+    description: c.description,
+    quantity: String(c.quantity),
+    toleranceBelow: String(c.toleranceBelow),
+    toleranceAbove: String(c.toleranceAbove),
+  }));
 
 export function KitEditor({ kit, canEdit }: { kit: KitDto; canEdit: boolean }) {
   const router = useRouter();
@@ -53,8 +60,12 @@ export function KitEditor({ kit, canEdit }: { kit: KitDto; canEdit: boolean }) {
             <FormField name="description" label="Description" autoComplete="off" />
             <ComponentsEditor />
             <div className="flex flex-wrap gap-3 items-center">
-              <button type="submit" className="btn-primary" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Save kit'}</button>
-              <p role="status" aria-live="polite" className="text-sm text-ok">{saved ? 'Saved.' : ''}</p>
+              <button type="submit" className="btn-primary" disabled={isSubmitting}>
+                {isSubmitting ? 'Saving…' : 'Save kit'}
+              </button>
+              <p role="status" aria-live="polite" className="text-sm text-ok">
+                {saved ? 'Saved.' : ''}
+              </p>
               <FormMessage message={message} />
             </div>
           </ReadyForm>
@@ -72,10 +83,18 @@ function KitReadOnly({ kit }: { kit: KitDto }) {
       <table className="w-full text-sm">
         <thead>
           <tr className="text-left border-b border-paper-line text-ink-soft">
-            <th scope="col" className="py-2 pr-3">Part number</th>
-            <th scope="col" className="py-2 pr-3">Description</th>
-            <th scope="col" className="py-2 pr-3 text-right">Qty per kit</th>
-            <th scope="col" className="py-2 text-right">Tolerance</th>
+            <th scope="col" className="py-2 pr-3">
+              Part number
+            </th>
+            <th scope="col" className="py-2 pr-3">
+              Description
+            </th>
+            <th scope="col" className="py-2 pr-3 text-right">
+              Qty per kit
+            </th>
+            <th scope="col" className="py-2 text-right">
+              Tolerance
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -84,7 +103,9 @@ function KitReadOnly({ kit }: { kit: KitDto }) {
               <td className="py-2 pr-3 num">{c.partNumber}</td>
               <td className="py-2 pr-3">{c.description}</td>
               <td className="py-2 pr-3 text-right num">{c.quantity}</td>
-              <td className="py-2 text-right num">−{c.toleranceBelow} / +{c.toleranceAbove}</td>
+              <td className="py-2 text-right num">
+                −{c.toleranceBelow} / +{c.toleranceAbove}
+              </td>
             </tr>
           ))}
         </tbody>

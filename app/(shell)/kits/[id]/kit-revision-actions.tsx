@@ -10,7 +10,11 @@ import { apiFetch } from '../../../_components/api-client';
 import { FormField, FormMessage } from '../../../_components/form-field';
 
 const copySchema = yup.object({
-  revision: yup.string().trim().matches(/^[A-Za-z0-9]{1,8}$/, 'Revision is 1–8 letters or digits, e.g. B or 04').required('New revision is required'),
+  revision: yup
+    .string()
+    .trim()
+    .matches(/^[A-Za-z0-9]{1,8}$/, 'Revision is 1–8 letters or digits, e.g. B or 04')
+    .required('New revision is required'),
 });
 
 // New revisions carry the parts over; retiring keeps the revision for history but offers it to no new order.
@@ -29,7 +33,9 @@ export function KitRevisionActions({ kit, onChanged }: { kit: KitDto; onChanged:
 
   return (
     <section className="card space-y-4" aria-labelledby="revision-title">
-      <h2 id="revision-title" className="font-bold">Revisions</h2>
+      <h2 id="revision-title" className="font-bold">
+        Revisions
+      </h2>
       <Formik
         initialValues={{ revision: '' }}
         validationSchema={copySchema}
@@ -46,17 +52,25 @@ export function KitRevisionActions({ kit, onChanged }: { kit: KitDto; onChanged:
             <div className="w-40">
               <FormField name="revision" label="New revision" autoComplete="off" />
             </div>
-            <button type="submit" className="btn-quiet md:mt-6" disabled={isSubmitting}>Copy to new revision</button>
+            <button type="submit" className="btn-quiet md:mt-6" disabled={isSubmitting}>
+              Copy to new revision
+            </button>
           </ReadyForm>
         )}
       </Formik>
       <div className="flex flex-wrap items-center gap-3">
         {kit.active ? (
-          <button type="button" className="btn-danger" onClick={() => setActive(false)}>Retire revision {kit.revision}</button>
+          <button type="button" className="btn-danger" onClick={() => setActive(false)}>
+            Retire revision {kit.revision}
+          </button>
         ) : (
-          <button type="button" className="btn-quiet" onClick={() => setActive(true)}>Bring revision {kit.revision} back into use</button>
+          <button type="button" className="btn-quiet" onClick={() => setActive(true)}>
+            Bring revision {kit.revision} back into use
+          </button>
         )}
-        <span className="text-sm text-ink-faint">{kit.active ? 'Retired revisions stay on their orders but cannot start new ones.' : 'This revision cannot start new orders.'}</span>
+        <span className="text-sm text-ink-faint">
+          {kit.active ? 'Retired revisions stay on their orders but cannot start new ones.' : 'This revision cannot start new orders.'}
+        </span>
       </div>
       <FormMessage message={message} />
     </section>

@@ -19,7 +19,11 @@ export default async function KitPage({ params }: { params: Promise<{ id: string
   return (
     <div className="space-y-6">
       <header className="space-y-1">
-        <p className="text-sm"><Link href="/kits" className="text-forge hover:underline">Kits</Link></p>
+        <p className="text-sm">
+          <Link href="/kits" className="text-forge hover:underline">
+            Kits
+          </Link>
+        </p>
         <h1 className="page-title flex flex-wrap items-center gap-3">
           <span className="num">{kit.code}</span>
           <span className="text-ink-soft font-medium">rev {kit.revision}</span>
@@ -31,7 +35,13 @@ export default async function KitPage({ params }: { params: Promise<{ id: string
             {revisions.map((r, i) => (
               <span key={r.id}>
                 {i ? ', ' : ''}
-                {r.id === kit.id ? <strong>{r.revision}</strong> : <Link href={`/kits/${r.id}`} className="text-forge hover:underline">{r.revision}</Link>}
+                {r.id === kit.id ? (
+                  <strong>{r.revision}</strong>
+                ) : (
+                  <Link href={`/kits/${r.id}`} className="text-forge hover:underline">
+                    {r.revision}
+                  </Link>
+                )}
                 {r.active ? '' : ' (retired)'}
               </span>
             ))}

@@ -44,7 +44,9 @@ export function PartNumberInput({ id, value, onChange, invalid, describedBy }: P
       />
       <datalist id={listId}>
         {suggestions.map((p) => (
-          <option key={p.id} value={p.partNumber}>{p.description}</option>
+          <option key={p.id} value={p.partNumber}>
+            {p.description}
+          </option>
         ))}
       </datalist>
     </>

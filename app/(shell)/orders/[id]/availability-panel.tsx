@@ -21,11 +21,17 @@ export function AvailabilityPanel({ orderId, initial }: { orderId: number; initi
   return (
     <section className="card space-y-3" aria-labelledby="availability-title">
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <h2 id="availability-title" className="font-bold">Stock for this order</h2>
-        <button type="button" className="btn-quiet" onClick={recheck}>Check again</button>
+        <h2 id="availability-title" className="font-bold">
+          Stock for this order
+        </h2>
+        <button type="button" className="btn-quiet" onClick={recheck}>
+          Check again
+        </button>
       </div>
       <p role="status" aria-live="polite" className={short.length ? 'text-fault font-medium' : 'text-ok font-medium'} data-testid="availability-summary">
-        {short.length ? `${short.length} part${short.length === 1 ? ' is' : 's are'} short; the order cannot be released yet.` : 'Every part is in stock; releasing will hold it for this order.'}
+        {short.length
+          ? `${short.length} part${short.length === 1 ? ' is' : 's are'} short; the order cannot be released yet.`
+          : 'Every part is in stock; releasing will hold it for this order.'}
         {message ? <span className="ml-2 font-normal text-ink-faint">{message}</span> : null}
       </p>
       <div className="overflow-x-auto">
@@ -33,12 +39,24 @@ export function AvailabilityPanel({ orderId, initial }: { orderId: number; initi
           <caption className="sr-only">Required against available stock</caption>
           <thead>
             <tr className="text-left border-b border-paper-line text-ink-soft">
-              <th scope="col" className="py-2 pr-3">Part</th>
-              <th scope="col" className="py-2 pr-3 text-right">Required</th>
-              <th scope="col" className="py-2 pr-3 text-right">On hand</th>
-              <th scope="col" className="py-2 pr-3 text-right">Held by other orders</th>
-              <th scope="col" className="py-2 pr-3 text-right">Available</th>
-              <th scope="col" className="py-2">Shortage</th>
+              <th scope="col" className="py-2 pr-3">
+                Part
+              </th>
+              <th scope="col" className="py-2 pr-3 text-right">
+                Required
+              </th>
+              <th scope="col" className="py-2 pr-3 text-right">
+                On hand
+              </th>
+              <th scope="col" className="py-2 pr-3 text-right">
+                Held by other orders
+              </th>
+              <th scope="col" className="py-2 pr-3 text-right">
+                Available
+              </th>
+              <th scope="col" className="py-2">
+                Shortage
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -49,7 +67,9 @@ export function AvailabilityPanel({ orderId, initial }: { orderId: number; initi
                 <td className="py-2 pr-3 text-right num">{l.onHand}</td>
                 <td className="py-2 pr-3 text-right num">{l.reserved}</td>
                 <td className="py-2 pr-3 text-right num">{l.available}</td>
-                <td className="py-2">{l.shortage ? <span className="text-fault font-medium">Short by {l.shortage}</span> : <span className="text-ok">enough</span>}</td>
+                <td className="py-2">
+                  {l.shortage ? <span className="text-fault font-medium">Short by {l.shortage}</span> : <span className="text-ok">enough</span>}
+                </td>
               </tr>
             ))}
           </tbody>

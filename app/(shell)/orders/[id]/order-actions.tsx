@@ -36,20 +36,29 @@ export function OrderActions({ order, onChanged }: { order: OrderDto; onChanged:
   if (order.status === 'complete' || order.status === 'cancelled') return null;
   return (
     <section className="card space-y-3" aria-labelledby="actions-title">
-      <h2 id="actions-title" className="font-bold">What next</h2>
+      <h2 id="actions-title" className="font-bold">
+        What next
+      </h2>
       <div className="flex flex-wrap gap-3 items-center">
-        {order.status === 'draft' ? <button type="button" className="btn-primary" disabled={busy} onClick={() => act('release')}>Release to the bench</button> : null}
+        {order.status === 'draft' ? (
+          <button type="button" className="btn-primary" disabled={busy} onClick={() => act('release')}>
+            Release to the bench
+          </button>
+        ) : null}
         <button
           type="button"
           className="btn-danger"
           disabled={busy}
-          onClick={() => setPending({
-            question: order.status === 'draft'
-              ? `Cancel draft ${order.number}? It will not be released or built.`
-              : `Cancel ${order.number}? Its reserved stock goes back to free stock; captures already made stay on record, and the kits are not built.`,
-            yes: order.status === 'draft' ? 'Yes, cancel the draft' : 'Yes, cancel and free the stock',
-            onConfirm: () => void act('cancel'),
-          })}
+          onClick={() =>
+            setPending({
+              question:
+                order.status === 'draft'
+                  ? `Cancel draft ${order.number}? It will not be released or built.`
+                  : `Cancel ${order.number}? Its reserved stock goes back to free stock; captures already made stay on record, and the kits are not built.`,
+              yes: order.status === 'draft' ? 'Yes, cancel the draft' : 'Yes, cancel and free the stock',
+              onConfirm: () => void act('cancel'),
+            })
+          }
         >
           {order.status === 'draft' ? 'Cancel draft' : 'Cancel order and free its stock'}
         </button>
@@ -71,18 +80,35 @@ export function OrderActions({ order, onChanged }: { order: OrderDto; onChanged:
                   <label htmlFor="f-overrideReason" className="field-label">
                     {notIn} line{notIn === 1 ? ' is' : 's are'} not in tolerance. To complete anyway, say why
                   </label>
-                  <textarea id="f-overrideReason" className="field py-2 min-h-20" {...getFieldProps('overrideReason')} aria-describedby="f-overrideReason-error" aria-invalid={touched.overrideReason && errors.overrideReason ? true : undefined} />
-                  <p id="f-overrideReason-error" className="field-error" aria-live="polite">{touched.overrideReason ? errors.overrideReason : null}</p>
+                  <textarea
+                    id="f-overrideReason"
+                    className="field py-2 min-h-20"
+                    {...getFieldProps('overrideReason')}
+                    aria-describedby="f-overrideReason-error"
+                    aria-invalid={touched.overrideReason && errors.overrideReason ? true : undefined}
+                  />
+                  <p id="f-overrideReason-error" className="field-error" aria-live="polite">
+                    {touched.overrideReason ? errors.overrideReason : null}
+                  </p>
                 </div>
               ) : (
                 <p className="text-ok">Every line is in tolerance.</p>
               )}
-              <button type="submit" className={notIn ? 'btn-quiet' : 'btn-primary'} disabled={busy}>{notIn ? 'Complete with this reason' : 'Complete the order'}</button>
+              <button type="submit" className={notIn ? 'btn-quiet' : 'btn-primary'} disabled={busy}>
+                {notIn ? 'Complete with this reason' : 'Complete the order'}
+              </button>
             </ReadyForm>
           )}
         </Formik>
       ) : null}
-      <p role="alert" aria-live="assertive" className={message ? 'rounded-md bg-fault-light px-3 py-2 text-sm text-fault' : 'sr-only'} data-testid="order-action-message">{message}</p>
+      <p
+        role="alert"
+        aria-live="assertive"
+        className={message ? 'rounded-md bg-fault-light px-3 py-2 text-sm text-fault' : 'sr-only'}
+        data-testid="order-action-message"
+      >
+        {message}
+      </p>
     </section>
   );
 }

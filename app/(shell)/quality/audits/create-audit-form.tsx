@@ -15,19 +15,46 @@ import { LEVELS } from './sampling-plan-calculator';
 
 type Option = { id: number; label: string };
 
-const PURPOSES: ReadonlyArray<readonly [string, string]> = [['', 'Any'], ['kit_line', 'Kit lines'], ['bin', 'Bin counts'], ['part', 'Part counts'], ['audit', 'Audit counts']];
-const date = yup.string().matches(/^\d{4}-\d{2}-\d{2}$/, 'Date must be YYYY-MM-DD').required('Date is required');
+const PURPOSES: ReadonlyArray<readonly [string, string]> = [
+  ['', 'Any'],
+  ['kit_line', 'Kit lines'],
+  ['bin', 'Bin counts'],
+  ['part', 'Part counts'],
+  ['audit', 'Audit counts'],
+];
+const date = yup
+  .string()
+  .matches(/^\d{4}-\d{2}-\d{2}$/, 'Date must be YYYY-MM-DD')
+  .required('Date is required');
 const schema = yup.object({
   from: date,
   to: date.test('after-from', 'To must not be before From', function (to) {
     return !to || !this.parent.from || to >= this.parent.from;
   }),
-  seed: yup.number().transform((v, raw) => (raw === '' ? undefined : v)).typeError('A whole number').integer('A whole number').min(1, '1 to 2 147 483 646').max(2 ** 31 - 2, '1 to 2 147 483 646'),
+  seed: yup
+    .number()
+    .transform((v, raw) => (raw === '' ? undefined : v))
+    .typeError('A whole number')
+    .integer('A whole number')
+    .min(1, '1 to 2 147 483 646')
+    .max(2 ** 31 - 2, '1 to 2 147 483 646'),
 });
 
 const choices = (list: Option[], any: string) => [['', any] as const, ...list.map((o) => [String(o.id), o.label] as const)];
 
-export function CreateAuditForm({ parts, operators, scales, today, monthAgo }: { parts: Option[]; operators: Option[]; scales: Option[]; today: string; monthAgo: string }) {
+export function CreateAuditForm({
+  parts,
+  operators,
+  scales,
+  today,
+  monthAgo,
+}: {
+  parts: Option[];
+  operators: Option[];
+  scales: Option[];
+  today: string;
+  monthAgo: string;
+}) {
   const router = useRouter();
   const [message, setMessage] = useState<string | null>(null);
   return (
@@ -37,8 +64,18 @@ export function CreateAuditForm({ parts, operators, scales, today, monthAgo }: {
       onSubmit={async (v, helpers) => {
         setMessage(null);
         const id = (x: string) => (x ? Number(x) : undefined);
-        const population = { from: v.from, to: v.to, partId: id(v.partId), operatorId: id(v.operatorId), scaleId: id(v.scaleId), purpose: v.purpose || undefined };
-        const res = await apiFetch<{ audit: AuditDto }>('/api/v1/audits', { method: 'POST', body: { population, level: v.level, aql: Number(v.aql), seed: id(v.seed) } });
+        const population = {
+          from: v.from,
+          to: v.to,
+          partId: id(v.partId),
+          operatorId: id(v.operatorId),
+          scaleId: id(v.scaleId),
+          purpose: v.purpose || undefined,
+        };
+        const res = await apiFetch<{ audit: AuditDto }>('/api/v1/audits', {
+          method: 'POST',
+          body: { population, level: v.level, aql: Number(v.aql), seed: id(v.seed) },
+        });
         if (!res.ok) {
           // Population fields come back as population.from etc.; show them on the inputs of the same name.
           helpers.setErrors(toFormikErrors(Object.fromEntries(Object.entries(res.fields).map(([k, m]) => [k.replace(/^population\./, ''), m]))));
@@ -51,7 +88,9 @@ export function CreateAuditForm({ parts, operators, scales, today, monthAgo }: {
       {({ isSubmitting }) => (
         <ReadyForm noValidate className="card space-y-4" aria-label="Start an audit">
           <h2 className="font-bold">Start an audit</h2>
-          <p className="text-sm text-ink-soft">The lot is every count captured in the period that matches the filters; the sample is drawn at random with a recorded seed.</p>
+          <p className="text-sm text-ink-soft">
+            The lot is every count captured in the period that matches the filters; the sample is drawn at random with a recorded seed.
+          </p>
           <div className="grid gap-4 grid-cols-2 lg:grid-cols-4">
             <FormField name="from" type="date" label="Counted from" />
             <FormField name="to" type="date" label="Counted to" />
@@ -64,7 +103,9 @@ export function CreateAuditForm({ parts, operators, scales, today, monthAgo }: {
             <FormField name="seed" label="Seed (optional)" inputMode="numeric" hint="To repeat an earlier selection" />
           </div>
           <FormMessage message={message} />
-          <button type="submit" className="btn-primary" disabled={isSubmitting}>{isSubmitting ? 'Drawing the sample…' : 'Draw the sample'}</button>
+          <button type="submit" className="btn-primary" disabled={isSubmitting}>
+            {isSubmitting ? 'Drawing the sample…' : 'Draw the sample'}
+          </button>
         </ReadyForm>
       )}
     </Formik>

@@ -15,7 +15,12 @@ export const metadata = { title: 'Count audits' };
 
 export default async function AuditsPage() {
   await requirePageUser('audits.run', '/quality/audits');
-  const [audits, parts, scales, users] = await Promise.all([listAudits(), listParts({ page: 1, pageSize: 500, sort: 'partNumber', dir: 'asc' }), listScales(), listUsers()]);
+  const [audits, parts, scales, users] = await Promise.all([
+    listAudits(),
+    listParts({ page: 1, pageSize: 500, sort: 'partNumber', dir: 'asc' }),
+    listScales(),
+    listUsers(),
+  ]);
   const today = siteDay(await siteTimeZone());
   return (
     <div className="space-y-6">
@@ -34,7 +39,9 @@ export default async function AuditsPage() {
         />
       </div>
       <section aria-labelledby="audits-title" className="space-y-3">
-        <h2 id="audits-title" className="text-lg font-bold">Audits</h2>
+        <h2 id="audits-title" className="text-lg font-bold">
+          Audits
+        </h2>
         {audits.length === 0 ? <p className="card text-ink-soft">No audits yet.</p> : null}
         <ul className="grid gap-3 sm:grid-cols-2 xl:grid-cols-3">
           {audits.map((a) => (
@@ -44,11 +51,15 @@ export default async function AuditsPage() {
                   <span className="font-bold">Audit {a.id}</span>
                   <AuditVerdict status={a.status} verdict={a.verdict} />
                 </span>
-                <span className="block text-sm text-ink-soft">Counts from {a.population.from} to {a.population.to}</span>
+                <span className="block text-sm text-ink-soft">
+                  Counts from {a.population.from} to {a.population.to}
+                </span>
                 <span className="block num text-sm">
                   lot {a.lotSize} · {a.codeLetter} · n {a.sampleSize} · Ac {a.accept} / Re {a.reject}
                 </span>
-                <span className="block text-sm text-ink-faint">{a.counted} of {a.sampleSize} recounted</span>
+                <span className="block text-sm text-ink-faint">
+                  {a.counted} of {a.sampleSize} recounted
+                </span>
               </Link>
             </li>
           ))}

@@ -19,7 +19,7 @@ export function AccuracyChart({ rows }: { rows: AccuracyRow[] }) {
         {rows.map((r, i) => {
           const y = GAP + i * (BAR + GAP);
           const w = (r.errorRate / top) * plot;
-          const nc = ((r.nonconforming / r.recounts) / top) * plot;
+          const nc = (r.nonconforming / r.recounts / top) * plot;
           return (
             <g key={r.key}>
               <text x={LABEL - 8} y={y + BAR / 2} textAnchor="end" dominantBaseline="middle" className="fill-ink text-[13px]">
@@ -36,8 +36,14 @@ export function AccuracyChart({ rows }: { rows: AccuracyRow[] }) {
         })}
       </svg>
       <p className="mt-2 flex flex-wrap gap-4 text-xs text-ink-soft">
-        <span><span className="mr-1 inline-block size-3 rounded-sm bg-brass align-middle" />any difference</span>
-        <span><span className="mr-1 inline-block size-3 rounded-sm bg-fault align-middle" />outside ± U (nonconforming)</span>
+        <span>
+          <span className="mr-1 inline-block size-3 rounded-sm bg-brass align-middle" />
+          any difference
+        </span>
+        <span>
+          <span className="mr-1 inline-block size-3 rounded-sm bg-fault align-middle" />
+          outside ± U (nonconforming)
+        </span>
       </p>
     </figure>
   );

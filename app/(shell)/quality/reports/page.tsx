@@ -8,7 +8,12 @@ import { AccuracyTable } from './accuracy-table';
 
 export const metadata = { title: 'Accuracy report' };
 
-const GROUPINGS: Array<[ReportGrouping, string]> = [['part', 'Part'], ['operator', 'Operator'], ['scale', 'Scale'], ['week', 'ISO week']];
+const GROUPINGS: Array<[ReportGrouping, string]> = [
+  ['part', 'Part'],
+  ['operator', 'Operator'],
+  ['scale', 'Scale'],
+  ['week', 'ISO week'],
+];
 
 // The period and grouping live in the URL, so a report can be bookmarked or sent on.
 const querySchema = z.object({
@@ -32,22 +37,36 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
       </header>
       <form method="get" className="card grid gap-4 grid-cols-2 lg:grid-cols-[1fr_1fr_1fr_auto] lg:items-end" aria-label="Report period">
         <div>
-          <label htmlFor="r-from" className="field-label">Counted from</label>
+          <label htmlFor="r-from" className="field-label">
+            Counted from
+          </label>
           <input id="r-from" name="from" type="date" className="field" defaultValue={from} />
         </div>
         <div>
-          <label htmlFor="r-to" className="field-label">Counted to</label>
+          <label htmlFor="r-to" className="field-label">
+            Counted to
+          </label>
           <input id="r-to" name="to" type="date" className="field" defaultValue={to} />
         </div>
         <div>
-          <label htmlFor="r-by" className="field-label">Group by</label>
+          <label htmlFor="r-by" className="field-label">
+            Group by
+          </label>
           <select id="r-by" name="by" className="field" defaultValue={q.by}>
-            {GROUPINGS.map(([value, label]) => <option key={value} value={value}>{label}</option>)}
+            {GROUPINGS.map(([value, label]) => (
+              <option key={value} value={value}>
+                {label}
+              </option>
+            ))}
           </select>
         </div>
         <div className="flex gap-2">
-          <button type="submit" className="btn-primary">Show</button>
-          <a href={csv} className="btn-quiet" download>Download CSV</a>
+          <button type="submit" className="btn-primary">
+            Show
+          </button>
+          <a href={csv} className="btn-quiet" download>
+            Download CSV
+          </a>
         </div>
       </form>
       {rows.length === 0 ? (
@@ -59,7 +78,8 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
         </>
       )}
       <p className="text-xs text-ink-faint">
-        Error rate: share of recounts that differ at all. Nonconforming: hand count outside the count&apos;s own ± U, which is what an audit counts as a nonconforming item when it judges the lot by its ISO 2859-1 plan. Exact-flagged right: share of counts shown as exact that were.
+        Error rate: share of recounts that differ at all. Nonconforming: hand count outside the count&apos;s own ± U, which is what an audit counts as a
+        nonconforming item when it judges the lot by its ISO 2859-1 plan. Exact-flagged right: share of counts shown as exact that were.
       </p>
     </div>
   );

@@ -16,23 +16,40 @@ export function TestWeightBoard({ initial }: { initial: TestWeightDto[] }) {
           setNotice(`${w.identifier} added.`);
         }}
       />
-      <p role="status" aria-live="polite" className={notice ? 'text-sm text-ok' : 'sr-only'}>{notice}</p>
+      <p role="status" aria-live="polite" className={notice ? 'text-sm text-ok' : 'sr-only'}>
+        {notice}
+      </p>
       <div className="card p-0 overflow-x-auto">
         <table className="w-full text-sm" aria-label="Test weights">
           <thead className="bg-paper-deep text-left text-ink-soft">
             <tr>
-              <th scope="col" className="px-3 py-2">Identifier</th>
-              <th scope="col" className="px-3 py-2">Class</th>
-              <th scope="col" className="px-3 py-2 text-right">Nominal</th>
-              <th scope="col" className="px-3 py-2 text-right">MPE</th>
-              <th scope="col" className="px-3 py-2">Certificate</th>
-              <th scope="col" className="px-3 py-2">Due</th>
+              <th scope="col" className="px-3 py-2">
+                Identifier
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Class
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                Nominal
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                MPE
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Certificate
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Due
+              </th>
             </tr>
           </thead>
           <tbody>
             {weights.map((w) => (
               <tr key={w.id} className="border-t border-paper-line">
-                <td className="px-3 py-2.5 num font-medium">{w.identifier}{w.active ? '' : ' (retired)'}</td>
+                <td className="px-3 py-2.5 num font-medium">
+                  {w.identifier}
+                  {w.active ? '' : ' (retired)'}
+                </td>
                 <td className="px-3 py-2.5">{w.weightClass}</td>
                 <td className="px-3 py-2.5 num text-right whitespace-nowrap">{formatGrams(w.nominal)}</td>
                 <td className="px-3 py-2.5 num text-right whitespace-nowrap">{w.mpeMg === null ? '—' : `± ${w.mpeMg} mg`}</td>
@@ -47,7 +64,10 @@ export function TestWeightBoard({ initial }: { initial: TestWeightDto[] }) {
         </table>
         {weights.length === 0 ? <p className="p-4 text-ink-soft">No test weights yet.</p> : null}
       </div>
-      <p className="text-xs text-ink-faint">MPE: maximum permissible error of the weight's class, OIML R 111-1 Table 1. A test uses weights whose combined MPE is at most 1/3 of the scale&apos;s MPE at that load (OIML R 76-1 3.7.1). Overdue weights are flagged in the test record.</p>
+      <p className="text-xs text-ink-faint">
+        MPE: maximum permissible error of the weight's class, OIML R 111-1 Table 1. A test uses weights whose combined MPE is at most 1/3 of the scale&apos;s
+        MPE at that load (OIML R 76-1 3.7.1). Overdue weights are flagged in the test record.
+      </p>
     </div>
   );
 }

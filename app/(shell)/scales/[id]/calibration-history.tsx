@@ -26,11 +26,21 @@ function RecordCard({ record, by }: { record: CalibrationRecordDto; by: string }
           <caption className="sr-only">Weighing test points</caption>
           <thead className="text-left text-ink-soft">
             <tr>
-              <th scope="col" className="py-1 pr-3 text-right">Load</th>
-              <th scope="col" className="py-1 pr-3 text-right">Indication</th>
-              <th scope="col" className="py-1 pr-3 text-right">Error</th>
-              <th scope="col" className="py-1 pr-3 text-right">MPE</th>
-              <th scope="col" className="py-1">Result</th>
+              <th scope="col" className="py-1 pr-3 text-right">
+                Load
+              </th>
+              <th scope="col" className="py-1 pr-3 text-right">
+                Indication
+              </th>
+              <th scope="col" className="py-1 pr-3 text-right">
+                Error
+              </th>
+              <th scope="col" className="py-1 pr-3 text-right">
+                MPE
+              </th>
+              <th scope="col" className="py-1">
+                Result
+              </th>
             </tr>
           </thead>
           <tbody className="num">
@@ -38,9 +48,14 @@ function RecordCard({ record, by }: { record: CalibrationRecordDto; by: string }
               <tr key={i} className="border-t border-paper-line">
                 <td className="py-1 pr-3 text-right">{formatGrams(p.load)}</td>
                 <td className="py-1 pr-3 text-right">{formatGrams(p.indication)}</td>
-                <td className="py-1 pr-3 text-right">{p.error > 0 ? '+' : ''}{formatGrams(p.error)}</td>
+                <td className="py-1 pr-3 text-right">
+                  {p.error > 0 ? '+' : ''}
+                  {formatGrams(p.error)}
+                </td>
                 <td className="py-1 pr-3 text-right">± {formatGrams(p.mpe)}</td>
-                <td className="py-1 font-sans"><Verdict pass={p.pass} /></td>
+                <td className="py-1 font-sans">
+                  <Verdict pass={p.pass} />
+                </td>
               </tr>
             ))}
           </tbody>
@@ -49,18 +64,36 @@ function RecordCard({ record, by }: { record: CalibrationRecordDto; by: string }
       <dl className="mt-3 grid gap-x-6 gap-y-1 text-sm sm:grid-cols-2">
         <div>
           <dt className="inline text-ink-soft">Repeatability: </dt>
-          <dd className="inline">{v.repeatability ? <>range {formatGrams(v.repeatability.range)} of ± {formatGrams(v.repeatability.mpe)} · <Verdict pass={v.repeatability.pass} /></> : 'not tested'}</dd>
+          <dd className="inline">
+            {v.repeatability ? (
+              <>
+                range {formatGrams(v.repeatability.range)} of ± {formatGrams(v.repeatability.mpe)} · <Verdict pass={v.repeatability.pass} />
+              </>
+            ) : (
+              'not tested'
+            )}
+          </dd>
         </div>
         <div>
           <dt className="inline text-ink-soft">Eccentricity: </dt>
-          <dd className="inline">{v.eccentricity ? <>largest error {formatGrams(v.eccentricity.maxError)} of ± {formatGrams(v.eccentricity.mpe)} · <Verdict pass={v.eccentricity.pass} /></> : 'not tested'}</dd>
+          <dd className="inline">
+            {v.eccentricity ? (
+              <>
+                largest error {formatGrams(v.eccentricity.maxError)} of ± {formatGrams(v.eccentricity.mpe)} · <Verdict pass={v.eccentricity.pass} />
+              </>
+            ) : (
+              'not tested'
+            )}
+          </dd>
         </div>
       </dl>
       {record.weightProblems.length ? (
         <div className="mt-3 rounded-md bg-fault-light px-3 py-2 text-sm text-fault">
           <p className="font-medium">Test-weight problems</p>
           <ul className="list-disc pl-5">
-            {record.weightProblems.map((p) => <li key={p}>{p}</li>)}
+            {record.weightProblems.map((p) => (
+              <li key={p}>{p}</li>
+            ))}
           </ul>
         </div>
       ) : null}
@@ -74,7 +107,9 @@ export function CalibrationHistory({ records, names }: { records: CalibrationRec
   if (!records.length) return <p className="card text-ink-soft">No test has been recorded for this scale yet.</p>;
   return (
     <ol className="space-y-3" aria-label="Calibration history">
-      {records.map((r) => <RecordCard key={r.id} record={r} by={names[r.performedBy] ?? 'someone no longer listed'} />)}
+      {records.map((r) => (
+        <RecordCard key={r.id} record={r} by={names[r.performedBy] ?? 'someone no longer listed'} />
+      ))}
     </ol>
   );
 }

@@ -10,7 +10,9 @@ import { ConfirmBar, type PendingConfirm } from '../../../_components/confirm-ba
 import { toFormikErrors } from '../../../_components/field-errors';
 import { FormField, FormMessage } from '../../../_components/form-field';
 
-const schema = yup.object({ reason: yup.string().trim().min(5, 'Say why the scale is locked').max(300, 'At most 300 characters').required('Say why the scale is locked') });
+const schema = yup.object({
+  reason: yup.string().trim().min(5, 'Say why the scale is locked').max(300, 'At most 300 characters').required('Say why the scale is locked'),
+});
 
 // A hand lock-out (dropped, damaged, suspect readings). Only a passing test lifts it.
 export function LockScaleForm({ scaleId, locked }: { scaleId: number; locked: boolean }) {
@@ -48,7 +50,9 @@ export function LockScaleForm({ scaleId, locked }: { scaleId: number; locked: bo
           <p className="text-sm text-ink-soft">No one can capture counts on a locked scale. It returns to service when a passing test is recorded.</p>
           <FormField name="reason" label="Reason" autoComplete="off" placeholder="e.g. dropped while moving the bench" />
           <FormMessage message={message} />
-          <button type="submit" className="btn-danger" disabled={isSubmitting || pending !== null}>Lock out…</button>
+          <button type="submit" className="btn-danger" disabled={isSubmitting || pending !== null}>
+            Lock out…
+          </button>
           <ConfirmBar pending={pending} onDone={() => setPending(null)} />
         </ReadyForm>
       )}

@@ -44,10 +44,14 @@ export default async function ScalePage({ params }: { params: Promise<{ id: stri
   return (
     <div className="space-y-6">
       <header className="space-y-2">
-        <Link href="/scales" className="text-sm text-forge hover:underline">← All scales</Link>
+        <Link href="/scales" className="text-sm text-forge hover:underline">
+          ← All scales
+        </Link>
         <h1 className="page-title">{scale.name}</h1>
         <p className="text-ink-soft">{scale.location ?? 'No location recorded'}</p>
-        <div className="text-base"><ScaleStatus scale={scale} withReason /></div>
+        <div className="text-base">
+          <ScaleStatus scale={scale} withReason />
+        </div>
       </header>
       <section aria-label="Metrology" className="card">
         <dl className="grid gap-x-6 gap-y-2 grid-cols-2 lg:grid-cols-3">
@@ -62,18 +66,24 @@ export default async function ScalePage({ params }: { params: Promise<{ id: stri
       </section>
       {quality ? (
         <section aria-labelledby="record-title" className="space-y-3">
-          <h2 id="record-title" className="text-lg font-bold">Record a test</h2>
+          <h2 id="record-title" className="text-lg font-bold">
+            Record a test
+          </h2>
           <RecordTestForm scale={scale} weights={weights} />
           <LockScaleForm scaleId={scale.id} locked={scale.status === 'locked'} />
         </section>
       ) : null}
       <section aria-labelledby="history-title" className="space-y-3">
-        <h2 id="history-title" className="text-lg font-bold">Calibration history</h2>
+        <h2 id="history-title" className="text-lg font-bold">
+          Calibration history
+        </h2>
         <CalibrationHistory records={records} names={names} />
       </section>
       {can(user.role, 'admin.manage') ? (
         <section aria-labelledby="profile-title" className="space-y-3">
-          <h2 id="profile-title" className="text-lg font-bold">Profile</h2>
+          <h2 id="profile-title" className="text-lg font-bold">
+            Profile
+          </h2>
           <ScaleProfileForm scale={scale} />
         </section>
       ) : null}

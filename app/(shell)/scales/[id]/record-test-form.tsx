@@ -23,17 +23,40 @@ const load = yup.number().typeError('Load must be a number').moreThan(0, 'Load m
 const series = yup.object({ load, indications: yup.array(reading('Indication')).required() });
 
 const schema = yup.object({
-  performedAt: yup.string().matches(/^\d{4}-\d{2}-\d{2}$/, 'Date must be YYYY-MM-DD').required('Date is required'),
+  performedAt: yup
+    .string()
+    .matches(/^\d{4}-\d{2}-\d{2}$/, 'Date must be YYYY-MM-DD')
+    .required('Date is required'),
   points: yup
-    .array(yup.object({ load, indication: reading('Indication'), testWeightIds: yup.array(yup.number()).min(1, 'Pick the test weights that made up this load') }))
+    .array(
+      yup.object({ load, indication: reading('Indication'), testWeightIds: yup.array(yup.number()).min(1, 'Pick the test weights that made up this load') }),
+    )
     .min(1, 'At least one test point'),
   repeatability: yup.object().when('withRepeatability', { is: true, then: () => series }),
   eccentricity: yup.object().when('withEccentricity', { is: true, then: () => series }),
-  intervalDays: yup.number().typeError('Days must be a whole number').integer('Days must be a whole number').min(7, '7 to 730 days').max(730, '7 to 730 days').required('Interval is required'),
+  intervalDays: yup
+    .number()
+    .typeError('Days must be a whole number')
+    .integer('Days must be a whole number')
+    .min(7, '7 to 730 days')
+    .max(730, '7 to 730 days')
+    .required('Interval is required'),
   notes: yup.string().max(1000, 'At most 1 000 characters'),
 });
 
-function Series({ name, title, counts, countLabel, positionLabel }: { name: 'repeatability' | 'eccentricity'; title: string; counts: number[]; countLabel: string; positionLabel: string }) {
+function Series({
+  name,
+  title,
+  counts,
+  countLabel,
+  positionLabel,
+}: {
+  name: 'repeatability' | 'eccentricity';
+  title: string;
+  counts: number[];
+  countLabel: string;
+  positionLabel: string;
+}) {
   const { values, setFieldValue } = useFormikContext<TestValues>();
   const flag = name === 'repeatability' ? 'withRepeatability' : 'withEccentricity';
   const s = values[name];
@@ -49,9 +72,20 @@ function Series({ name, title, counts, countLabel, positionLabel }: { name: 'rep
           <div className="grid gap-3 grid-cols-2">
             <FormField name={`${name}.load`} label="Load (g)" inputMode="decimal" />
             <div>
-              <label htmlFor={`f-${name}-n`} className="field-label">{countLabel}</label>
-              <select id={`f-${name}-n`} className="field" value={s.indications.length} onChange={(e) => setFieldValue(`${name}.indications`, resize(s.indications, Number(e.target.value)))}>
-                {counts.map((n) => <option key={n} value={n}>{n}</option>)}
+              <label htmlFor={`f-${name}-n`} className="field-label">
+                {countLabel}
+              </label>
+              <select
+                id={`f-${name}-n`}
+                className="field"
+                value={s.indications.length}
+                onChange={(e) => setFieldValue(`${name}.indications`, resize(s.indications, Number(e.target.value)))}
+              >
+                {counts.map((n) => (
+                  <option key={n} value={n}>
+                    {n}
+                  </option>
+                ))}
               </select>
             </div>
           </div>
@@ -78,14 +112,22 @@ function Points({ weights, verdict }: { weights: TestWeightDto[]; verdict: Calib
               <div className="grid gap-3 grid-cols-[1fr_1fr_auto] items-start">
                 <FormField name={`points.${i}.load`} label={`Load ${i + 1} (g)`} inputMode="decimal" />
                 <FormField name={`points.${i}.indication`} label={`Indication ${i + 1} (g)`} inputMode="decimal" />
-                <button type="button" className="btn-quiet mt-6" onClick={() => arrayHelpers.remove(i)} aria-label={`Remove load ${i + 1}`} disabled={values.points.length === 1}>
+                <button
+                  type="button"
+                  className="btn-quiet mt-6"
+                  onClick={() => arrayHelpers.remove(i)}
+                  aria-label={`Remove load ${i + 1}`}
+                  disabled={values.points.length === 1}
+                >
                   Remove
                 </button>
               </div>
               <TestWeightPicker name={`points.${i}.testWeightIds`} load={Number(p.load)} weights={weights} mpe={verdict?.points[i]?.mpe ?? null} />
             </div>
           ))}
-          <button type="button" className="btn-quiet" onClick={() => arrayHelpers.push({ load: '', indication: '', testWeightIds: [] })}>Add a load</button>
+          <button type="button" className="btn-quiet" onClick={() => arrayHelpers.push({ load: '', indication: '', testWeightIds: [] })}>
+            Add a load
+          </button>
         </fieldset>
       )}
     </FieldArray>
@@ -93,7 +135,15 @@ function Points({ weights, verdict }: { weights: TestWeightDto[]; verdict: Calib
 }
 
 // One live verdict for the whole form, shared by the weight pickers (their 1/3-MPE hint) and the preview.
-function TestForm({ scale, values, children }: { scale: ScaleDto; values: TestValues; children: (verdict: CalibrationVerdict | null, problem: string | null) => ReactNode }) {
+function TestForm({
+  scale,
+  values,
+  children,
+}: {
+  scale: ScaleDto;
+  values: TestValues;
+  children: (verdict: CalibrationVerdict | null, problem: string | null) => ReactNode;
+}) {
   const { verdict, problem } = useLiveVerdict(evaluateBody(values, scale));
   return <>{children(verdict, problem)}</>;
 }
@@ -118,7 +168,11 @@ export function RecordTestForm({ scale, weights }: { scale: ScaleDto; weights: T
           return;
         }
         const r = res.data.record;
-        setOutcome(r.pass ? `Recorded: passed. ${scale.name} is in service until ${r.nextDueAt}.` : `Recorded: failed. ${scale.name} is locked out until a passing test.`);
+        setOutcome(
+          r.pass
+            ? `Recorded: passed. ${scale.name} is in service until ${r.nextDueAt}.`
+            : `Recorded: failed. ${scale.name} is locked out until a passing test.`,
+        );
         helpers.resetForm();
         router.refresh();
       }}
@@ -128,26 +182,56 @@ export function RecordTestForm({ scale, weights }: { scale: ScaleDto; weights: T
           {(verdict, problem) => (
             <ReadyForm noValidate className="card space-y-4" aria-label="Record a test">
               <div className="grid gap-4 lg:grid-cols-3">
-                <SelectField name="stage" label="Limits" options={[['in_service', 'In service (2 × MPE)'], ['initial', 'Initial verification']]} />
+                <SelectField
+                  name="stage"
+                  label="Limits"
+                  options={[
+                    ['in_service', 'In service (2 × MPE)'],
+                    ['initial', 'Initial verification'],
+                  ]}
+                />
                 <FormField name="performedAt" type="date" label="Tested on" />
-                <FormField name="intervalDays" label="Next test in (days)" inputMode="numeric" hint="6–12 months is common practice; your quality system decides." />
+                <FormField
+                  name="intervalDays"
+                  label="Next test in (days)"
+                  inputMode="numeric"
+                  hint="6–12 months is common practice; your quality system decides."
+                />
               </div>
-              {usable.length ? null : <p className="rounded-md bg-caution-light px-3 py-2 text-sm text-caution">No test weights are on file. Add them under Test weights first.</p>}
+              {usable.length ? null : (
+                <p className="rounded-md bg-caution-light px-3 py-2 text-sm text-caution">No test weights are on file. Add them under Test weights first.</p>
+              )}
               <Points weights={usable} verdict={verdict} />
-              <Series name="repeatability" title="Repeatability: the same load several times" counts={[2, 3, 4, 5, 6, 8, 10]} countLabel="Weighings" positionLabel="Weighing" />
+              <Series
+                name="repeatability"
+                title="Repeatability: the same load several times"
+                counts={[2, 3, 4, 5, 6, 8, 10]}
+                countLabel="Weighings"
+                positionLabel="Weighing"
+              />
               <Series name="eccentricity" title="Eccentricity: the load off centre" counts={[4, 5]} countLabel="Positions" positionLabel="Position" />
               <div className="flex flex-wrap gap-6">
-                <label className="inline-flex items-center gap-2"><Field type="checkbox" name="zeroOk" className="size-5" /> Zero setting works</label>
-                <label className="inline-flex items-center gap-2"><Field type="checkbox" name="tareOk" className="size-5" /> Tare works</label>
+                <label className="inline-flex items-center gap-2">
+                  <Field type="checkbox" name="zeroOk" className="size-5" /> Zero setting works
+                </label>
+                <label className="inline-flex items-center gap-2">
+                  <Field type="checkbox" name="tareOk" className="size-5" /> Tare works
+                </label>
               </div>
               <div>
-                <label htmlFor="f-notes" className="field-label">Notes</label>
+                <label htmlFor="f-notes" className="field-label">
+                  Notes
+                </label>
                 <Field as="textarea" id="f-notes" name="notes" rows={2} className="field py-2" />
               </div>
               <LiveVerdict verdict={verdict} problem={problem} zeroOk={values.zeroOk} tareOk={values.tareOk} />
               <FormMessage message={message} />
-              <p role="status" aria-live="polite" className="text-sm font-medium" data-testid="test-outcome">{outcome}</p>
-              <button type="submit" className="btn-primary" disabled={isSubmitting || !usable.length}>{isSubmitting ? 'Saving…' : 'Save test record'}</button>
+              <p role="status" aria-live="polite" className="text-sm font-medium" data-testid="test-outcome">
+                {outcome}
+              </p>
+              <button type="submit" className="btn-primary" disabled={isSubmitting || !usable.length}>
+                {isSubmitting ? 'Saving…' : 'Save test record'}
+              </button>
             </ReadyForm>
           )}
         </TestForm>

@@ -49,7 +49,8 @@ const filled = (xs: string[]) => xs.length > 0 && xs.every((x) => x.trim() !== '
 // The part of the test the evaluate endpoint can judge, or null until every point has an indication.
 export function evaluateBody(v: TestValues, scale: ScaleDto) {
   if (!v.points.length || !v.points.every((p) => filled([p.load, p.indication]))) return null;
-  const series = (s: { load: string; indications: string[] }) => (filled([s.load, ...s.indications]) ? { load: Number(s.load), indications: s.indications.map(Number) } : null);
+  const series = (s: { load: string; indications: string[] }) =>
+    filled([s.load, ...s.indications]) ? { load: Number(s.load), indications: s.indications.map(Number) } : null;
   return {
     accuracyClass: scale.accuracyClass,
     verificationInterval: scale.verificationInterval,

@@ -17,18 +17,28 @@ export function TestWeightPicker({ name, load, weights, mpe }: { name: string; l
       <legend className="field-label">Test weights for {formatGrams(load)}</legend>
       <div className="flex flex-wrap gap-1.5">
         {weights.map((w) => (
-          <label key={w.id} className={`inline-flex min-h-9 cursor-pointer items-center gap-1.5 rounded-md border px-2 text-sm ${field.value.includes(w.id) ? 'border-forge bg-forge-light' : 'border-paper-line bg-white'}`}>
+          <label
+            key={w.id}
+            className={`inline-flex min-h-9 cursor-pointer items-center gap-1.5 rounded-md border px-2 text-sm ${field.value.includes(w.id) ? 'border-forge bg-forge-light' : 'border-paper-line bg-white'}`}
+          >
             <input type="checkbox" checked={field.value.includes(w.id)} onChange={() => toggle(w.id)} onBlur={() => helpers.setTouched(true)} />
             <span className="num">{w.identifier}</span>
-            <span className="text-ink-faint">{formatGrams(w.nominal)} {w.weightClass}{w.overdue ? ' · overdue' : ''}</span>
+            <span className="text-ink-faint">
+              {formatGrams(w.nominal)} {w.weightClass}
+              {w.overdue ? ' · overdue' : ''}
+            </span>
           </label>
         ))}
       </div>
       <p className={`mt-1 text-xs ${chosen.length && Math.abs(total - load) > 1e-9 ? 'text-caution' : 'text-ink-faint'}`}>
         {chosen.length ? `Chosen weights add up to ${formatGrams(total)}` : 'None chosen yet'}
-        {chosen.length && mpe !== null ? `; their MPE ${Math.round(weightsMpeG * 1e6) / 1000} mg ${weightsMpeG <= mpe / 3 ? 'is within' : 'exceeds'} 1/3 of the scale's MPE (OIML R 111 Table 1, R 76-1 3.7.1)` : ''}
+        {chosen.length && mpe !== null
+          ? `; their MPE ${Math.round(weightsMpeG * 1e6) / 1000} mg ${weightsMpeG <= mpe / 3 ? 'is within' : 'exceeds'} 1/3 of the scale's MPE (OIML R 111 Table 1, R 76-1 3.7.1)`
+          : ''}
       </p>
-      <p id={errorId} className="field-error" aria-live="polite">{meta.touched && typeof meta.error === 'string' ? meta.error : null}</p>
+      <p id={errorId} className="field-error" aria-live="polite">
+        {meta.touched && typeof meta.error === 'string' ? meta.error : null}
+      </p>
     </fieldset>
   );
 }

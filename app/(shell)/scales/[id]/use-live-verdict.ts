@@ -8,7 +8,11 @@ import { apiFetch } from '../../../_components/api-client';
 // and only the answer to the newest body is kept.
 export function useLiveVerdict(body: object | null): { verdict: CalibrationVerdict | null; problem: string | null } {
   const key = body ? JSON.stringify(body) : null;
-  const [state, setState] = useState<{ key: string | null; verdict: CalibrationVerdict | null; problem: string | null }>({ key: null, verdict: null, problem: null });
+  const [state, setState] = useState<{ key: string | null; verdict: CalibrationVerdict | null; problem: string | null }>({
+    key: null,
+    verdict: null,
+    problem: null,
+  });
   useEffect(() => {
     if (!key) return;
     let current = true;

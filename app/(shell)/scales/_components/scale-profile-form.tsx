@@ -14,9 +14,14 @@ import { FormField, FormMessage } from '../../../_components/form-field';
 import { SelectField } from '../../../_components/select-field';
 import { BAUD_RATES, CONNECTION_KINDS, profileBody, profileFieldErrors, profileValues, type ProfileValues } from './scale-profile-values';
 
-const positive = (label: string) => yup.number().typeError(`${label} must be a number`).moreThan(0, `${label} must be above 0`).required(`${label} is required`);
+const positive = (label: string) =>
+  yup.number().typeError(`${label} must be a number`).moreThan(0, `${label} must be above 0`).required(`${label} is required`);
 const optionalNumber = (label: string) =>
-  yup.number().transform((v, raw) => (raw === '' ? undefined : v)).typeError(`${label} must be a number`).min(0, `${label} cannot be negative`);
+  yup
+    .number()
+    .transform((v, raw) => (raw === '' ? undefined : v))
+    .typeError(`${label} must be a number`)
+    .min(0, `${label} cannot be negative`);
 const forKind = (kind: string, rule: yup.AnySchema) => yup.mixed().when('kind', { is: kind, then: () => rule, otherwise: (s) => s.notRequired() });
 
 const schema = yup.object({
@@ -32,7 +37,10 @@ const schema = yup.object({
   repeatability: optionalNumber('s_r'),
   fullScaleVolts: forKind('raw_adc', positive('Full-scale voltage')),
   gain: forKind('raw_adc', positive('Gain')),
-  bits: forKind('raw_adc', yup.number().typeError('Bits must be a number').integer('Whole bits').min(8, '8 to 32 bits').max(32, '8 to 32 bits').required('Bits are required')),
+  bits: forKind(
+    'raw_adc',
+    yup.number().typeError('Bits must be a number').integer('Whole bits').min(8, '8 to 32 bits').max(32, '8 to 32 bits').required('Bits are required'),
+  ),
   pollIntervalMs: forKind('serial', yup.number().typeError('A whole number of ms').integer().min(50, '50 to 5 000 ms').max(5000, '50 to 5 000 ms')),
 });
 
@@ -57,13 +65,47 @@ function ConnectionFields() {
     return (
       <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
         <SelectField name="baudRate" label="Baud rate" options={BAUD_RATES.map((b) => [String(b), String(b)])} />
-        <SelectField name="dataBits" label="Data bits" options={[['8', '8'], ['7', '7']]} />
-        <SelectField name="parity" label="Parity" options={[['none', 'none'], ['even', 'even'], ['odd', 'odd']]} />
-        <SelectField name="stopBits" label="Stop bits" options={[['1', '1'], ['2', '2']]} />
+        <SelectField
+          name="dataBits"
+          label="Data bits"
+          options={[
+            ['8', '8'],
+            ['7', '7'],
+          ]}
+        />
+        <SelectField
+          name="parity"
+          label="Parity"
+          options={[
+            ['none', 'none'],
+            ['even', 'even'],
+            ['odd', 'odd'],
+          ]}
+        />
+        <SelectField
+          name="stopBits"
+          label="Stop bits"
+          options={[
+            ['1', '1'],
+            ['2', '2'],
+          ]}
+        />
         <div className="sm:col-span-2">
-          <SelectField name="lineFormat" label="Line format" options={LINE_PROFILES.map((p) => [p.name, p.name])} hint={LINE_PROFILES.find((p) => p.name === values.lineFormat)?.description} />
+          <SelectField
+            name="lineFormat"
+            label="Line format"
+            options={LINE_PROFILES.map((p) => [p.name, p.name])}
+            hint={LINE_PROFILES.find((p) => p.name === values.lineFormat)?.description}
+          />
         </div>
-        <SelectField name="mode" label="Mode" options={[['continuous', 'Scale sends continuously'], ['polled', 'Tallyforge asks each time']]} />
+        <SelectField
+          name="mode"
+          label="Mode"
+          options={[
+            ['continuous', 'Scale sends continuously'],
+            ['polled', 'Tallyforge asks each time'],
+          ]}
+        />
         <FormField name="pollIntervalMs" label="Poll every (ms)" inputMode="numeric" />
         {values.mode === 'polled' ? <FormField name="pollRequest" label="Poll request" hint="Printable ASCII; write line ends as \r and \n." /> : null}
       </div>
@@ -130,7 +172,9 @@ export function ScaleProfileForm({ scale }: { scale?: ScaleDto }) {
           <SelectField name="kind" label="Connection" options={CONNECTION_KINDS} />
           <ConnectionFields />
           <FormMessage message={message} />
-          <p role="status" aria-live="polite" className="text-sm text-ok">{saved}</p>
+          <p role="status" aria-live="polite" className="text-sm text-ok">
+            {saved}
+          </p>
           <button type="submit" className="btn-primary" disabled={isSubmitting}>
             {isSubmitting ? 'Saving…' : scale ? 'Save profile' : 'Add scale'}
           </button>

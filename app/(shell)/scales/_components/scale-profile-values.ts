@@ -91,7 +91,14 @@ function connectionBody(v: ProfileValues, previous?: ScaleConnection): ScaleConn
         pollIntervalMs: num(v.pollIntervalMs),
       };
     case 'raw_adc':
-      return { kind: 'raw_adc', bits: num(v.bits), fullScaleVolts: num(v.fullScaleVolts), gain: num(v.gain), averaging: num(v.averaging), reversedExcitation: v.reversedExcitation };
+      return {
+        kind: 'raw_adc',
+        bits: num(v.bits),
+        fullScaleVolts: num(v.fullScaleVolts),
+        gain: num(v.gain),
+        averaging: num(v.averaging),
+        reversedExcitation: v.reversedExcitation,
+      };
     case 'keyed':
       return { kind: 'keyed' };
   }

@@ -5,4 +5,6 @@ import { listAudits } from '@/server/services/audits/get-audit';
 
 export const GET = route({ access: 'audits.run' }, async () => ({ audits: await listAudits() }));
 
-export const POST = route({ access: 'audits.run', body: createAuditSchema }, async ({ body, user }) => created({ audit: await createAudit({ input: body, by: user }) }));
+export const POST = route({ access: 'audits.run', body: createAuditSchema }, async ({ body, user }) =>
+  created({ audit: await createAudit({ input: body, by: user }) }),
+);

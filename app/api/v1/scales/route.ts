@@ -5,6 +5,4 @@ import { listScales } from '@/server/services/scales/list-scales';
 
 export const GET = route({ access: 'catalog.read' }, async () => ({ scales: await listScales() }));
 
-export const POST = route({ access: 'admin.manage', body: createScaleSchema }, async ({ body }) =>
-  created({ scale: await createScale({ input: body }) }),
-);
+export const POST = route({ access: 'admin.manage', body: createScaleSchema }, async ({ body }) => created({ scale: await createScale({ input: body }) }));

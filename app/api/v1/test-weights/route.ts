@@ -4,4 +4,6 @@ import { createTestWeight, listTestWeights } from '@/server/services/calibration
 
 export const GET = route({ access: 'catalog.read' }, async () => ({ testWeights: await listTestWeights() }));
 
-export const POST = route({ access: 'calibration.manage', body: createTestWeightSchema }, async ({ body }) => created({ testWeight: await createTestWeight({ input: body }) }));
+export const POST = route({ access: 'calibration.manage', body: createTestWeightSchema }, async ({ body }) =>
+  created({ testWeight: await createTestWeight({ input: body }) }),
+);

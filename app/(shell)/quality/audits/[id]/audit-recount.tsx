@@ -8,14 +8,29 @@ import { useSiteTime } from '../../../../_components/site-time';
 import { AuditVerdict } from '../audit-verdict';
 import { ItemVerdict } from './item-verdict';
 
-const handCount = yup.number().typeError('A whole number of pieces').integer('A whole number of pieces').min(0, 'Cannot be negative').required('Enter the hand count');
+const handCount = yup
+  .number()
+  .typeError('A whole number of pieces')
+  .integer('A whole number of pieces')
+  .min(0, 'Cannot be negative')
+  .required('Enter the hand count');
 
 // One input per selected count. Enter saves the recount and moves to the next item, so a whole
 // audit can be keyed in without the mouse.
-export function AuditRecount({ initial, scaleNames, operatorNames }: { initial: AuditDto; scaleNames: Record<number, string>; operatorNames: Record<number, string> }) {
+export function AuditRecount({
+  initial,
+  scaleNames,
+  operatorNames,
+}: {
+  initial: AuditDto;
+  scaleNames: Record<number, string>;
+  operatorNames: Record<number, string>;
+}) {
   const { when } = useSiteTime();
   const [audit, setAudit] = useState(initial);
-  const [drafts, setDrafts] = useState<Record<number, string>>(() => Object.fromEntries(initial.items.map((i) => [i.id, i.handCount === null ? '' : String(i.handCount)])));
+  const [drafts, setDrafts] = useState<Record<number, string>>(() =>
+    Object.fromEntries(initial.items.map((i) => [i.id, i.handCount === null ? '' : String(i.handCount)])),
+  );
   const [errors, setErrors] = useState<Record<number, string>>({});
   const [saving, setSaving] = useState<number | null>(null);
   const inputs = useRef<Array<HTMLInputElement | null>>([]);
@@ -32,7 +47,11 @@ export function AuditRecount({ initial, scaleNames, operatorNames }: { initial: 
       setErrors((x) => ({ ...x, [item.id]: (e as yup.ValidationError).message }));
       return;
     }
-    const next = () => inputs.current.slice(index + 1).find((el) => el && !el.disabled)?.focus();
+    const next = () =>
+      inputs.current
+        .slice(index + 1)
+        .find((el) => el && !el.disabled)
+        ?.focus();
     if (item.handCount === value) return next();
     setSaving(item.id);
     const res = await apiFetch<{ audit: AuditDto }>(`/api/v1/audits/${audit.id}/items/${item.id}`, { method: 'PUT', body: { handCount: value } });
@@ -54,7 +73,11 @@ export function AuditRecount({ initial, scaleNames, operatorNames }: { initial: 
 
   return (
     <div className="space-y-4">
-      <section aria-label="Lot verdict" className={`card ${closed ? (audit.verdict === 'accepted' ? 'border-ok' : 'border-fault') : ''}`} data-testid="lot-verdict">
+      <section
+        aria-label="Lot verdict"
+        className={`card ${closed ? (audit.verdict === 'accepted' ? 'border-ok' : 'border-fault') : ''}`}
+        data-testid="lot-verdict"
+      >
         <div className="flex flex-wrap items-center justify-between gap-2">
           <p className="font-bold">
             {closed
@@ -75,11 +98,21 @@ export function AuditRecount({ initial, scaleNames, operatorNames }: { initial: 
         <table className="w-full text-sm" aria-label="Counts to recount">
           <thead className="bg-paper-deep text-left text-ink-soft">
             <tr>
-              <th scope="col" className="px-3 py-2">#</th>
-              <th scope="col" className="px-3 py-2">Count</th>
-              <th scope="col" className="px-3 py-2 text-right">Scale count</th>
-              <th scope="col" className="px-3 py-2">Hand count</th>
-              <th scope="col" className="px-3 py-2 hidden lg:table-cell">Result</th>
+              <th scope="col" className="px-3 py-2">
+                #
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Count
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                Scale count
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Hand count
+              </th>
+              <th scope="col" className="px-3 py-2 hidden lg:table-cell">
+                Result
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -89,7 +122,9 @@ export function AuditRecount({ initial, scaleNames, operatorNames }: { initial: 
                 <td className="px-3 py-2.5">
                   <span className="block font-medium">{item.partNumber}</span>
                   <span className="block whitespace-nowrap">{when(item.countedAt)}</span>
-                  <span className="block text-ink-faint">{scaleNames[item.scaleId] ?? `scale ${item.scaleId}`} · {operatorNames[item.operatorId] ?? 'unknown'}</span>
+                  <span className="block text-ink-faint">
+                    {scaleNames[item.scaleId] ?? `scale ${item.scaleId}`} · {operatorNames[item.operatorId] ?? 'unknown'}
+                  </span>
                 </td>
                 <td className="px-3 py-2.5 num text-right whitespace-nowrap">
                   {item.exact ? `${item.count} pcs, exact` : `${item.count} ± ${item.wholePieceRange} pcs`}
@@ -111,11 +146,17 @@ export function AuditRecount({ initial, scaleNames, operatorNames }: { initial: 
                     onChange={(e) => setDrafts((d) => ({ ...d, [item.id]: e.target.value }))}
                     onKeyDown={onKey(item, index)}
                   />
-                  <p id={`hand-${item.id}-error`} className="field-error" aria-live="polite">{errors[item.id] || null}</p>
+                  <p id={`hand-${item.id}-error`} className="field-error" aria-live="polite">
+                    {errors[item.id] || null}
+                  </p>
                   {/* On narrow screens the result sits under the input instead of in a column off to the side. */}
-                  <span className="lg:hidden"><ItemVerdict item={item} /></span>
+                  <span className="lg:hidden">
+                    <ItemVerdict item={item} />
+                  </span>
                 </td>
-                <td className="px-3 py-2.5 hidden lg:table-cell"><ItemVerdict item={item} /></td>
+                <td className="px-3 py-2.5 hidden lg:table-cell">
+                  <ItemVerdict item={item} />
+                </td>
               </tr>
             ))}
           </tbody>

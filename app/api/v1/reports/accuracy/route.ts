@@ -13,7 +13,27 @@ const query = z.object({
 export const GET = route({ access: 'audits.run', query }, async ({ query: q }) => {
   const rows = await accuracyReport(q);
   if (q.format === 'json') return { rows };
-  const header = ['group', 'recounts', 'nonconforming', 'error_rate', 'mean_abs_error_pcs', 'mean_abs_error_pct', 'exact_flagged', 'exact_right', 'exact_right_share'];
-  const body = rows.map((r) => [r.label, r.recounts, r.nonconforming, r.errorRate, r.meanAbsError, r.meanAbsErrorPct, r.exactFlagged, r.exactRight, r.exactRightShare ?? '']);
+  const header = [
+    'group',
+    'recounts',
+    'nonconforming',
+    'error_rate',
+    'mean_abs_error_pcs',
+    'mean_abs_error_pct',
+    'exact_flagged',
+    'exact_right',
+    'exact_right_share',
+  ];
+  const body = rows.map((r) => [
+    r.label,
+    r.recounts,
+    r.nonconforming,
+    r.errorRate,
+    r.meanAbsError,
+    r.meanAbsErrorPct,
+    r.exactFlagged,
+    r.exactRight,
+    r.exactRightShare ?? '',
+  ]);
   return csvResponse(header, body, `accuracy-by-${q.by}-${q.from}-to-${q.to}.csv`);
 });

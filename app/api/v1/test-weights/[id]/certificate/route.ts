@@ -6,7 +6,11 @@ import { readCertificate, saveCertificate } from '@/server/services/calibration/
 export const GET = route({ access: 'catalog.read', params: idParamSchema }, async ({ params }) => {
   const { bytes, identifier } = await readCertificate({ testWeightId: params.id });
   return new Response(new Uint8Array(bytes), {
-    headers: { 'Content-Type': 'application/pdf', 'Content-Disposition': `inline; filename="certificate-${identifier}.pdf"`, 'X-Content-Type-Options': 'nosniff' },
+    headers: {
+      'Content-Type': 'application/pdf',
+      'Content-Disposition': `inline; filename="certificate-${identifier}.pdf"`,
+      'X-Content-Type-Options': 'nosniff',
+    },
   });
 });
 
