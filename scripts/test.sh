@@ -1,10 +1,16 @@
 #!/usr/bin/env bash
-# npm test: the whole suite against its own MariaDB (port 3308, fresh database each run),
+# npm test: the static checks, then the whole suite against its own MariaDB (port 3308, fresh database each run),
 # a fresh production build, and Debian's Chromium for the browser tests.
 source "$(dirname "$0")/lib.sh"
 cd "$ROOT"
 
 ensure_node_modules
+# The whole suite starts with the static checks (npm run check): lint with the import boundaries, the
+# format, and the types. A run of chosen tests (npm test -- <files>) skips them.
+if [ $# -eq 0 ]; then
+  log "checking lint, format and types (npm run check)"
+  bash "$ROOT/scripts/check.sh" || exit 1
+fi
 ensure_mariadb
 missing=()
 [ -x /usr/bin/chromium ] || missing+=(chromium)
