@@ -6,7 +6,7 @@ export interface ElementString {
 
 // AIs whose length is predefined by their first two digits and so never need a separator after them:
 // 00–04, 11–20, 31–36, 41 (GS1 General Specifications, table of predefined-length element strings;
-// as listed in REFERENCES.md).
+// as listed in docs/references.md).
 const PREDEFINED_LENGTH = /^(0[0-4]|1[1-9]|20|3[1-6]|41)/;
 export const GROUP_SEPARATOR = '\x1d';
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { can, ROLE_PERMISSIONS, ROLES } from './roles';
 
-// The expected grid is copied from the role table in the architecture notes (DESIGN.md),
+// The expected grid is copied from the role table in the architecture notes (docs/architecture.md),
 // so a change to lib/roles.ts that drifts from the agreed design fails here.
 const designTable: Record<string, string> = {
   'catalog.read': 'operator planner clerk quality admin',

@@ -1,7 +1,7 @@
 /**
  * NIST Handbook 44 (§2.20 Scales), Table 6: maintenance tolerances in divisions e by test load
  * in divisions; acceptance tolerances are one half of maintenance (T.N.3.2).
- * Class III as reproduced; classes I, II and IIII from memory (see REFERENCES.md).
+ * Class III as reproduced; classes I, II and IIII from memory (see docs/references.md).
  */
 import type { AccuracyClass } from './accuracy-class';
 

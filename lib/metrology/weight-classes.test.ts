@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { weightMpeMg } from './weight-classes';
 
-// OIML R 111-1:2004 Table 1 (as reproduced in REFERENCES.md), ± mg.
+// OIML R 111-1:2004 Table 1 (as reproduced in docs/references.md), ± mg.
 describe('MPE of weights (OIML R 111-1:2004 Table 1)', () => {
   it.each([
     [1, [0.03, 0.1, 0.3, 1.0, 3.0]],

@@ -1,6 +1,6 @@
 /**
  * Maximum permissible errors of weights, OIML R 111-1:2004 Table 1, in mg.
- * The 1 g, 10 g, 100 g, 200 g, 500 g and 1–20 kg rows are as reproduced in REFERENCES.md;
+ * The 1 g, 10 g, 100 g, 200 g, 500 g and 1–20 kg rows are as reproduced in docs/references.md;
  * the 2 g, 5 g, 20 g, 50 g and 50 kg rows and class M3 follow the same table from memory.
  */
 export type WeightClass = 'E2' | 'F1' | 'F2' | 'M1' | 'M2' | 'M3';

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { codeLetter, samplingPlan, sampleSizeFor } from './iso2859';
 
 describe('ISO 2859-1 sample-size code letters (Table 1), general inspection level II', () => {
-  // Every lot-size boundary of Table 1, as reproduced in REFERENCES.md.
+  // Every lot-size boundary of Table 1, as reproduced in docs/references.md.
   it.each([
     [2, 'A'],
     [8, 'A'],

@@ -1,7 +1,7 @@
 /**
  * Single sampling plans for normal inspection, ISO 2859-1 (equivalently ANSI/ASQ Z1.4):
  * Table 1 (sample-size code letters) and Table 2-A (master table). Level II letters and the
- * master table's pattern are as reproduced in REFERENCES.md; levels I and III from memory.
+ * master table's pattern are as reproduced in docs/references.md; levels I and III from memory.
  */
 export type InspectionLevel = 'I' | 'II' | 'III';
 export const AQLS = [0.065, 0.1, 0.15, 0.25, 0.4, 0.65, 1.0, 1.5, 2.5, 4.0, 6.5] as const;

@@ -7,7 +7,7 @@ describe('uncertainty', () => {
     expect(resolutionUncertainty(0.01)).toBeCloseTo(0.0028868, 7);
   });
 
-  // GUM F.2.2.1 applied twice (gross and zero): d·√(2/12) = d/√6 ≈ 0.408 d (REFERENCES.md).
+  // GUM F.2.2.1 applied twice (gross and zero): d·√(2/12) = d/√6 ≈ 0.408 d (docs/references.md).
   it('gives d/√6 for a net weight from two rounded indications when repeatability is unknown', () => {
     expect(netWeightUncertainty({ division: 0.1 })).toBeCloseTo(0.040825, 6);
     expect(netWeightUncertainty({ division: 1 }) / 1).toBeCloseTo(1 / Math.sqrt(6), 12);

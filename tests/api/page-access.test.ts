@@ -8,7 +8,7 @@ const printers: Role[] = ['planner', 'clerk', 'admin'];
 const quality: Role[] = ['quality', 'admin'];
 const admin: Role[] = ['admin'];
 
-// Who may open each page, written out from the permission table of the architecture (DESIGN.md), not
+// Who may open each page, written out from the permission table of the architecture (docs/architecture.md), not
 // read from the app's own navigation. A detail page (of no such record) is only checked for its 403.
 const PAGES: Array<[path: string, allowed: readonly Role[], detail?: true]> = [
   ['/', everyone],

@@ -27,7 +27,7 @@ describe('JCGM 100:2008 and NIST TN 1297', () => {
     expect(sd(errors) / resolutionUncertainty(d)).toBeCloseTo(1, 1);
   });
 
-  // REFERENCES.md: a net reading from two rounded indications has u = d/√6 ≈ 0.41 d.
+  // docs/references.md (GUM F.2.2.1): a net reading from two rounded indications has u = d/√6 ≈ 0.41 d.
   it('matches the scatter of a net weight taken as gross minus a rounded zero', () => {
     const d = 0.01;
     const nets = Array.from({ length: 50000 }, () => {
